@@ -1,0 +1,10 @@
+export { QUANTITIES, QUANTITY_INFO, PLAIN_QUANTITIES, METRIC_PREFERENCES, displayUnits } from "./quantities";
+export type { Quantity, QuantityInfo, UnitChoice, UnitPreferences } from "./quantities";
+export { parseQuantity } from "./parse";
+export type { ParseResult, ParseOptions } from "./parse";
+export { formatQuantity, formatNumber, toDisplay, fromStorage } from "./format";
+export type { DisplayValue, FormatOptions } from "./format";
+export { unitField, checkBounds } from "./zod-field";
+export type { UnitFieldOptions, UnitInput } from "./zod-field";
+export { fieldErrors, formatPath, describeFieldError } from "./issues";
+export type { FieldError } from "./issues";

@@ -1,0 +1,19 @@
+// Loads the demo scenario (idempotent): run by npm start and npm test, or `npm run db:seed`.
+import { loadEnvFile } from "./load-env";
+
+loadEnvFile();
+
+async function main(): Promise<void> {
+  const { seedAccounts, DEMO_ACCOUNTS } = await import("@/db/seed/accounts");
+  const { pool } = await import("@/db/client");
+  const password = process.env.DEMO_PASSWORD;
+  if (!password || password.length < 10) throw new Error("DEMO_PASSWORD (at least 10 characters) is not set; run scripts/env.sh");
+  await seedAccounts(password);
+  await pool().end();
+  console.log(`[seed] ${DEMO_ACCOUNTS.length} demo accounts ready`);
+}
+
+main().catch((error: unknown) => {
+  console.error("[seed] failed:", error instanceof Error ? error.message : error);
+  process.exit(1);
+});

@@ -1,0 +1,50 @@
+import "server-only";
+import { Mysql2Adapter } from "@lucia-auth/adapter-mysql";
+import { Lucia, TimeSpan } from "lucia";
+import { pool } from "@/db/client";
+import type { Role } from "@/db/schema";
+import { env } from "@/lib/env";
+
+// Lucia v3 is kept inside this one module (and session.ts) so it can be swapped later.
+function createLucia() {
+  const adapter = new Mysql2Adapter(pool(), { user: "user", session: "user_session" });
+  return new Lucia(adapter, {
+    sessionExpiresIn: new TimeSpan(30, "d"),
+    sessionCookie: {
+      name: "sinkwise_session",
+      expires: false,
+      attributes: {
+        secure: env().APP_URL.startsWith("https://"),
+        sameSite: "lax",
+      },
+    },
+    getUserAttributes: (row) => ({
+      email: row.email,
+      displayName: row.display_name,
+      role: row.role,
+      lengthUnits: row.length_units,
+      temperatureUnit: row.temperature_unit,
+    }),
+  });
+}
+
+type SinkwiseLucia = ReturnType<typeof createLucia>;
+const holder = globalThis as unknown as { sinkwiseLucia?: SinkwiseLucia };
+
+export function lucia(): SinkwiseLucia {
+  holder.sinkwiseLucia ??= createLucia();
+  return holder.sinkwiseLucia;
+}
+
+declare module "lucia" {
+  interface Register {
+    Lucia: SinkwiseLucia;
+    DatabaseUserAttributes: {
+      email: string;
+      display_name: string;
+      role: Role;
+      length_units: "metric" | "imperial";
+      temperature_unit: "C" | "F";
+    };
+  }
+}

@@ -89,7 +89,8 @@ export function parseQuantity(input: string | number, quantity: Quantity, option
   const text = input.trim();
   if (text === "") return fail("required");
   const bareOption = options.bareUnit ?? QUANTITY_INFO[quantity].bare;
-  const bare = typeof bareOption === "string" ? bareOption : bareOption.math;
+  // Bare units come from headers people type too ("[°F]"), so they get the same respelling.
+  const bare = normaliseUnitText(typeof bareOption === "string" ? bareOption : bareOption.math);
 
   if (BARE_NUMBER.test(text)) {
     const value = Number(text);

@@ -50,7 +50,8 @@ export function AuthForm({ action, fields, submitLabel, redirectTo, extra }: Pro
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {fields.map((f) => {
-        const fieldError = error && error.path === f.name ? error.message : null;
+        // The API names the field in its message ("password: …"); beside the field that is redundant.
+        const fieldError = error && error.path === f.name ? error.message.replace(`${f.name}: `, "") : null;
         return (
           <label key={f.name} className="block text-sm">
             <span className="mb-1 block font-medium">{f.label}</span>

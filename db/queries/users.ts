@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
-import { and, asc, eq, gt, isNull, sql } from "drizzle-orm";
+import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import { db, mysqlErrorCode } from "../client";
 import { passwordResetTokens, type Role, userSessions, users } from "../schema";
 
@@ -107,12 +107,4 @@ export async function consumePasswordResetToken({
     await tx.delete(userSessions).where(eq(userSessions.userId, row.userId));
     return "ok";
   });
-}
-
-/** Test and maintenance helper: makes a token look older than it is. */
-export async function expireResetTokensOf({ userId }: { userId: string }): Promise<void> {
-  await db()
-    .update(passwordResetTokens)
-    .set({ expiresAt: new Date(Date.now() - 1000) })
-    .where(and(eq(passwordResetTokens.userId, userId), gt(passwordResetTokens.expiresAt, new Date(0))));
 }

@@ -1,0 +1,79 @@
+import { toCelsius, ZERO_CELSIUS_K } from "./constants";
+import { AIR_TABLE, AIR_TABLE_SOURCE } from "./data/air-table";
+
+export interface AirProperties {
+  temperatureK: number;
+  densityKgPerM3: number;
+  specificHeatJPerKgK: number;
+  conductivityWPerMK: number;
+  diffusivityM2PerS: number;
+  kinematicViscosityM2PerS: number;
+  prandtl: number;
+  /** Ideal gas: β = 1/T. */
+  expansionPerK: number;
+  inTable: boolean;
+  source: string;
+}
+
+const FIRST = AIR_TABLE[0]!;
+const LAST = AIR_TABLE[AIR_TABLE.length - 1]!;
+
+function fromRow(row: readonly number[], tK: number, inTable: boolean): AirProperties {
+  return {
+    temperatureK: tK,
+    densityKgPerM3: row[1]!,
+    specificHeatJPerKgK: row[2]!,
+    conductivityWPerMK: row[3]!,
+    diffusivityM2PerS: row[4]!,
+    kinematicViscosityM2PerS: row[6]!,
+    prandtl: row[7]!,
+    expansionPerK: 1 / tK,
+    inTable,
+    source: AIR_TABLE_SOURCE,
+  };
+}
+
+/**
+ * Air properties at a temperature, linearly interpolated between the table's rows.
+ * Outside the table the end row is scaled (ρ ∝ 1/T as an ideal gas; k ∝ T^0.8, μ ∝ T^0.7,
+ * the usual power-law fits for air) so properties stay positive and smooth; `inTable`
+ * says when that happened.
+ */
+export function airPropertiesAt(temperatureK: number): AirProperties {
+  const tC = toCelsius(temperatureK);
+  if (tC < FIRST[0] || tC > LAST[0]) return extrapolated(tC < FIRST[0] ? FIRST : LAST, temperatureK);
+  let lo = 0;
+  let hi = AIR_TABLE.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (AIR_TABLE[mid]![0] <= tC) lo = mid;
+    else hi = mid;
+  }
+  const a = AIR_TABLE[lo]!;
+  const b = AIR_TABLE[hi]!;
+  const f = (tC - a[0]) / (b[0] - a[0]);
+  const row = a.map((v, i) => v + f * (b[i]! - v));
+  return fromRow(row, temperatureK, true);
+}
+
+function extrapolated(end: readonly number[], tK: number): AirProperties {
+  const r = tK / (end[0]! + ZERO_CELSIUS_K);
+  const rho = end[1]! / r;
+  const cp = end[2]!;
+  const k = end[3]! * r ** 0.8;
+  const mu = end[5]! * r ** 0.7;
+  const nu = mu / rho;
+  const alpha = k / (rho * cp);
+  return {
+    temperatureK: tK,
+    densityKgPerM3: rho,
+    specificHeatJPerKgK: cp,
+    conductivityWPerMK: k,
+    diffusivityM2PerS: alpha,
+    kinematicViscosityM2PerS: nu,
+    prandtl: nu / alpha,
+    expansionPerK: 1 / tK,
+    inTable: false,
+    source: `${AIR_TABLE_SOURCE}, extrapolated beyond ${FIRST[0]}…${LAST[0]} °C`,
+  };
+}

@@ -1,0 +1,168 @@
+import { airPropertiesAt, type AirProperties } from "../air-properties";
+import { STANDARD_GRAVITY, STEFAN_BOLTZMANN, toKelvin } from "../constants";
+import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
+import { naturalConvectionCoefficient } from "./natural-convection";
+
+/** Straight-fin heatsink with vertical fins (channels run vertically), all lengths in metres. */
+export interface FinnedHeatsinkGeometry {
+  /** Across the fins. */
+  baseWidthM: number;
+  /** Along the fins: the height of the vertical channels. */
+  baseLengthM: number;
+  baseThicknessM: number;
+  finCount: number;
+  finHeightM: number;
+  finThicknessM: number;
+  conductivityWPerMK: number;
+  emissivity: number;
+  /** Mean air speed in the channels from a fan; 0 or absent: still air. */
+  airSpeedMPerS?: number;
+  /** The back of the base faces the air too (default: mounted, so not). */
+  backExposed?: boolean;
+}
+
+export interface FinnedHeatsinkEvaluation {
+  conductanceWPerK: number;
+  spacingM: number;
+  filmK: number;
+  air: AirProperties;
+  elenbaas: number;
+  channelNusselt: number;
+  channelNaturalWPerM2K: number;
+  channelForcedWPerM2K: number;
+  channelWPerM2K: number;
+  outerWPerM2K: number;
+  finEfficiencyChannel: number;
+  finEfficiencyOuter: number;
+  correctedFinLengthM: number;
+  gFinsChannel: number;
+  gFinsOuter: number;
+  gBaseChannel: number;
+  gBack: number;
+  gRadiation: number;
+  envelopeAreaM2: number;
+  reynolds: number;
+}
+
+const MIN_DELTA_K = 1e-9;
+
+const finEta = (h: number, k: number, t: number, lc: number) => {
+  const x = Math.sqrt((2 * h) / (k * t)) * lc;
+  return x < 1e-4 ? 1 - (x * x) / 3 : Math.tanh(x) / x;
+};
+
+/** The numbers of the model at one pair of temperatures; the solver calls this in its loop, the trace formats it. */
+export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): FinnedHeatsinkEvaluation {
+  const n = g.finCount;
+  const lv = g.baseLengthM;
+  const s = (g.baseWidthM - n * g.finThicknessM) / (n - 1);
+  const filmK = 0.5 * (surfaceK + ambientK);
+  const air = airPropertiesAt(filmK);
+  const k = air.conductivityWPerMK;
+  const dT = Math.max(Math.abs(surfaceK - ambientK), MIN_DELTA_K);
+
+  // Bar-Cohen & Rohsenow composite for isothermal symmetric vertical channels: spans the
+  // fully developed (choked) limit Nu = El/24 and the isolated-plate limit Nu ∝ El^(1/4).
+  const el = (STANDARD_GRAVITY * air.expansionPerK * dT * s ** 4) / (air.kinematicViscosityM2PerS * air.diffusivityM2PerS * lv);
+  const nuS = (576 / (el * el) + 2.87 / Math.sqrt(el)) ** -0.5;
+  const hNatCh = (nuS * k) / s;
+  const hNatOuter = naturalConvectionCoefficient("vertical-plate", lv, surfaceK, ambientK).coefficientWPerM2K;
+
+  // Forced flow: developing laminar boundary layer on each face, floored by fully developed
+  // flow between parallel plates (Nu_Dh = 7.54, Dh = 2s); combined with natural convection
+  // by Churchill's cube rule for assisting flow.
+  const v = g.airSpeedMPerS ?? 0;
+  const re = (v * lv) / air.kinematicViscosityM2PerS;
+  const hDev = v > 0 ? (0.664 * Math.sqrt(re) * air.prandtl ** (1 / 3) * k) / lv : 0;
+  const hForcedCh = v > 0 ? Math.max(hDev, (7.54 * k) / (2 * s)) : 0;
+  const combine = (a: number, b: number) => (b > 0 ? Math.cbrt(a ** 3 + b ** 3) : a);
+  const hCh = combine(hNatCh, hForcedCh);
+  const hOuter = combine(hNatOuter, hDev);
+
+  const lc = g.finHeightM + g.finThicknessM / 2;
+  const etaCh = finEta(hCh, g.conductivityWPerMK, g.finThicknessM, lc);
+  const etaOut = finEta(hOuter, g.conductivityWPerMK, g.finThicknessM, lc);
+  const gFinsChannel = etaCh * hCh * 2 * (n - 1) * lc * lv;
+  const gFinsOuter = etaOut * hOuter * 2 * lc * lv;
+  const gBaseChannel = hCh * (n - 1) * s * lv;
+  const gBack = g.backExposed ? hOuter * g.baseWidthM * lv : 0;
+
+  // Fins mostly see each other; what leaves by radiation is what the enclosing box sees.
+  const depth = g.finHeightM + g.baseThicknessM;
+  const envelope = g.baseWidthM * lv + 2 * depth * lv + 2 * g.baseWidthM * depth + (g.backExposed ? g.baseWidthM * lv : 0);
+  const gRad = g.emissivity * STEFAN_BOLTZMANN * envelope * (surfaceK * surfaceK + ambientK * ambientK) * (surfaceK + ambientK);
+
+  return {
+    conductanceWPerK: gFinsChannel + gFinsOuter + gBaseChannel + gBack + gRad,
+    spacingM: s,
+    filmK,
+    air,
+    elenbaas: el,
+    channelNusselt: nuS,
+    channelNaturalWPerM2K: hNatCh,
+    channelForcedWPerM2K: hForcedCh,
+    channelWPerM2K: hCh,
+    outerWPerM2K: hOuter,
+    finEfficiencyChannel: etaCh,
+    finEfficiencyOuter: etaOut,
+    correctedFinLengthM: lc,
+    gFinsChannel,
+    gFinsOuter,
+    gBaseChannel,
+    gBack,
+    gRadiation: gRad,
+    envelopeAreaM2: envelope,
+    reynolds: re,
+  };
+}
+
+const BCR = "Bar-Cohen & Rohsenow, J. Heat Transfer 106 (1984) 116, symmetric isothermal plates; as Incropera et al., §9.7";
+
+/** Sink-to-air resistance of a straight-fin heatsink at a base temperature and an air temperature. */
+export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: number; ambientC: number }): ElementResult & { evaluation: FinnedHeatsinkEvaluation } {
+  const e = evaluateFinnedHeatsink(input, toKelvin(input.surfaceC), toKelvin(input.ambientC));
+  const notes = [
+    "Base taken isothermal: spreading from a small source into the base is a separate element.",
+    "Fins vertical; radiation leaves through the enclosing box (front, sides and the two channel openings).",
+  ];
+  if (e.elenbaas < 10) notes.push(`Elenbaas number ${e.elenbaas.toPrecision(3)} < 10: the channels are choked in still air (fins too close for natural convection).`);
+  if ((input.airSpeedMPerS ?? 0) > 0) notes.push("Fan air: flat-plate laminar h floored by fully developed parallel-plate flow, combined with natural convection by the cube rule.");
+  const trace = makeTrace({
+    element: "finned-heatsink",
+    formula: "Straight-fin heatsink: channel convection, outer faces, base and envelope radiation in parallel",
+    equation: "G = η_ch·h_ch·A_fins,ch + η_o·h_o·A_fins,o + h_ch·A_base,ch + h_o·A_back + ε·σ·A_env·(T²+T∞²)(T+T∞)",
+    inputs: [
+      quantity("W", "base width (across fins)", input.baseWidthM, "m"),
+      quantity("L", "base length (along fins, vertical)", input.baseLengthM, "m"),
+      quantity("t_b", "base thickness", input.baseThicknessM, "m"),
+      quantity("N", "fin count", input.finCount, "1"),
+      quantity("H", "fin height", input.finHeightM, "m"),
+      quantity("t", "fin thickness", input.finThicknessM, "m"),
+      quantity("k", "fin conductivity", input.conductivityWPerMK, "W/(m·K)"),
+      quantity("ε", "emissivity", input.emissivity, "1"),
+      quantity("V", "air speed in channels", input.airSpeedMPerS ?? 0, "m/s"),
+      quantity("T", "base temperature", input.surfaceC, "°C"),
+      quantity("T∞", "air temperature", input.ambientC, "°C"),
+    ],
+    intermediates: [
+      quantity("s", "fin spacing", e.spacingM, "m"),
+      quantity("El", "Elenbaas number gβΔT·s⁴/(να·L)", e.elenbaas, "1"),
+      quantity("Nu_s", "channel Nusselt number [576/El² + 2.87/√El]^(-1/2)", e.channelNusselt, "1"),
+      quantity("h_ch", "channel coefficient", e.channelWPerM2K, "W/(m²·K)"),
+      quantity("h_o", "outer-face coefficient", e.outerWPerM2K, "W/(m²·K)"),
+      quantity("η_ch", "fin efficiency in the channels", e.finEfficiencyChannel, "1"),
+      quantity("η_o", "fin efficiency of the outer faces", e.finEfficiencyOuter, "1"),
+      quantity("G_fins,ch", "fins in the channels", e.gFinsChannel, "W/K"),
+      quantity("G_fins,o", "outer faces of the end fins", e.gFinsOuter, "W/K"),
+      quantity("G_base", "base between the fins", e.gBaseChannel, "W/K"),
+      quantity("G_back", "back of the base", e.gBack, "W/K"),
+      quantity("A_env", "envelope area", e.envelopeAreaM2, "m²"),
+      quantity("G_rad", "radiation from the envelope", e.gRadiation, "W/K"),
+    ],
+    result: quantity("R", "sink-to-air resistance", 1 / e.conductanceWPerK, "K/W"),
+    source: `${BCR}; outer faces: Churchill & Chu (1975); fin efficiency: Incropera eqs. 3.89, 3.91; forced flow: Incropera eq. 7.30 and Table 8.2 (Nu = 7.54); air: ${e.air.source}`,
+    validity: { range: "vertical fins, isothermal base, laminar flow (Re_L < 5·10⁵)", inRange: e.reynolds < 5e5 },
+    notes,
+  });
+  return { ...elementResult(e.conductanceWPerK, trace), evaluation: e };
+}

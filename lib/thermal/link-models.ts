@@ -1,0 +1,74 @@
+import { STEFAN_BOLTZMANN } from "./constants";
+import { evaluateFinnedHeatsink } from "./elements/heatsink";
+import { naturalConvectionCoefficient } from "./elements/natural-convection";
+import type { NetworkLink, Surface } from "./schema";
+
+/**
+ * What the solvers need from a link: the heat q it carries from its `from` node (at ti,
+ * kelvin) to its `to` node (at tj) and, when asked, ∂q/∂ti and ∂q/∂tj. Written into a
+ * caller-owned array so the inner loops allocate nothing.
+ */
+export interface LinkModel {
+  readonly linear: boolean;
+  evaluate(ti: number, tj: number, out: Float64Array, derivatives: boolean): void;
+}
+
+class LinearLink implements LinkModel {
+  readonly linear = true;
+  constructor(readonly conductance: number) {}
+  evaluate(ti: number, tj: number, out: Float64Array): void {
+    out[0] = this.conductance * (ti - tj);
+    out[1] = this.conductance;
+    out[2] = -this.conductance;
+  }
+}
+
+class RadiationLink implements LinkModel {
+  readonly linear = false;
+  constructor(private readonly c: number) {}
+  evaluate(ti: number, tj: number, out: Float64Array): void {
+    const ti2 = ti * ti;
+    const tj2 = tj * tj;
+    out[0] = this.c * (ti2 * ti2 - tj2 * tj2);
+    out[1] = 4 * this.c * ti2 * ti;
+    out[2] = -4 * this.c * tj2 * tj;
+  }
+}
+
+/** Derivative step for links whose coefficient comes from a correlation; small against any rise yet far above round-off. */
+const DERIVATIVE_STEP_K = 1e-4;
+
+/** q = G(ti, tj)·(ti − tj) with G from a correlation; derivatives by forward difference. */
+class CorrelationLink implements LinkModel {
+  readonly linear = false;
+  constructor(private readonly conductance: (ti: number, tj: number) => number) {}
+  evaluate(ti: number, tj: number, out: Float64Array, derivatives: boolean): void {
+    const q = this.conductance(ti, tj) * (ti - tj);
+    out[0] = q;
+    if (!derivatives) return;
+    const d = DERIVATIVE_STEP_K;
+    out[1] = (this.conductance(ti + d, tj) * (ti + d - tj) - q) / d;
+    out[2] = (this.conductance(ti, tj + d) * (ti - tj - d) - q) / d;
+  }
+}
+
+function naturalConvectionLink(areaM2: number, surface: Surface, lengthM: number): LinkModel {
+  return new CorrelationLink((ti, tj) => naturalConvectionCoefficient(surface, lengthM, ti, tj).coefficientWPerM2K * areaM2);
+}
+
+export function linkModel(link: NetworkLink): LinkModel {
+  switch (link.type) {
+    case "resistance":
+      return new LinearLink(1 / link.kelvinPerWatt);
+    case "conduction":
+      return new LinearLink((link.conductivityWPerMK * link.areaM2) / link.lengthM);
+    case "convection":
+      return new LinearLink(link.coefficientWPerM2K * link.areaM2);
+    case "natural-convection":
+      return naturalConvectionLink(link.areaM2, link.surface, link.characteristicLengthM);
+    case "radiation":
+      return new RadiationLink(link.emissivity * STEFAN_BOLTZMANN * link.areaM2);
+    case "finned-heatsink":
+      return new CorrelationLink((ti, tj) => evaluateFinnedHeatsink(link, ti, tj).conductanceWPerK);
+  }
+}

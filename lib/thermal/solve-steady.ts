@@ -1,0 +1,82 @@
+import { compileNetwork, type CompiledNetwork } from "./compile";
+import { toCelsius } from "./constants";
+import { ThermalInputError } from "./errors";
+import type { LinkType, Network } from "./schema";
+import { resolveSteadyOptions, solveCompiledSteady, type SteadyOptions } from "./solver/steady";
+
+export interface SteadyLinkResult {
+  from: string;
+  to: string;
+  type: LinkType;
+  label?: string;
+  /** Heat carried from → to, W. */
+  watts: number;
+  /** Effective resistance at the solution, ΔT/q (the small-signal value where no heat flows). */
+  kelvinPerWatt: number;
+}
+
+export interface SteadyResult {
+  converged: boolean;
+  iterations: number;
+  temperaturesC: Record<string, number>;
+  links: SteadyLinkResult[];
+  /** Heat from the sources minus heat reaching ambient, W. */
+  energyBalanceW: number;
+  /** Largest heat imbalance at any node at the solution, W. */
+  residualW: number;
+}
+
+/** Solves the steady state of a network (parsed by `networkSchema`). Throws ThermalInputError for networks it cannot answer. */
+export function solveSteady(network: Network, options?: SteadyOptions): SteadyResult {
+  const compiled = compileNetwork(network);
+  const solution = solveCompiledSteady(compiled, resolveSteadyOptions(options));
+  if (!solution.converged) {
+    throw new ThermalInputError(
+      "unprocessable:convergence",
+      `steady solve did not converge in ${solution.iterations} iterations (largest residual ${solution.residualW.toPrecision(3)} W)`,
+      "",
+    );
+  }
+  if (!solution.stable) throw runawayError(network);
+  return steadyResult(compiled, solution.t, solution.iterations, solution.residualW);
+}
+
+/** A steady state exists only as an unstable balance (or not at all): heat grows faster with temperature than the links remove it. */
+export function runawayError(network: Network): ThermalInputError {
+  const i = (network.sources ?? []).findIndex((s) => (s.wattsPerKelvin ?? 0) > 0);
+  const who = i >= 0 ? `the source on "${network.sources[i]!.node}"` : "a source";
+  return new ThermalInputError(
+    "unprocessable:runaway",
+    `no stable steady state: the heat of ${who} grows with temperature faster than the links carry it away (thermal runaway)`,
+    i >= 0 ? `sources[${i}].wattsPerKelvin` : "",
+  );
+}
+
+/** Builds the public answer from solver-order kelvin temperatures. */
+export function steadyResult(c: CompiledNetwork, t: Float64Array, iterations: number, residualW: number): SteadyResult {
+  for (let i = 0; i < c.n; i++) {
+    if (!Number.isFinite(t[i]!) || !(t[i]! > 0)) {
+      throw new ThermalInputError("unprocessable:solution", `node "${c.ids[i]}" has no physical steady temperature (the sources remove more heat than can reach it)`, `nodes[${c.network.nodes.findIndex((x) => x.id === c.ids[i])}]`);
+    }
+  }
+  const out = new Float64Array(3);
+  let toAmbient = 0;
+  const links = c.network.links.map((link, l): SteadyLinkResult => {
+    const { a, b, model } = c.links[l]!;
+    const ti = a < 0 ? c.ambientK : t[a]!;
+    const tj = b < 0 ? c.ambientK : t[b]!;
+    model.evaluate(ti, tj, out, true);
+    const q = out[0]!;
+    if (b < 0) toAmbient += q;
+    if (a < 0) toAmbient -= q;
+    const ratio = (ti - tj) / q;
+    const smallSignal = out[1]! > 0 ? 1 / out[1]! : Number.MAX_VALUE;
+    const r = Math.abs(q) > 1e-12 && Number.isFinite(ratio) && ratio > 0 ? ratio : smallSignal;
+    return { from: link.from, to: link.to, type: link.type, ...(link.label ? { label: link.label } : {}), watts: q, kelvinPerWatt: Math.min(r, Number.MAX_VALUE) };
+  });
+  let sources = 0;
+  for (let i = 0; i < c.n; i++) sources += c.p0[i]! + c.p1[i]! * t[i]!;
+  const temperaturesC = Object.fromEntries(c.network.nodes.map((node, i) => [node.id, toCelsius(t[c.solverIndex[i]!]!)]));
+  return { converged: true, iterations, temperaturesC, links, energyBalanceW: sources - toAmbient, residualW };
+}
+

@@ -1,0 +1,92 @@
+import { compileNetwork, formatPath } from "./compile";
+import { NETWORK_LIMITS, toCelsius, toKelvin } from "./constants";
+import { ThermalInputError } from "./errors";
+import type { Network, Threshold, TransientOptions } from "./schema";
+import { solveCompiledTransient, type ResolvedTransientOptions } from "./solver/transient";
+import { transientIssues } from "./validate";
+
+export interface Crossing {
+  node: string;
+  limitC: number;
+  /** First time the node reaches the limit, interpolated within the step; null if it never does. */
+  timeS: number | null;
+}
+
+export interface TransientResult {
+  timesS: number[];
+  temperaturesC: Record<string, number[]>;
+  crossings?: Crossing[];
+  /** Newton corrections and matrix factorisations used (for the curious and the benchmark). */
+  newtonIterations: number;
+  factorisations: number;
+}
+
+/** Numerical settings of the warm-up; the defaults suit any lamp-sized network. */
+export interface TransientSolverSettings {
+  toleranceK?: number;
+  refreshAfter?: number;
+  maxIterationsPerStep?: number;
+}
+
+/** Fills defaults and turns the caller's options into one complete object in kelvin, solver order. */
+function resolveOptions(network: Network, solverIndex: Int32Array, options: TransientOptions, settings: TransientSolverSettings): ResolvedTransientOptions {
+  const issue = transientIssues({ network, ...options }, { maxSteps: NETWORK_LIMITS.maxTransientSteps, maxValues: NETWORK_LIMITS.maxTransientValues })[0];
+  if (issue) throw new ThermalInputError("bad_request:transient", `${formatPath(issue.path)}: ${issue.message}`, formatPath(issue.path));
+  const initialK = new Float64Array(network.nodes.length);
+  const init = options.initialC;
+  network.nodes.forEach((node, i) => {
+    const c = typeof init === "number" ? init : (init?.[node.id] ?? network.ambientC);
+    initialK[solverIndex[i]!] = toKelvin(c);
+  });
+  return {
+    durationS: options.durationS,
+    stepS: options.stepS,
+    initialK,
+    toleranceK: settings.toleranceK ?? 1e-6,
+    refreshAfter: settings.refreshAfter ?? 4,
+    maxIterationsPerStep: settings.maxIterationsPerStep ?? 50,
+  };
+}
+
+/**
+ * Warm-up of a network from ambient (or `initialC`): temperatures at every `stepS` from 0
+ * to `durationS`. Nodes without heat capacity follow their neighbours at once, t = 0 included.
+ */
+export function solveTransient(network: Network, options: TransientOptions, settings: TransientSolverSettings = {}): TransientResult {
+  const compiled = compileNetwork(network);
+  const resolved = resolveOptions(network, compiled.solverIndex, options, settings);
+  const solution = solveCompiledTransient(compiled, resolved);
+  const temperaturesC: Record<string, number[]> = Object.fromEntries(
+    network.nodes.map((node, i) => {
+      const s = solution.series[compiled.solverIndex[i]!]!;
+      return [node.id, Array.from(s, toCelsius)];
+    }),
+  );
+  for (const [id, values] of Object.entries(temperaturesC)) {
+    if (values.some((v) => !Number.isFinite(v) || v < -273.15)) {
+      throw new ThermalInputError("unprocessable:solution", `node "${id}" has no physical temperature during the warm-up`, "");
+    }
+  }
+  const result: TransientResult = {
+    timesS: solution.timesS,
+    temperaturesC,
+    newtonIterations: solution.newtonIterations,
+    factorisations: solution.factorisations,
+  };
+  if (options.thresholds) result.crossings = options.thresholds.map((t) => crossing(t, solution.timesS, temperaturesC[t.node]!));
+  return result;
+}
+
+/** First upward reach of the limit, linearly interpolated between the two samples around it. */
+export function crossing(t: Threshold, times: readonly number[], values: readonly number[]): Crossing {
+  if (values[0]! >= t.limitC) return { node: t.node, limitC: t.limitC, timeS: times[0]! };
+  for (let k = 1; k < values.length; k++) {
+    const v = values[k]!;
+    if (v >= t.limitC) {
+      const u = values[k - 1]!;
+      const f = (t.limitC - u) / (v - u);
+      return { node: t.node, limitC: t.limitC, timeS: times[k - 1]! + f * (times[k]! - times[k - 1]!) };
+    }
+  }
+  return { node: t.node, limitC: t.limitC, timeS: null };
+}

@@ -1,0 +1,152 @@
+import type { CompiledNetwork } from "../compile";
+import { ThermalInputError } from "../errors";
+import { assemble, maxAbs } from "./assemble";
+import { NetworkLu } from "./lu";
+
+export interface SteadyOptions {
+  /** Newton stops when the largest temperature change of a full step is below this, K (default 1e-6). */
+  toleranceK?: number;
+  /** Cap on Newton iterations (default 100). */
+  maxIterations?: number;
+}
+
+export interface ResolvedSteadyOptions {
+  toleranceK: number;
+  maxIterations: number;
+}
+
+export function resolveSteadyOptions(options: SteadyOptions = {}): ResolvedSteadyOptions {
+  return { toleranceK: options.toleranceK ?? 1e-6, maxIterations: options.maxIterations ?? 100 };
+}
+
+export interface CompiledSteadySolution {
+  /** Kelvin, solver order. */
+  t: Float64Array;
+  converged: boolean;
+  iterations: number;
+  residualW: number;
+  /** Whether the solution is a stable equilibrium (false: thermal runaway). */
+  stable: boolean;
+}
+
+/** Rise assumed for the first linearisation of temperature-dependent links. */
+const GUESS_RISE_K = 20;
+
+/** Scratch arrays of one solve, reused across iterations so the loop allocates nothing. */
+export class SolverWorkspace {
+  readonly lu: NetworkLu;
+  readonly out = new Float64Array(3);
+  f: Float64Array;
+  fNew: Float64Array;
+  j: Float64Array;
+  jNew: Float64Array;
+  readonly d: Float64Array;
+  constructor(readonly n: number) {
+    this.lu = new NetworkLu(n);
+    this.f = new Float64Array(n);
+    this.fNew = new Float64Array(n);
+    this.j = new Float64Array(n * n);
+    this.jNew = new Float64Array(n * n);
+    this.d = new Float64Array(n);
+  }
+
+  /** Factorises a copy of `j` (pivoting only if the cheap factorisation meets a tiny pivot). */
+  factor(j: Float64Array): boolean {
+    this.lu.a.set(j);
+    if (this.lu.factor()) return true;
+    this.lu.a.set(j);
+    return this.lu.factorPivoted();
+  }
+}
+
+/** Linear network with each link replaced by its secant conductance at a guessed rise: exact for linear networks, a safe start otherwise. */
+function initialGuess(c: CompiledNetwork, ws: SolverWorkspace): Float64Array {
+  const n = c.n;
+  const j = ws.j;
+  const rhs = new Float64Array(n);
+  j.fill(0);
+  for (let i = 0; i < n; i++) {
+    j[i * n + i] = -c.p1[i]!;
+    rhs[i] = c.p0[i]!;
+  }
+  const hot = c.ambientK + GUESS_RISE_K;
+  for (const link of c.links) {
+    link.model.evaluate(hot, c.ambientK, ws.out, false);
+    const g = ws.out[0]! / GUESS_RISE_K;
+    const { a, b } = link;
+    if (a >= 0) j[a * n + a]! += g;
+    if (b >= 0) j[b * n + b]! += g;
+    if (a >= 0 && b >= 0) {
+      j[a * n + b]! -= g;
+      j[b * n + a]! -= g;
+    } else {
+      rhs[a >= 0 ? a : b]! += g * c.ambientK;
+    }
+  }
+  const t = new Float64Array(n);
+  if (!ws.factor(j)) throw new ThermalInputError("unprocessable:network", "the network's conductance matrix is singular", "");
+  ws.lu.solve(rhs, t);
+  for (let i = 0; i < n; i++) if (!(t[i]! > 1) || !Number.isFinite(t[i]!)) t[i] = hot;
+  return t;
+}
+
+/**
+ * Damped Newton on F(T) = 0 with a backtracking line search on the largest residual.
+ * Converged when a full step moves no node by more than the tolerance.
+ */
+export function solveCompiledSteady(c: CompiledNetwork, options: ResolvedSteadyOptions, start?: Float64Array): CompiledSteadySolution {
+  const n = c.n;
+  const ws = new SolverWorkspace(n);
+  let t: Float64Array = start ? Float64Array.from(start) : initialGuess(c, ws);
+  let tNew: Float64Array = new Float64Array(n);
+  assemble(c, t, ws.f, ws.j, ws.out);
+  let nf = maxAbs(ws.f);
+  let scale = 1;
+  for (let i = 0; i < n; i++) scale += Math.abs(c.p0[i]!) + Math.abs(c.p1[i]! * t[i]!);
+  const noise = 1e-13 * scale;
+  let converged = false;
+  let iterations = 0;
+  while (iterations < options.maxIterations) {
+    iterations++;
+    if (!ws.factor(ws.j)) throw new ThermalInputError("unprocessable:convergence", "the steady solve met a singular Jacobian (a source that grows with temperature faster than the links can carry it away?)", "");
+    for (let i = 0; i < n; i++) ws.d[i] = -ws.f[i]!;
+    ws.lu.solve(ws.d, ws.d);
+    let lambda = 1;
+    let accepted = false;
+    for (let tries = 0; tries < 40; tries++) {
+      let positive = true;
+      for (let i = 0; i < n; i++) {
+        const v = t[i]! + lambda * ws.d[i]!;
+        tNew[i] = v;
+        if (!(v > 0)) positive = false;
+      }
+      if (positive) {
+        assemble(c, tNew, ws.fNew, ws.jNew, ws.out);
+        const nfNew = maxAbs(ws.fNew);
+        if (nfNew <= (1 - 1e-4 * lambda) * nf || nfNew <= noise) {
+          nf = nfNew;
+          accepted = true;
+          break;
+        }
+      }
+      lambda *= 0.5;
+    }
+    const fullStep = maxAbs(ws.d);
+    if (!accepted) {
+      // The residual is at its floating-point floor: no step can lower it further.
+      if (fullStep < options.toleranceK * 1e3 && nf <= noise * 1e3) converged = true;
+      break;
+    }
+    [t, tNew] = [tNew, t];
+    [ws.f, ws.fNew] = [ws.fNew, ws.f];
+    [ws.j, ws.jNew] = [ws.jNew, ws.j];
+    // A damped step says nothing about convergence; only a full Newton step that barely moves does.
+    if (fullStep < options.toleranceK) {
+      converged = true;
+      break;
+    }
+  }
+  ws.lu.a.set(ws.j);
+  const stable = converged && ws.lu.factor() && ws.lu.pivotsPositive();
+  return { t, converged, iterations, residualW: nf, stable };
+}

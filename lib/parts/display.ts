@@ -1,0 +1,56 @@
+import { formatQuantity, QUANTITY_INFO, type UnitPreferences } from "@/lib/units";
+import type { PartKind } from "./common";
+import type { FieldDef } from "./fields";
+import type { DriverMode } from "./modes";
+import { KIND_DEFINITIONS } from "./registry";
+
+/** A table column for one of a kind's main figures. */
+export interface FigureColumn {
+  readonly key: string;
+  readonly label: string;
+  readonly field: FieldDef;
+}
+
+export function mainFigureColumns(kind: PartKind): FigureColumn[] {
+  const def = KIND_DEFINITIONS[kind];
+  return def.mainFigures.flatMap((key) => {
+    const field = def.fields.find((f: FieldDef) => f.key === key);
+    return field ? [{ key, label: field.label, field }] : [];
+  });
+}
+
+function isModes(value: unknown): value is DriverMode[] {
+  return Array.isArray(value);
+}
+
+/** How a stored specs value reads in a table cell or on the part page; "—" when absent. */
+export function formatFieldValue(field: FieldDef, value: unknown, prefs: UnitPreferences): string {
+  if (value === undefined || value === null) return "—";
+  switch (field.type) {
+    case "quantity":
+      return typeof value === "number" ? formatQuantity(value, field.quantity, prefs) : "—";
+    case "modes":
+      // A table cell has room for the range, not every mode.
+      return isModes(value) ? summariseModes(value, prefs) : "—";
+    default:
+      return String(value);
+  }
+}
+
+function summariseModes(modes: readonly DriverMode[], prefs: UnitPreferences): string {
+  return modes
+    .map((mode) => {
+      const output =
+        mode.outputCurrentA !== undefined
+          ? formatQuantity(mode.outputCurrentA, "current", prefs, { digits: 3 })
+          : formatQuantity(mode.outputPowerW ?? 0, "power", prefs, { digits: 3 });
+      return `${mode.name} ${output}`;
+    })
+    .join(" · ");
+}
+
+/** The unit a form shows beside a quantity input (what a bare number there means). */
+export function inputUnitLabel(field: FieldDef): string {
+  if (field.type !== "quantity") return "";
+  return (field.bareUnit ?? QUANTITY_INFO[field.quantity].bare).label;
+}

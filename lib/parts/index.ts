@@ -1,0 +1,18 @@
+export { PART_KINDS, PROVENANCES, VISIBILITIES, COMMON_FIELDS } from "./common";
+export type { PartKind, Provenance, Visibility } from "./common";
+export { fieldSchema, buildSpecsSchema, buildVariantSpecsSchema } from "./fields";
+export type { FieldDef, QuantityField, ChoiceField, TextField, MaterialField, ModesField, SpecsOf, SpecsInputOf } from "./fields";
+export { KIND_DEFINITIONS, kindDefinition, specsField } from "./registry";
+export type { KindDefinition } from "./registry";
+export { partSchema, PART_SCHEMAS } from "./schema";
+export type { Part, PartInput, PartOfKind, SpecsOfKind } from "./schema";
+export { partNotes } from "./part-notes";
+export type { PartNote } from "./notes";
+export { driverModeSchema, modesSchema, parseModesCell, formatModesCell, MAX_DRIVER_MODES } from "./modes";
+export type { DriverMode, DriverModeInput } from "./modes";
+export { materialOptions, isMaterialId, MATERIAL_IDS, FINISHES } from "./materials";
+export type { MaterialOption } from "./materials";
+export { mainFigureColumns, formatFieldValue, inputUnitLabel } from "./display";
+export type { FigureColumn } from "./display";
+export { csvColumns, csvHeaders, parsePartRow, parsePartsCsv, partToCsvRow, partsToCsv } from "./csv";
+export type { CsvColumn, CsvError, CsvImport, CsvRowResult } from "./csv";

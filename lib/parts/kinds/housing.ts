@@ -1,0 +1,27 @@
+import { z } from "zod";
+import { buildSpecsSchema, type FieldDef } from "../fields";
+import type { PartNote } from "../notes";
+
+export const HOUSING_FIELDS = [
+  { key: "material", label: "Material", type: "material", required: true, help: "Housing wall material from the materials list." },
+  { key: "wallThicknessM", label: "Wall thickness", type: "quantity", quantity: "length", required: true, gt: 0, max: 0.05, help: "Typical wall thickness." },
+  { key: "outerAreaM2", label: "Outer area", type: "quantity", quantity: "area", required: true, gt: 0, max: 10, help: "Outside surface exposed to air (what sheds the heat)." },
+  { key: "innerAreaM2", label: "Inner area", type: "quantity", quantity: "area", required: false, gt: 0, max: 10, help: "Inside surface facing the parts." },
+  { key: "emissivity", label: "Emissivity", type: "quantity", quantity: "fraction", required: false, min: 0, max: 1, help: "Emissivity of the outer surface (0–1): painted ≈ 0.9, bare polished brass ≈ 0.05." },
+  { key: "enclosure", label: "Enclosure", type: "choice", options: ["sealed", "vented"], required: true, help: "Sealed (closed against weather: heat must cross the wall) or vented." },
+  { key: "massKg", label: "Mass", type: "quantity", quantity: "mass", required: false, gt: 0, max: 100, help: "Mass of the housing, for warm-up time." },
+] as const satisfies readonly FieldDef[];
+
+export const housingSpecsSchema = buildSpecsSchema(HOUSING_FIELDS).superRefine((specs, ctx) => {
+  if (specs.innerAreaM2 !== undefined && specs.innerAreaM2 > specs.outerAreaM2) {
+    ctx.addIssue({ code: "custom", path: ["innerAreaM2"], message: "must not exceed the outer area" });
+  }
+});
+export type HousingSpecs = z.output<typeof housingSpecsSchema>;
+
+export function housingNotes(specs: HousingSpecs): PartNote[] {
+  if (specs.emissivity === undefined) {
+    return [{ field: "emissivity", message: "no emissivity: radiation is as large as convection for a painted case, so give one" }];
+  }
+  return [];
+}

@@ -1,4 +1,4 @@
-import { MATERIALS, type Finish } from "@/lib/thermal/materials";
+import { MATERIALS, type Finish } from "@/lib/thermal";
 
 /**
  * The materials a part may name, from the engine's handbook table so a part's "aluminium

@@ -61,9 +61,9 @@ function extrapolated(end: readonly number[], tK: number): AirProperties {
   const rho = end[1]! / r;
   const cp = end[2]!;
   const k = end[3]! * r ** 0.8;
-  const mu = end[5]! * r ** 0.7;
-  const nu = mu / rho;
-  const alpha = k / (rho * cp);
+  // Scale the end row's own ν and α (μ ∝ T^0.7 with ρ ∝ 1/T gives ν ∝ T^1.7) so the values join the table without a step.
+  const nu = end[6]! * r ** 1.7;
+  const alpha = end[4]! * r ** 1.8;
   return {
     temperatureK: tK,
     densityKgPerM3: rho,

@@ -46,3 +46,6 @@ export { radiationExchange, type RadiationInput } from "./elements/radiation";
 export { finEfficiency, type FinEfficiency, type FinEfficiencyInput } from "./elements/fin";
 export { finnedHeatsink, evaluateFinnedHeatsink, type FinnedHeatsinkGeometry, type FinnedHeatsinkEvaluation } from "./elements/heatsink";
 export { spreadingResistance, type SpreadingInput, type SpreadingResult } from "./elements/spreading";
+export { maxSourcePower, maxLinkResistance, type LimitTarget, type MaxPowerOptions, type MaxPowerResult, type MaxResistanceOptions, type MaxResistanceResult } from "./inverse";
+export { breakdownRise, type RiseBreakdown, type RiseStep } from "./breakdown";
+export { explainLinks, traceLink } from "./explain";

@@ -51,10 +51,12 @@ const wrongType = (issue: { input?: unknown }) =>
  * with a unit ("20 mm"), transformed into the storage-unit number. The same schema serves
  * API bodies, forms and CSV cells; issues carry the field's path, so callers name the field.
  */
-export function unitField(quantity: Quantity, options: UnitFieldOptions & { required: false }): z.ZodType<number | undefined, UnitInput | null | undefined>;
+// Optional fields are wrapped in ZodOptional so z.object() marks their keys optional.
+type OptionalUnitField = z.ZodOptional<z.ZodType<number | undefined, UnitInput | null | undefined>>;
+export function unitField(quantity: Quantity, options: UnitFieldOptions & { required: false }): OptionalUnitField;
 export function unitField(quantity: Quantity, options?: UnitFieldOptions & { required?: true }): z.ZodType<number, UnitInput>;
-export function unitField(quantity: Quantity, options?: UnitFieldOptions): z.ZodType<number | undefined, UnitInput | null | undefined>;
-export function unitField(quantity: Quantity, options: UnitFieldOptions = {}): z.ZodType<number | undefined, UnitInput | null | undefined> {
+export function unitField(quantity: Quantity, options?: UnitFieldOptions): OptionalUnitField | z.ZodType<number, UnitInput>;
+export function unitField(quantity: Quantity, options: UnitFieldOptions = {}): OptionalUnitField | z.ZodType<number, UnitInput> {
   if (options.required === false) {
     return z
       .union([z.number(), z.string(), z.null()], { error: wrongType })

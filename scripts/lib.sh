@@ -23,13 +23,22 @@ ensure_node_modules() {
   fi
 }
 
-# Polls a URL until it answers (no fixed sleeps).
+# Polls a URL until it answers (no fixed sleeps); gives up when process $2 (if given) dies.
 wait_for_url() {
-  local url="$1" tries="${2:-600}"
+  local url="$1" pid="${2:-}" tries="${3:-600}"
   for _ in $(seq 1 "$tries"); do
+    if [ -n "$pid" ] && ! kill -0 "$pid" 2>/dev/null; then echo "[setup] the server exited" >&2; return 1; fi
     if node -e "fetch(process.argv[1]).then(r=>process.exit(r.status<500?0:1),()=>process.exit(1))" "$url" 2>/dev/null; then return 0; fi
     sleep 0.2
   done
   echo "[setup] $url did not answer" >&2
   return 1
+}
+
+# Fails with a clear message when something already listens on 127.0.0.1:$1.
+assert_port_free() {
+  if node -e "const s=require('net').connect($1,'127.0.0.1');s.on('connect',()=>process.exit(0));s.on('error',()=>process.exit(1))"; then
+    echo "[setup] port $1 on 127.0.0.1 is already in use (another Sinkwise still running?). Stop it first." >&2
+    return 1
+  fi
 }

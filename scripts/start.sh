@@ -19,6 +19,7 @@ cleanup() {
 }
 trap cleanup INT TERM EXIT
 
+assert_port_free "$PORT"
 bash scripts/setup.sh
 if [ "$MODE" = "prod" ]; then
   echo "[start] building (next build)"
@@ -28,7 +29,7 @@ else
   node node_modules/next/dist/bin/next dev -H 127.0.0.1 -p "$PORT" &
 fi
 SERVER_PID=$!
-wait_for_url "http://127.0.0.1:$PORT/api/v1/health"
+wait_for_url "http://127.0.0.1:$PORT/api/v1/health" "$SERVER_PID"
 
 cat <<MSG
 

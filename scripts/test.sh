@@ -47,9 +47,10 @@ node_modules/.bin/tsx --conditions=react-server scripts/seed.ts || fail_setup "s
 echo "[test] building"
 node node_modules/next/dist/bin/next build >.data/logs/test-build.log 2>&1 || { tail -n 40 .data/logs/test-build.log; fail_setup "next build"; }
 PORT=3100
+assert_port_free "$PORT" || fail_setup "port $PORT"
 node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" >.data/logs/test-server.log 2>&1 &
 SERVER_PID=$!
-wait_for_url "http://127.0.0.1:$PORT/api/v1/health" || { tail -n 40 .data/logs/test-server.log; fail_setup "server"; }
+wait_for_url "http://127.0.0.1:$PORT/api/v1/health" "$SERVER_PID" || { tail -n 40 .data/logs/test-server.log; fail_setup "server"; }
 
 status=0
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile=.data/vitest-unit.json || status=1

@@ -35,8 +35,12 @@ class RadiationLink implements LinkModel {
   }
 }
 
-/** Derivative step for links whose coefficient comes from a correlation; small against any rise yet far above round-off. */
-const DERIVATIVE_STEP_K = 1e-4;
+/**
+ * Derivative step for links whose coefficient comes from a correlation: a thousandth of
+ * the link's temperature difference (so the slope stays accurate as ΔT → 0, where
+ * h ∝ ΔT^¼ bends sharply), never below where round-off of T ≈ 300 K would dominate.
+ */
+const derivativeStep = (ti: number, tj: number) => Math.max(1e-7, 1e-3 * Math.abs(ti - tj));
 
 /** q = G(ti, tj)·(ti − tj) with G from a correlation; derivatives by forward difference. */
 class CorrelationLink implements LinkModel {
@@ -46,7 +50,7 @@ class CorrelationLink implements LinkModel {
     const q = this.conductance(ti, tj) * (ti - tj);
     out[0] = q;
     if (!derivatives) return;
-    const d = DERIVATIVE_STEP_K;
+    const d = derivativeStep(ti, tj);
     out[1] = (this.conductance(ti + d, tj) * (ti + d - tj) - q) / d;
     out[2] = (this.conductance(ti, tj + d) * (ti - tj - d) - q) / d;
   }

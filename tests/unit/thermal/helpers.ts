@@ -78,3 +78,19 @@ export function linearSystem(c: LinearCase): { G: number[][]; b: number[] } {
   });
   return { G, b };
 }
+
+/**
+ * Random non-linear networks: a linear case whose ambient links alternate into natural
+ * convection and radiation of comparable size (so the answer is dominated by neither).
+ */
+export const mixedNetwork = (opts: { maxNodes?: number } = {}) =>
+  linearNetwork({ maxNodes: opts.maxNodes ?? 10 }).map((c): Network => {
+    const surfaces = ["vertical-plate", "horizontal-plate-up", "horizontal-plate-down", "horizontal-cylinder"] as const;
+    const links = c.network.links.map((l, i) => {
+      if (l.to !== "ambient" || i % 2 === 1) return l;
+      const g = c.conductances[i]!;
+      if (i % 4 === 0) return { from: l.from, to: l.to, type: "natural-convection" as const, areaM2: g / 6, surface: surfaces[i % 4]!, characteristicLengthM: 0.05 };
+      return { from: l.from, to: l.to, type: "radiation" as const, areaM2: g / 6, emissivity: 0.9 };
+    });
+    return net({ ...c.network, links });
+  });

@@ -33,6 +33,44 @@ function fromRow(row: readonly number[], tK: number, inTable: boolean): AirPrope
   };
 }
 
+/** Index into the scratch array `airInto` fills. */
+export const AIR = { k: 0, nu: 1, alpha: 2, pr: 3, beta: 4 } as const;
+
+/**
+ * The properties the convection correlations need, written into `out` without allocating
+ * (the solvers call this for every link in every iteration). Same interpolation and
+ * extrapolation as `airPropertiesAt`, which is built on it.
+ */
+export function airInto(temperatureK: number, out: Float64Array): boolean {
+  const tC = temperatureK - ZERO_CELSIUS_K;
+  out[AIR.beta] = 1 / temperatureK;
+  if (tC >= FIRST[0] && tC <= LAST[0]) {
+    let lo = 0;
+    let hi = AIR_TABLE.length - 1;
+    while (hi - lo > 1) {
+      const mid = (lo + hi) >> 1;
+      if (AIR_TABLE[mid]![0] <= tC) lo = mid;
+      else hi = mid;
+    }
+    const a = AIR_TABLE[lo]!;
+    const b = AIR_TABLE[hi]!;
+    const f = (tC - a[0]) / (b[0] - a[0]);
+    out[AIR.k] = a[3] + f * (b[3] - a[3]);
+    out[AIR.alpha] = a[4] + f * (b[4] - a[4]);
+    out[AIR.nu] = a[6] + f * (b[6] - a[6]);
+    out[AIR.pr] = a[7] + f * (b[7] - a[7]);
+    return true;
+  }
+  const end = tC < FIRST[0] ? FIRST : LAST;
+  const r = temperatureK / (end[0] + ZERO_CELSIUS_K);
+  // Scale the end row's own ν and α (μ ∝ T^0.7 with ρ ∝ 1/T gives ν ∝ T^1.7) so the values join the table without a step.
+  out[AIR.k] = end[3] * r ** 0.8;
+  out[AIR.nu] = end[6] * r ** 1.7;
+  out[AIR.alpha] = end[4] * r ** 1.8;
+  out[AIR.pr] = out[AIR.nu]! / out[AIR.alpha]!;
+  return false;
+}
+
 /**
  * Air properties at a temperature, linearly interpolated between the table's rows.
  * Outside the table the end row is scaled (ρ ∝ 1/T as an ideal gas; k ∝ T^0.8, μ ∝ T^0.7,

@@ -1,6 +1,6 @@
 import { STEFAN_BOLTZMANN } from "./constants";
-import { evaluateFinnedHeatsink } from "./elements/heatsink";
-import { naturalConvectionCoefficient } from "./elements/natural-convection";
+import { finnedHeatsinkConductance } from "./elements/heatsink";
+import { naturalConvectionH } from "./elements/natural-convection";
 import type { NetworkLink, Surface } from "./schema";
 
 /**
@@ -57,7 +57,7 @@ class CorrelationLink implements LinkModel {
 }
 
 function naturalConvectionLink(areaM2: number, surface: Surface, lengthM: number): LinkModel {
-  return new CorrelationLink((ti, tj) => naturalConvectionCoefficient(surface, lengthM, ti, tj).coefficientWPerM2K * areaM2);
+  return new CorrelationLink((ti, tj) => naturalConvectionH(surface, lengthM, ti, tj) * areaM2);
 }
 
 export function linkModel(link: NetworkLink): LinkModel {
@@ -73,6 +73,6 @@ export function linkModel(link: NetworkLink): LinkModel {
     case "radiation":
       return new RadiationLink(link.emissivity * STEFAN_BOLTZMANN * link.areaM2);
     case "finned-heatsink":
-      return new CorrelationLink((ti, tj) => evaluateFinnedHeatsink(link, ti, tj).conductanceWPerK);
+      return new CorrelationLink((ti, tj) => finnedHeatsinkConductance(link, ti, tj));
   }
 }

@@ -1,7 +1,7 @@
 import { airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, STEFAN_BOLTZMANN, toKelvin } from "../constants";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
-import { naturalConvectionCoefficient } from "./natural-convection";
+import { naturalConvectionH } from "./natural-convection";
 
 /** Straight-fin heatsink with vertical fins (channels run vertically), all lengths in metres. */
 export interface FinnedHeatsinkGeometry {
@@ -66,7 +66,7 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
   const el = (STANDARD_GRAVITY * air.expansionPerK * dT * s ** 4) / (air.kinematicViscosityM2PerS * air.diffusivityM2PerS * lv);
   const nuS = (576 / (el * el) + 2.87 / Math.sqrt(el)) ** -0.5;
   const hNatCh = (nuS * k) / s;
-  const hNatOuter = naturalConvectionCoefficient("vertical-plate", lv, surfaceK, ambientK).coefficientWPerM2K;
+  const hNatOuter = naturalConvectionH("vertical-plate", lv, surfaceK, ambientK);
 
   // Forced flow: developing laminar boundary layer on each face, floored by fully developed
   // flow between parallel plates (Nu_Dh = 7.54, Dh = 2s); combined with natural convection
@@ -115,6 +115,10 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
     reynolds: re,
   };
 }
+
+/** Conductance alone, for the solver's loop. */
+export const finnedHeatsinkConductance = (g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): number =>
+  evaluateFinnedHeatsink(g, surfaceK, ambientK).conductanceWPerK;
 
 const BCR = "Bar-Cohen & Rohsenow, J. Heat Transfer 106 (1984) 116, symmetric isothermal plates; as Incropera et al., §9.7";
 

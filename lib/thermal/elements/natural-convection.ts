@@ -1,4 +1,4 @@
-import { airPropertiesAt, type AirProperties } from "../air-properties";
+import { AIR, airInto, airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, toKelvin } from "../constants";
 import type { Surface } from "../schema";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
@@ -92,6 +92,31 @@ function nusseltFor(surface: Surface, ra: number, pr: number): Omit<NaturalConve
   }
 }
 
+/** Nusselt number alone — the same branches as `nusseltFor`, without building the description (solver hot path). */
+export function nusseltNumber(surface: Surface, ra: number, pr: number): number {
+  switch (surface) {
+    case "vertical-plate":
+      return ra <= 1e9 ? 0.68 + (0.67 * Math.sqrt(Math.sqrt(ra))) / prFactor(0.492, pr) ** (4 / 9) : (0.825 + (0.387 * ra ** (1 / 6)) / prFactor(0.492, pr) ** (8 / 27)) ** 2;
+    case "horizontal-cylinder":
+      return (0.6 + (0.387 * ra ** (1 / 6)) / prFactor(0.559, pr) ** (8 / 27)) ** 2;
+    case "horizontal-plate-up":
+      return ra <= 1e7 ? 0.54 * Math.sqrt(Math.sqrt(ra)) : 0.15 * Math.cbrt(ra);
+    case "horizontal-plate-down":
+      return 0.52 * ra ** 0.2;
+  }
+}
+
+const scratch = new Float64Array(5);
+
+/** h of a surface in W/(m²·K), allocation-free; equals `naturalConvectionCoefficient(...).coefficientWPerM2K`. */
+export function naturalConvectionH(surface: Surface, lengthM: number, surfaceK: number, fluidK: number): number {
+  airInto(0.5 * (surfaceK + fluidK), scratch);
+  const delta = Math.max(Math.abs(surfaceK - fluidK), MIN_DELTA_K);
+  const effective = surfaceK >= fluidK ? surface : flip[surface];
+  const ra = (STANDARD_GRAVITY * scratch[AIR.beta]! * delta * lengthM ** 3) / (scratch[AIR.nu]! * scratch[AIR.alpha]!);
+  return (nusseltNumber(effective, ra, scratch[AIR.pr]!) * scratch[AIR.k]!) / lengthM;
+}
+
 const flip: Record<Surface, Surface> = {
   "vertical-plate": "vertical-plate",
   "horizontal-cylinder": "horizontal-cylinder",
@@ -108,7 +133,8 @@ export function naturalConvectionCoefficient(surface: Surface, lengthM: number, 
   const effectiveSurface = surfaceK >= fluidK ? surface : flip[surface];
   const ra = rayleighNumber(air, delta, lengthM);
   const n = nusseltFor(effectiveSurface, ra, air.prandtl);
-  return { ...n, coefficientWPerM2K: (n.nusselt * air.conductivityWPerMK) / lengthM, rayleigh: ra, effectiveSurface, filmK, air };
+  const h = (nusseltNumber(effectiveSurface, ra, air.prandtl) * air.conductivityWPerMK) / lengthM;
+  return { ...n, coefficientWPerM2K: h, rayleigh: ra, effectiveSurface, filmK, air };
 }
 
 export interface NaturalConvectionInput {

@@ -7,12 +7,14 @@ import {
   interfaceLayer,
   MATERIALS,
   naturalConvection,
+  naturalConvectionCoefficient,
   radiationExchange,
   solveSteady,
   STEFAN_BOLTZMANN,
   strapResistance,
   heatCapacity,
 } from "@/lib/thermal";
+import { naturalConvectionH } from "@/lib/thermal/elements/natural-convection";
 import { net } from "./helpers";
 
 describe("Stefan–Boltzmann constant and radiation", () => {
@@ -69,6 +71,14 @@ describe("natural convection", () => {
     expect(Number.isFinite(r.coefficientWPerM2K)).toBe(true);
     expect(r.trace.validity?.inRange).toBe(false);
     expect(r.trace.notes.join(" ")).toMatch(/outside the correlation's range/);
+  });
+
+  it("the solver's allocation-free coefficient equals the traced one on every surface, inside and outside the air table", () => {
+    for (const surface of ["vertical-plate", "horizontal-plate-up", "horizontal-plate-down", "horizontal-cylinder"] as const) {
+      for (const [ts, tf, L] of [[330, 298, 0.05], [290, 300, 0.2], [600, 300, 1.5], [240, 200, 0.01]] as const) {
+        expect(naturalConvectionH(surface, L, ts, tf)).toBeCloseTo(naturalConvectionCoefficient(surface, L, ts, tf).coefficientWPerM2K, 10);
+      }
+    }
   });
 
   it("a horizontal plate colder than the air uses the opposite face's correlation", () => {

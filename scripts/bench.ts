@@ -1,0 +1,11 @@
+/** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
+import { benchThermal } from "./bench-thermal";
+
+async function main(): Promise<void> {
+  await benchThermal();
+}
+
+main().catch((e: unknown) => {
+  console.error(e);
+  process.exit(1);
+});

@@ -8,6 +8,7 @@ import {
   json,
   mysqlEnum,
   mysqlTable,
+  primaryKey,
   uniqueIndex,
   varchar,
 } from "drizzle-orm/mysql-core";
@@ -121,4 +122,96 @@ export const partAttachments = mysqlTable(
     createdAt: datetime("created_at", { fsp: 3 }).notNull(),
   },
   (t) => [index("part_attachment_part_idx").on(t.partId, t.createdAt), uniqueIndex("part_attachment_key_unique").on(t.objectKey)],
+);
+
+export const BUILD_VISIBILITIES = ["private", "shared"] as const;
+
+/**
+ * A retrofit. Its content lives in immutable revisions; the build row holds what may change
+ * without a new revision (title, visibility) and which revision is current.
+ */
+export const builds = mysqlTable(
+  "build",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    ownerId: varchar("owner_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    title: varchar("title", { length: 160 }).notNull(),
+    summary: varchar("summary", { length: 2000 }).notNull().default(""),
+    visibility: mysqlEnum("visibility", BUILD_VISIBILITIES).notNull().default("private"),
+    /** The build this one was forked from as a variant, and what the variant changed. */
+    variantOf: varchar("variant_of", { length: 40 }),
+    variantNote: varchar("variant_note", { length: 500 }),
+    currentRevision: int("current_revision").notNull().default(1),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+    updatedAt: datetime("updated_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [
+    index("build_owner_updated_idx").on(t.ownerId, t.updatedAt),
+    index("build_visibility_updated_idx").on(t.visibility, t.updatedAt),
+    index("build_variant_of_idx").on(t.variantOf),
+  ],
+);
+
+/** Users (other than the owner) a build is shared with, for viewing or editing. */
+export const buildMembers = mysqlTable(
+  "build_member",
+  {
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    canEdit: boolean("can_edit").notNull().default(false),
+  },
+  (t) => [primaryKey({ columns: [t.buildId, t.userId] }), index("build_member_user_idx").on(t.userId)],
+);
+
+/** One saved, immutable state of a build: the design JSON validated by lib/retrofit. */
+export const buildRevisions = mysqlTable(
+  "build_revision",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    number: int("number").notNull(),
+    design: json("design").notNull(),
+    note: varchar("note", { length: 500 }).notNull().default(""),
+    createdBy: varchar("created_by", { length: 40 })
+      .notNull()
+      .references(() => users.id),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [uniqueIndex("build_revision_number_unique").on(t.buildId, t.number)],
+);
+
+/** Which parts a revision uses: a used part cannot be deleted. */
+export const revisionParts = mysqlTable(
+  "revision_part",
+  {
+    revisionId: varchar("revision_id", { length: 40 })
+      .notNull()
+      .references(() => buildRevisions.id, { onDelete: "cascade" }),
+    partId: varchar("part_id", { length: 40 })
+      .notNull()
+      .references(() => parts.id),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.partId] }), index("revision_part_part_idx").on(t.partId)],
+);
+
+/** Cached evaluation of a revision; a new solver version makes old rows stale. */
+export const revisionResults = mysqlTable(
+  "revision_result",
+  {
+    revisionId: varchar("revision_id", { length: 40 })
+      .notNull()
+      .references(() => buildRevisions.id, { onDelete: "cascade" }),
+    solverVersion: varchar("solver_version", { length: 40 }).notNull(),
+    result: json("result").notNull(),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.solverVersion] })],
 );

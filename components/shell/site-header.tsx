@@ -24,7 +24,7 @@ export async function SiteHeader() {
           {user ? (
             <AccountMenu />
           ) : (
-            <span className="flex gap-3">
+            <span className="flex items-center gap-3">
               <Link href="/signin" className="hover:text-ember">Sign in</Link>
               <Link href="/signup" className="rounded bg-ember px-3 py-1 text-white hover:opacity-90">Create account</Link>
             </span>

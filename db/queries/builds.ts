@@ -1,0 +1,216 @@
+import "server-only";
+import { and, desc, eq, ne, or, sql } from "drizzle-orm";
+import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
+import { db } from "../client";
+import { buildMembers, buildRevisions, builds, revisionParts, revisionResults, users } from "../schema";
+import { newId } from "./users";
+
+export interface BuildSummary {
+  id: string;
+  ownerId: string;
+  ownerName: string;
+  title: string;
+  summary: string;
+  visibility: "private" | "shared";
+  variantOf: string | null;
+  variantNote: string | null;
+  currentRevision: number;
+  updatedAt: Date;
+}
+
+export interface RevisionRow {
+  id: string;
+  buildId: string;
+  number: number;
+  design: unknown;
+  note: string;
+  createdBy: string;
+  createdAt: Date;
+}
+
+const summaryColumns = {
+  id: builds.id,
+  ownerId: builds.ownerId,
+  ownerName: users.displayName,
+  title: builds.title,
+  summary: builds.summary,
+  visibility: builds.visibility,
+  variantOf: builds.variantOf,
+  variantNote: builds.variantNote,
+  currentRevision: builds.currentRevision,
+  updatedAt: builds.updatedAt,
+};
+
+// MariaDB keeps JSON as LONGTEXT: the driver returns text.
+function parseJson(value: unknown): unknown {
+  return typeof value === "string" ? JSON.parse(value) : value;
+}
+
+/** The viewer's own builds and the ones shared with them (members first, then shared). */
+export async function listBuilds({ viewer }: { viewer: { id: string; role: string } }): Promise<{ mine: BuildSummary[]; shared: BuildSummary[] }> {
+  const mine = await db()
+    .select(summaryColumns)
+    .from(builds)
+    .innerJoin(users, eq(users.id, builds.ownerId))
+    .where(eq(builds.ownerId, viewer.id))
+    .orderBy(desc(builds.updatedAt))
+    .limit(500);
+  const shared = await db()
+    .select(summaryColumns)
+    .from(builds)
+    .innerJoin(users, eq(users.id, builds.ownerId))
+    .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer.id)))
+    .where(and(ne(builds.ownerId, viewer.id), or(eq(builds.visibility, "shared"), eq(buildMembers.userId, viewer.id))))
+    .orderBy(desc(builds.updatedAt))
+    .limit(500);
+  return { mine, shared };
+}
+
+/** A build with the viewer's access; undefined when it does not exist or may not be seen. */
+export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer }): Promise<(BuildSummary & { access: BuildAccess }) | undefined> {
+  const rows = await db()
+    .select({ ...summaryColumns, memberEdit: buildMembers.canEdit, memberUser: buildMembers.userId })
+    .from(builds)
+    .innerJoin(users, eq(users.id, builds.ownerId))
+    .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer?.id ?? "")))
+    .where(eq(builds.id, id))
+    .limit(1);
+  const row = rows[0];
+  if (!row) return undefined;
+  const { memberEdit, memberUser, ...build } = row;
+  const access = buildAccess(viewer, {
+    ownerId: build.ownerId,
+    visibility: build.visibility,
+    member: memberUser ? { canEdit: Boolean(memberEdit) } : null,
+  });
+  return access.canView ? { ...build, access } : undefined;
+}
+
+export async function getRevision({ buildId, number }: { buildId: string; number: number }): Promise<RevisionRow | undefined> {
+  const rows = await db()
+    .select()
+    .from(buildRevisions)
+    .where(and(eq(buildRevisions.buildId, buildId), eq(buildRevisions.number, number)))
+    .limit(1);
+  const row = rows[0];
+  return row ? { ...row, design: parseJson(row.design) } : undefined;
+}
+
+export async function listRevisions({ buildId }: { buildId: string }): Promise<Omit<RevisionRow, "design">[]> {
+  return db()
+    .select({
+      id: buildRevisions.id,
+      buildId: buildRevisions.buildId,
+      number: buildRevisions.number,
+      note: buildRevisions.note,
+      createdBy: buildRevisions.createdBy,
+      createdAt: buildRevisions.createdAt,
+    })
+    .from(buildRevisions)
+    .where(eq(buildRevisions.buildId, buildId))
+    .orderBy(desc(buildRevisions.number));
+}
+
+type NewBuild = {
+  ownerId: string;
+  title: string;
+  summary: string;
+  visibility: "private" | "shared";
+  design: unknown;
+  partIds: readonly string[];
+  note: string;
+  variantOf?: string | null;
+  variantNote?: string | null;
+};
+
+/** Creates a build with its first revision, in one transaction. */
+export async function createBuild(input: NewBuild): Promise<{ id: string; revision: number }> {
+  const id = newId();
+  const now = new Date();
+  await db().transaction(async (tx) => {
+    await tx.insert(builds).values({
+      id,
+      ownerId: input.ownerId,
+      title: input.title,
+      summary: input.summary,
+      visibility: input.visibility,
+      variantOf: input.variantOf ?? null,
+      variantNote: input.variantNote ?? null,
+      currentRevision: 1,
+      createdAt: now,
+      updatedAt: now,
+    });
+    const revisionId = newId();
+    await tx.insert(buildRevisions).values({ id: revisionId, buildId: id, number: 1, design: input.design, note: input.note, createdBy: input.ownerId, createdAt: now });
+    if (input.partIds.length) await tx.insert(revisionParts).values(input.partIds.map((partId) => ({ revisionId, partId })));
+  });
+  return { id, revision: 1 };
+}
+
+/** Saves a new immutable revision and makes it current; the build row is locked meanwhile. */
+export async function saveRevision(input: { buildId: string; userId: string; design: unknown; partIds: readonly string[]; note: string }): Promise<number> {
+  return db().transaction(async (tx) => {
+    const rows = await tx.select({ current: builds.currentRevision }).from(builds).where(eq(builds.id, input.buildId)).for("update");
+    const next = (rows[0]?.current ?? 0) + 1;
+    const revisionId = newId();
+    const now = new Date();
+    await tx.insert(buildRevisions).values({ id: revisionId, buildId: input.buildId, number: next, design: input.design, note: input.note, createdBy: input.userId, createdAt: now });
+    if (input.partIds.length) await tx.insert(revisionParts).values(input.partIds.map((partId) => ({ revisionId, partId })));
+    await tx.update(builds).set({ currentRevision: next, updatedAt: now }).where(eq(builds.id, input.buildId));
+    return next;
+  });
+}
+
+export async function updateBuildMeta({ id, title, summary, visibility }: { id: string; title?: string; summary?: string; visibility?: "private" | "shared" }): Promise<void> {
+  const set = { ...(title !== undefined && { title }), ...(summary !== undefined && { summary }), ...(visibility !== undefined && { visibility }) };
+  if (Object.keys(set).length === 0) return;
+  await db().update(builds).set({ ...set, updatedAt: new Date() }).where(eq(builds.id, id));
+}
+
+/** Deletes a build; its revisions, part usage and cached results go with it (cascade). */
+export async function deleteBuild({ id }: { id: string }): Promise<void> {
+  await db().transaction(async (tx) => {
+    await tx.update(builds).set({ variantOf: null }).where(eq(builds.variantOf, id));
+    await tx.delete(builds).where(eq(builds.id, id));
+  });
+}
+
+/** Builds that are variants of `id` (or siblings sharing its origin), for the variants list. */
+export async function listVariants({ id, viewer }: { id: string; viewer: { id: string; role: string } }): Promise<BuildSummary[]> {
+  const root = await db().select({ variantOf: builds.variantOf }).from(builds).where(eq(builds.id, id)).limit(1);
+  const origin = root[0]?.variantOf ?? id;
+  const rows = await db()
+    .select(summaryColumns)
+    .from(builds)
+    .innerJoin(users, eq(users.id, builds.ownerId))
+    .where(or(eq(builds.id, origin), eq(builds.variantOf, origin)))
+    .orderBy(builds.createdAt);
+  return rows.filter((b) => b.ownerId === viewer.id || b.visibility === "shared" || viewer.role === "admin");
+}
+
+/** Builds (by title) whose revisions use a part: such a part cannot be deleted. */
+export async function buildsUsingPart({ partId }: { partId: string }): Promise<{ buildId: string; buildName: string }[]> {
+  return db()
+    .selectDistinct({ buildId: builds.id, buildName: builds.title })
+    .from(revisionParts)
+    .innerJoin(buildRevisions, eq(buildRevisions.id, revisionParts.revisionId))
+    .innerJoin(builds, eq(builds.id, buildRevisions.buildId))
+    .where(eq(revisionParts.partId, partId))
+    .limit(50);
+}
+
+export async function getCachedResult({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<unknown | undefined> {
+  const rows = await db()
+    .select({ result: revisionResults.result })
+    .from(revisionResults)
+    .where(and(eq(revisionResults.revisionId, revisionId), eq(revisionResults.solverVersion, solverVersion)))
+    .limit(1);
+  return rows[0] ? parseJson(rows[0].result) : undefined;
+}
+
+export async function putCachedResult({ revisionId, solverVersion, result }: { revisionId: string; solverVersion: string; result: unknown }): Promise<void> {
+  await db()
+    .insert(revisionResults)
+    .values({ revisionId, solverVersion, result, createdAt: new Date() })
+    .onDuplicateKeyUpdate({ set: { result: sql`VALUES(${revisionResults.result})`, createdAt: new Date() } });
+}

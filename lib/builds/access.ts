@@ -1,0 +1,25 @@
+/** Who may do what with a build. Pure, so pages, routes and tests share one rule. */
+export type BuildViewer = { readonly id: string; readonly role: string } | null;
+
+export type BuildFacts = {
+  readonly ownerId: string;
+  readonly visibility: "private" | "shared";
+  /** The viewer's membership, when they have one. */
+  readonly member?: { readonly canEdit: boolean } | null;
+};
+
+export type BuildAccess = { canView: boolean; canEdit: boolean; isOwner: boolean };
+
+/**
+ * The owner edits; members edit when shared for editing; shared builds are visible to any
+ * signed-in user; admins see everything but edit only their own (they curate, not build).
+ * Reviewers never edit someone else's build.
+ */
+export function buildAccess(viewer: BuildViewer, build: BuildFacts): BuildAccess {
+  if (viewer === null) return { canView: false, canEdit: false, isOwner: false };
+  const isOwner = viewer.id === build.ownerId;
+  const memberEdit = Boolean(build.member?.canEdit) && viewer.role !== "reviewer";
+  const canEdit = isOwner || memberEdit;
+  const canView = canEdit || Boolean(build.member) || build.visibility === "shared" || viewer.role === "admin";
+  return { canView, canEdit, isOwner };
+}

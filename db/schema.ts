@@ -215,3 +215,108 @@ export const revisionResults = mysqlTable(
   },
   (t) => [primaryKey({ columns: [t.revisionId, t.solverVersion] })],
 );
+
+export const REVIEW_STATUSES = ["requested", "approved", "changes_requested", "rejected"] as const;
+export const ANCHOR_KINDS = ["node", "link", "figure"] as const;
+export const NOTIFICATION_KINDS = ["review_requested", "verdict", "comment"] as const;
+
+/** A maker's request that a reviewer check one revision of a build, and the verdict. */
+export const reviews = mysqlTable(
+  "review",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    revisionNumber: int("revision_number").notNull(),
+    requestedBy: varchar("requested_by", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    reviewerId: varchar("reviewer_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    status: mysqlEnum("status", REVIEW_STATUSES).notNull().default("requested"),
+    /** What the maker asks the reviewer to look at. */
+    message: varchar("message", { length: 2000 }).notNull().default(""),
+    summary: varchar("summary", { length: 4000 }).notNull().default(""),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+    decidedAt: datetime("decided_at", { fsp: 3 }),
+  },
+  (t) => [
+    index("review_reviewer_status_idx").on(t.reviewerId, t.status, t.createdAt),
+    index("review_requested_by_idx").on(t.requestedBy, t.createdAt),
+    index("review_build_idx").on(t.buildId, t.createdAt),
+  ],
+);
+
+/** A comment in a review, pinned to a node or link of the heat path or to a figure. */
+export const reviewComments = mysqlTable(
+  "review_comment",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    reviewId: varchar("review_id", { length: 40 })
+      .notNull()
+      .references(() => reviews.id, { onDelete: "cascade" }),
+    authorId: varchar("author_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    anchorKind: mysqlEnum("anchor_kind", ANCHOR_KINDS).notNull(),
+    anchorKey: varchar("anchor_key", { length: 120 }).notNull(),
+    body: varchar("body", { length: 4000 }).notNull(),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("review_comment_review_idx").on(t.reviewId, t.createdAt)],
+);
+
+/** A read-only link to one revision's Budget; only the SHA-256 of the token is kept. */
+export const shareLinks = mysqlTable(
+  "share_link",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    revisionNumber: int("revision_number").notNull(),
+    tokenHash: varchar("token_hash", { length: 64 }).notNull(),
+    createdBy: varchar("created_by", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: datetime("expires_at", { fsp: 3 }),
+    revokedAt: datetime("revoked_at", { fsp: 3 }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [uniqueIndex("share_link_token_unique").on(t.tokenHash), index("share_link_build_idx").on(t.buildId, t.createdAt)],
+);
+
+/** What the header bell lists: review requests, verdicts and comments for one user. */
+export const notifications = mysqlTable(
+  "notification",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    kind: mysqlEnum("kind", NOTIFICATION_KINDS).notNull(),
+    reviewId: varchar("review_id", { length: 40 }).references(() => reviews.id, { onDelete: "cascade" }),
+    buildId: varchar("build_id", { length: 40 }).references(() => builds.id, { onDelete: "cascade" }),
+    text: varchar("text", { length: 500 }).notNull(),
+    readAt: datetime("read_at", { fsp: 3 }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("notification_user_idx").on(t.userId, t.readAt, t.createdAt)],
+);
+
+/** A saved Side by side: two to four builds (optionally pinned revisions), in column order. */
+export const comparisons = mysqlTable(
+  "comparison",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    ownerId: varchar("owner_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    title: varchar("title", { length: 160 }).notNull(),
+    items: json("items").notNull(),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("comparison_owner_idx").on(t.ownerId, t.createdAt)],
+);

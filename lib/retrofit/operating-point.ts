@@ -1,0 +1,111 @@
+import type { DriverMode } from "@/lib/parts";
+import { isThermalInputError, networkSchema, solveSteady, type SteadyResult } from "@/lib/thermal";
+import { compileBuild, type CompiledBuild, type ScenarioHeat } from "./compile";
+import { driverAt, type DriverPoint } from "./electrical/driver";
+import { currentForPower, emitterAt, type EmitterPoint } from "./electrical/emitter";
+import { cellHeat, type PackSummary } from "./electrical/pack";
+import type { ResolvedOptions } from "./options";
+import type { ProblemList } from "./problems";
+import type { ResolvedBuild, ResolvedPart } from "./resolved";
+import type { Traced } from "./trace";
+
+export interface ModeElectrical {
+  emitter: EmitterPoint;
+  /** Current the driver delivers (per emitter × N in parallel wiring). */
+  ledCurrentA: number;
+  outputW: number;
+  driver: DriverPoint;
+  packCurrentA: number | null;
+  cellHeat: Traced | null;
+}
+
+export interface OperatingPoint {
+  converged: boolean;
+  iterations: number;
+  electrical: ModeElectrical;
+  compiled: CompiledBuild;
+  steady: SteadyResult;
+  heat: ScenarioHeat;
+}
+
+/** Electrical state of a mode at a junction temperature. */
+export function modeElectrical(build: ResolvedBuild, e: ResolvedPart<"emitter">, d: ResolvedPart<"driver">, mode: DriverMode, pack: PackSummary | null, tjC: number): ModeElectrical {
+  const n = build.lightEngine.count;
+  const parallel = build.lightEngine.wiring === "parallel";
+  const perEmitter = mode.outputCurrentA !== undefined ? (parallel ? mode.outputCurrentA / n : mode.outputCurrentA) : currentForPower(e, n, mode.outputPowerW ?? 0, tjC);
+  const ep = emitterAt(e, perEmitter, tjC);
+  // A regulated power holds the heat steady as Vf moves; a regulated current lets it fall.
+  if (mode.outputCurrentA === undefined) ep.heatPerKelvin = 0;
+  const ledCurrent = parallel ? perEmitter * n : perEmitter;
+  const outputW = n * ep.powerW;
+  const dp = driverAt(d, mode, outputW, ledCurrent);
+  const v = pack?.nominalVoltage.value ?? null;
+  const packCurrent = pack && v ? dp.inputW / v : null;
+  return { emitter: ep, ledCurrentA: ledCurrent, outputW, driver: dp, packCurrentA: packCurrent, cellHeat: pack && packCurrent !== null ? cellHeat(pack, packCurrent) : null };
+}
+
+/** Steady solve that turns engine errors into a problem. */
+export function trySteady(compiled: CompiledBuild, field: string, problems: ProblemList, validate: boolean): SteadyResult | null {
+  if (validate) {
+    const parsed = networkSchema.safeParse(compiled.network);
+    if (!parsed.success) {
+      const i = parsed.error.issues[0];
+      problems.add(field, `the heat path could not be built: ${i?.path.join(".")}: ${i?.message}`);
+      return null;
+    }
+  }
+  try {
+    return solveSteady(compiled.network);
+  } catch (err) {
+    if (isThermalInputError(err)) {
+      problems.add(field, `no steady state: ${err.message}`);
+      return null;
+    }
+    throw err;
+  }
+}
+
+/**
+ * Junction temperature, emitter power and flux solved together: the emitter's heat enters
+ * the network with its slope ∂P/∂Tj (Vf falls as it warms), the network answers a Tj, the
+ * electrical side is re-evaluated there (curves, driver loss, cell heat, spreading
+ * boundary) until Tj moves less than the tolerance.
+ */
+export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: string, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList): OperatingPoint | null {
+  const e = build.lightEngine.emitter;
+  const d = build.driver.part;
+  if (!e || !d) return null;
+  let tj = build.environment.ambientC;
+  let sinkR: number | null = null;
+  let last: { el: ModeElectrical; compiled: CompiledBuild; steady: SteadyResult; heat: ScenarioHeat } | null = null;
+  for (let k = 1; k <= o.maxIterations; k++) {
+    const el = modeElectrical(build, e, d, mode, pack, tj);
+    const heat: ScenarioHeat = {
+      junctionW: build.lightEngine.count * el.emitter.heatW,
+      junctionWPerK: build.lightEngine.count * el.emitter.heatPerKelvin,
+      junctionRefC: tj,
+      driverW: el.driver.lossW.value ?? 0,
+      cellsW: el.cellHeat?.value ?? 0,
+      chargerW: 0,
+    };
+    const compiled = compileBuild(build, heat, { sinkToAirKPerW: sinkR ?? null }, problems);
+    if (!compiled) return null;
+    if (sinkR === null) sinkR = compiled.sinkEstimateKPerW;
+    const steady = trySteady(compiled, field, problems, k === 1);
+    if (!steady) return null;
+    const tjNew = steady.temperaturesC.junction ?? tj;
+    const newSinkR: number | null = compiled.sinkLink !== null ? (steady.links[compiled.sinkLink]?.kelvinPerWatt ?? sinkR) : sinkR;
+    last = { el, compiled, steady, heat };
+    const moved = Math.abs(tjNew - tj);
+    const sinkMoved = sinkR !== null && newSinkR !== null ? Math.abs(newSinkR - sinkR) / sinkR : 0;
+    tj = tjNew;
+    sinkR = newSinkR;
+    if (moved < o.toleranceK && sinkMoved < 1e-3) {
+      // Re-evaluate the electrical side at the converged Tj so every figure belongs to it.
+      return { converged: true, iterations: k, electrical: modeElectrical(build, e, d, mode, pack, tj), compiled, steady, heat };
+    }
+  }
+  if (!last) return null;
+  problems.add(field, `junction temperature, Vf and power did not settle in ${o.maxIterations} iterations; figures are from the last one`, "warning");
+  return { converged: false, iterations: o.maxIterations, electrical: modeElectrical(build, e, d, mode, pack, tj), compiled: last.compiled, steady: last.steady, heat: last.heat };
+}

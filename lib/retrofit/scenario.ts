@@ -1,0 +1,144 @@
+import { breakdownRise, explainLinks, isThermalInputError, solveTransient, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
+import type { CompiledBuild } from "./compile";
+import type { LinkPlace, NodePlace } from "./compile/builder";
+import { evaluateLimits, worstVerdict, type LimitDef, type LimitResult, type Verdict } from "./limits";
+import { maxCommonScale, requiredLinkResistance } from "./inverse";
+import type { ResolvedOptions } from "./options";
+import type { ProblemList } from "./problems";
+import { q, trace, type Traced } from "./trace";
+
+export interface LinkResult extends LinkPlace {
+  watts: number;
+  kelvinPerWatt: number;
+  trace: Trace;
+}
+
+export interface LadderStep {
+  from: string;
+  to: string;
+  place: string;
+  deltaK: number;
+  watts: number;
+  kelvinPerWatt: number;
+}
+
+export interface Warmup {
+  durationS: number;
+  timesS: number[];
+  temperaturesC: Record<string, number[]>;
+  /** When each limit is first reached; null if not within the warm-up. */
+  crossings: { limitId: LimitResult["id"]; node: string; limitC: number; timeS: number | null }[];
+  /** First time every node is within 1 K of its steady temperature; null if not within the warm-up. */
+  steadyWithinS: number | null;
+}
+
+export interface WhatItTakes {
+  /** Sink-to-air resistance the build's sink has at this operating point, and the most it may have for the junction limit and for the budget (limit − margin). null where the build has no sink link or any resistance would do. */
+  sinkToAir: { presentKPerW: Traced; forLimitKPerW: Traced; forBudgetKPerW: Traced } | null;
+  /** Highest electrical power into the emitters before the first limit is reached, scaling every heat source with it. */
+  maxDrivePowerW: Traced | null;
+  bindingLimit: LimitResult["id"] | null;
+}
+
+export interface ThermalResult {
+  nodes: NodePlace[];
+  links: LinkResult[];
+  temperaturesC: Record<string, number>;
+  /** The same temperatures keyed by place name ("LED junction"). */
+  byPlace: Record<string, number>;
+  energyBalanceW: number;
+  limits: LimitResult[];
+  verdict: Verdict | null;
+  ladder: { riseK: number; steps: LadderStep[]; remainderK: number } | null;
+}
+
+export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, defs: readonly LimitDef[], o: ResolvedOptions): ThermalResult {
+  const traces = explainLinks(compiled.network, steady);
+  const links = compiled.links.map((l, i): LinkResult => ({ ...l, watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: l.trace ?? traces[i]! }));
+  const byPlace = Object.fromEntries(compiled.nodes.map((n) => [n.place, steady.temperaturesC[n.id] ?? 0]));
+  const limits = evaluateLimits(defs, steady.temperaturesC, o.marginK);
+  let ladder: ThermalResult["ladder"] = null;
+  const top = compiled.has.emitter ? "junction" : compiled.has.charger ? "charger" : compiled.has.cells ? "cells" : null;
+  if (top) {
+    const r = breakdownRise(compiled.network, steady, top);
+    ladder = { riseK: r.riseK, remainderK: r.remainderK, steps: r.steps.map((s) => ({ from: s.from, to: s.to, place: compiled.links[s.link]?.place ?? `${s.from} → ${s.to}`, deltaK: s.deltaK, watts: s.watts, kelvinPerWatt: s.kelvinPerWatt })) };
+  }
+  return { nodes: compiled.nodes, links, temperaturesC: steady.temperaturesC, byPlace, energyBalanceW: steady.energyBalanceW, limits, verdict: worstVerdict(limits.map((l) => l.verdict)), ladder };
+}
+
+export function warmup(network: Network, steady: SteadyResult, limits: readonly LimitResult[], durationS: number, o: ResolvedOptions, field: string, problems: ProblemList): Warmup | null {
+  const maxLimits = limits.filter((l) => l.kind === "max");
+  try {
+    const r = solveTransient(network, { durationS, stepS: durationS / o.warmupIntervals, thresholds: maxLimits.map((l) => ({ node: l.node, limitC: l.limitC })) });
+    let steadyAt: number | null = null;
+    for (let k = 0; k < r.timesS.length && steadyAt === null; k++) {
+      if (network.nodes.every((n) => Math.abs((r.temperaturesC[n.id]?.[k] ?? 0) - (steady.temperaturesC[n.id] ?? 0)) <= 1)) steadyAt = r.timesS[k] ?? null;
+    }
+    return {
+      durationS,
+      timesS: r.timesS,
+      temperaturesC: r.temperaturesC,
+      crossings: maxLimits.map((l, i) => ({ limitId: l.id, node: l.node, limitC: l.limitC, timeS: r.crossings?.[i]?.timeS ?? null })),
+      steadyWithinS: steadyAt,
+    };
+  } catch (err) {
+    if (!isThermalInputError(err)) throw err;
+    problems.add(field, `warm-up could not be worked out: ${err.message}`, "warning");
+    return null;
+  }
+}
+
+const kpw = (value: number | null, what: string, equation: string, inputs: Trace["inputs"], notes: string[], source: string): Traced => ({
+  value,
+  unit: "K/W",
+  trace: trace({ element: "inverse", formula: what, equation, inputs, result: q("R", what, value ?? 0, "K/W"), source, notes }),
+});
+
+const SEARCH = "lib/retrofit inverse search (Illinois regula falsi on steady solves of lib/thermal)";
+
+/** "What it takes": required sink resistance and the highest drive power, at frozen sources. */
+export function whatItTakes(compiled: CompiledBuild, steady: SteadyResult, limits: readonly LimitResult[], driveW: number, o: ResolvedOptions, field: string, problems: ProblemList): WhatItTakes | null {
+  // Sources frozen at the operating point: the searches scale or hold them as they are.
+  const frozen: Network = { ...compiled.network, sources: compiled.network.sources.map((s) => ({ node: s.node, watts: s.watts + (s.wattsPerKelvin ?? 0) * ((steady.temperaturesC[s.node] ?? 0) - (s.referenceC ?? compiled.network.ambientC)) })) };
+  try {
+    let sinkToAir: WhatItTakes["sinkToAir"] = null;
+    const j = limits.find((l) => l.id === "junction");
+    if (compiled.sinkLink !== null && j) {
+      const present = steady.links[compiled.sinkLink]?.kelvinPerWatt ?? 1;
+      const lim = requiredLinkResistance(frozen, steady, compiled.sinkLink, "junction", j.limitC);
+      const bud = requiredLinkResistance(frozen, steady, compiled.sinkLink, "junction", j.limitC - o.marginK);
+      const inputs = [q("T_j,max", "junction limit", j.limitC, "°C"), q("margin", "budget margin", o.marginK, "K"), q("P_j", "heat at the junction (held)", frozen.sources.find((s) => s.node === "junction")?.watts ?? 0, "W")];
+      const notes = ["Heat held at this mode's operating point; the sink's own link replaced by a plain resistance during the search; searched over 0.001–1000 K/W (null: any sink in that range will do)."];
+      const infeasible = (f: boolean) => (f ? [] : ["Even a perfect sink does not do it: the rest of the heat path is too hot."]);
+      sinkToAir = {
+        presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/q across the sink's link", [], [], "lib/thermal steady solve (effective resistance at the solution)"),
+        forLimitKPerW: kpw(lim.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max", "find R: Tj(R) = T_j,max", inputs, [...notes, ...infeasible(lim.feasible)], SEARCH),
+        forBudgetKPerW: kpw(bud.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max − margin", "find R: Tj(R) = T_j,max − margin", inputs, [...notes, ...infeasible(bud.feasible)], SEARCH),
+      };
+    }
+    const maxLimits = limits.filter((x) => x.kind === "max");
+    const sc = maxCommonScale(frozen, steady, maxLimits);
+    const binding = sc.binding !== null ? (maxLimits[sc.binding]?.id ?? null) : null;
+    const maxDrive: Traced | null =
+      sc.scale === null
+        ? null
+        : {
+            value: sc.scale * driveW,
+            unit: "W",
+            trace: trace({
+              element: "inverse",
+              formula: "Highest drive power before the first limit",
+              equation: "P_max = s·P_drive, s = largest common scale of every heat source that keeps every limit",
+              inputs: [q("P_drive", "electrical power into the emitters now", driveW, "W"), q("s", binding ? `scale at which the ${binding} limit is reached` : "scale (no limit reached up to 1000×)", sc.scale, "1")],
+              result: q("P_max", "highest drive power", sc.scale * driveW, "W"),
+              source: SEARCH,
+              notes: ["Every heat source (emitter, driver, cells) is scaled together, as turning the drive up would; Vf, heat fraction and efficiency held at this operating point."],
+            }),
+          };
+    return { sinkToAir, maxDrivePowerW: maxDrive, bindingLimit: binding };
+  } catch (err) {
+    if (!isThermalInputError(err)) throw err;
+    problems.add(field, `"what it takes" could not be worked out: ${err.message}`, "warning");
+    return null;
+  }
+}

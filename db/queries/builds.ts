@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq, ne, or, sql } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
 import { db } from "../client";
-import { buildMembers, buildRevisions, builds, revisionParts, revisionResults, users } from "../schema";
+import { buildMembers, buildRevisions, builds, reviews, revisionParts, revisionResults, users } from "../schema";
 import { newId } from "./users";
 
 export interface BuildSummary {
@@ -69,7 +69,13 @@ export async function listBuilds({ viewer }: { viewer: { id: string; role: strin
 /** A build with the viewer's access; undefined when it does not exist or may not be seen. */
 export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer }): Promise<(BuildSummary & { access: BuildAccess }) | undefined> {
   const rows = await db()
-    .select({ ...summaryColumns, memberEdit: buildMembers.canEdit, memberUser: buildMembers.userId })
+    .select({
+      ...summaryColumns,
+      memberEdit: buildMembers.canEdit,
+      memberUser: buildMembers.userId,
+      // Any review of this build assigned to the viewer lets them read it (never edit).
+      assigned: sql<number>`exists(select 1 from ${reviews} where ${reviews.buildId} = ${builds.id} and ${reviews.reviewerId} = ${viewer?.id ?? ""})`,
+    })
     .from(builds)
     .innerJoin(users, eq(users.id, builds.ownerId))
     .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer?.id ?? "")))
@@ -77,11 +83,12 @@ export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer
     .limit(1);
   const row = rows[0];
   if (!row) return undefined;
-  const { memberEdit, memberUser, ...build } = row;
+  const { memberEdit, memberUser, assigned, ...build } = row;
   const access = buildAccess(viewer, {
     ownerId: build.ownerId,
     visibility: build.visibility,
     member: memberUser ? { canEdit: Boolean(memberEdit) } : null,
+    assignedReviewer: Number(assigned) === 1,
   });
   return access.canView ? { ...build, access } : undefined;
 }

@@ -6,6 +6,8 @@ export type BuildFacts = {
   readonly visibility: "private" | "shared";
   /** The viewer's membership, when they have one. */
   readonly member?: { readonly canEdit: boolean } | null;
+  /** The viewer is the reviewer of one of the build's reviews: they may read it, never edit it. */
+  readonly assignedReviewer?: boolean;
 };
 
 export type BuildAccess = { canView: boolean; canEdit: boolean; isOwner: boolean };
@@ -13,13 +15,13 @@ export type BuildAccess = { canView: boolean; canEdit: boolean; isOwner: boolean
 /**
  * The owner edits; members edit when shared for editing; shared builds are visible to any
  * signed-in user; admins see everything but edit only their own (they curate, not build).
- * Reviewers never edit someone else's build.
+ * Reviewers never edit someone else's build; an assigned reviewer sees the build under review.
  */
 export function buildAccess(viewer: BuildViewer, build: BuildFacts): BuildAccess {
   if (viewer === null) return { canView: false, canEdit: false, isOwner: false };
   const isOwner = viewer.id === build.ownerId;
   const memberEdit = Boolean(build.member?.canEdit) && viewer.role !== "reviewer";
   const canEdit = isOwner || memberEdit;
-  const canView = canEdit || Boolean(build.member) || build.visibility === "shared" || viewer.role === "admin";
+  const canView = canEdit || Boolean(build.member) || Boolean(build.assignedReviewer) || build.visibility === "shared" || viewer.role === "admin";
   return { canView, canEdit, isOwner };
 }

@@ -1,0 +1,24 @@
+import "server-only";
+import { getReview, type ReviewRow } from "@/db/queries/reviews";
+import type { BuildViewer } from "@/lib/builds/access";
+import { ApiError } from "@/lib/http/api-error";
+
+export type ReviewRole = "reviewer" | "owner" | "admin";
+
+/** What a review looks like in our answers: the stored row plus whether a newer revision exists. */
+export type ReviewView = ReviewRow & { olderRevision: boolean };
+
+export function reviewView(row: ReviewRow): ReviewView {
+  return { ...row, olderRevision: row.revisionNumber < row.currentRevision };
+}
+
+/**
+ * The review when the viewer takes part in it (its reviewer, the build's owner) or is an
+ * admin; otherwise 404, so a review's existence is not told.
+ */
+export async function loadReview({ id, viewer }: { id: string; viewer: NonNullable<BuildViewer> }): Promise<{ review: ReviewView; role: ReviewRole }> {
+  const row = await getReview({ id });
+  const role: ReviewRole | null = !row ? null : row.reviewerId === viewer.id ? "reviewer" : row.buildOwnerId === viewer.id ? "owner" : viewer.role === "admin" ? "admin" : null;
+  if (!row || !role) throw new ApiError("not_found:review", "No such review, or you take no part in it.", "id");
+  return { review: reviewView(row), role };
+}

@@ -1,8 +1,10 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
+import { benchRetrofit } from "./bench-retrofit";
 import { benchThermal } from "./bench-thermal";
 
 async function main(): Promise<void> {
   await benchThermal();
+  await benchRetrofit();
 }
 
 main().catch((e: unknown) => {

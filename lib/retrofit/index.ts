@@ -42,3 +42,4 @@ export { chargePlan, CC_FRACTION, TERMINATION_FRACTION } from "./electrical/char
 export { emitterAt, vfAt } from "./electrical/emitter";
 export type { Problem, Severity } from "./problems";
 export type { Traced } from "./trace";
+export { quickCheck, quickCheckInputSchema, QUICK_CHECK_DEFAULT_MAX_TJ_C, type QuickCheckInput, type QuickCheckResult } from "./quick-check";

@@ -87,9 +87,11 @@ export function compileCells(b: NetworkBuilder, build: ResolvedBuild, g: Housing
 
 export function compileCharger(b: NetworkBuilder, build: ResolvedBuild, g: HousingGeometry): boolean {
   if (!build.pack.charger) return false;
-  const area = build.pack.chargerBoardAreaM2 ?? DEFAULT_CHARGER_AREA_M2;
+  // Chargers in parallel are separate boards: one node (they run alike) with all their area.
+  const count = build.pack.chargerCount ?? build.pack.charger.specs.parallelCount ?? 1;
+  const area = count * (build.pack.chargerBoardAreaM2 ?? DEFAULT_CHARGER_AREA_M2);
   if (build.pack.chargerBoardAreaM2 === undefined) b.problems.add("pack.chargerBoardAreaM2", "charger board area not given: 26 mm × 17 mm assumed", "info");
-  b.node("charger", PLACES.charger, "pack.charger", boardCapacity(0.002, "charger board"));
+  b.node("charger", PLACES.charger, "pack.charger", boardCapacity(0.002 * count, "charger boards"));
   boardInAir(b, "charger", area, 2, g, "pack.charger", "charger board");
   return true;
 }

@@ -1,0 +1,102 @@
+import { z } from "zod";
+import { KIND_DEFINITIONS } from "@/lib/parts";
+import { declaredResistance, explainLinks, isThermalInputError, solveSteady, type Network, type Trace } from "@/lib/thermal";
+import { unitField } from "@/lib/units";
+import { compileSinkToAir } from "./compile/heatsink";
+import { NetworkBuilder } from "./compile/builder";
+import { joint } from "./compile/joints";
+import { requiredLinkResistance } from "./inverse";
+import { verdictFor, type Verdict } from "./limits";
+import { ProblemList, type Problem } from "./problems";
+import { q, trace } from "./trace";
+
+/** Junction limit used when the caller gives none: 125 °C, a common rating of white LEDs (common practice; many allow 150 °C). */
+export const QUICK_CHECK_DEFAULT_MAX_TJ_C = 125;
+
+/**
+ * The no-account quick check: one heat source on one heatsink in open air. The sink is a
+ * declared K/W or its geometry (the heatsink part's fields); an interface and Rth(j-sp)
+ * are optional.
+ */
+export const quickCheckInputSchema = z.strictObject({
+  heatWatts: unitField("power", { gt: 0, max: 500 }),
+  sink: z.union([
+    z.strictObject({ declaredKPerW: unitField("thermalResistance", { gt: 0, max: 1000 }) }),
+    z.strictObject({ geometry: KIND_DEFINITIONS.heatsink.specsSchema }),
+  ]),
+  interface: z.strictObject({ areaM2: unitField("area", { gt: 0, max: 0.1 }), specs: KIND_DEFINITIONS.interface.specsSchema }).optional(),
+  rthJspKPerW: unitField("thermalResistance", { gt: 0, max: 1000, required: false }),
+  ambientC: unitField("temperature", { min: -40, max: 80 }),
+  maxTjC: unitField("temperature", { gt: 0, max: 250, required: false }),
+});
+
+export type QuickCheckInput = z.output<typeof quickCheckInputSchema>;
+
+export interface QuickCheckResult {
+  tjC: number | null;
+  solderPointC: number | null;
+  sinkC: number | null;
+  maxTjC: number;
+  headroomK: number | null;
+  verdict: Verdict | null;
+  /** Present sink-to-air resistance at the solution, and the most it may have for Tj = max and for the 10 K budget margin. */
+  sinkKPerW: number | null;
+  requiredForLimitKPerW: number | null;
+  requiredForBudgetKPerW: number | null;
+  network: Network | null;
+  traces: Trace[];
+  problems: Problem[];
+}
+
+const MARGIN_K = 10;
+
+export function quickCheck(input: QuickCheckInput): QuickCheckResult {
+  const problems = new ProblemList();
+  const maxTj = input.maxTjC ?? QUICK_CHECK_DEFAULT_MAX_TJ_C;
+  if (input.maxTjC === undefined) problems.add("maxTjC", `no junction limit given: ${QUICK_CHECK_DEFAULT_MAX_TJ_C} °C assumed (common practice)`, "info");
+  const b = new NetworkBuilder(input.ambientC, problems);
+  b.node("junction", "LED junction", "heatWatts");
+  b.node("solder", "emitter solder point", "rthJspKPerW");
+  b.node("sink", "heatsink", "sink");
+  const rj = input.rthJspKPerW ?? 1e-6;
+  const tj = declaredResistance({ kelvinPerWatt: rj, source: "Rth(j-sp) as entered" });
+  if (input.rthJspKPerW === undefined) tj.trace.notes.push("No Rth(j-sp) given: the junction is taken at the solder point.");
+  b.resistance("junction", "solder", rj, "junction → solder point (Rth j-sp)", "rthJspKPerW", tj.trace);
+  const jt = input.interface ? joint({ name: "interface", specs: input.interface.specs, curves: {} }, input.interface.areaM2, "interface", problems) : null;
+  const rif = jt?.kelvinPerWatt ?? 1e-6;
+  b.resistance("solder", "sink", rif, "interface → heatsink", "interface", jt?.trace ?? trace({ element: "interface", formula: "No interface given", equation: "R = 0", inputs: [], result: q("R", "resistance", 0, "K/W"), source: "as entered" }));
+  const sinkOut =
+    "declaredKPerW" in input.sink
+      ? compileSinkToAir(b, { rating: "declared", sinkToAirKPerW: input.sink.declaredKPerW, ratedAirflow: "natural" }, "ambient", "sink", input.ambientC)
+      : compileSinkToAir(b, input.sink.geometry, "ambient", "sink.geometry", input.ambientC);
+  const empty: QuickCheckResult = { tjC: null, solderPointC: null, sinkC: null, maxTjC: maxTj, headroomK: null, verdict: null, sinkKPerW: null, requiredForLimitKPerW: null, requiredForBudgetKPerW: null, network: null, traces: [], problems: [] };
+  if (!sinkOut) return { ...empty, problems: problems.list };
+  const network = b.network([{ node: "junction", watts: input.heatWatts }]);
+  try {
+    const s = solveSteady(network);
+    const t = s.temperaturesC;
+    const headroom = maxTj - (t.junction ?? 0);
+    const lim = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj);
+    const bud = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj - MARGIN_K);
+    const atSolution = explainLinks(network, s);
+    const traces = b.linkPlaces.map((l, i) => l.trace ?? atSolution[i]!);
+    return {
+      tjC: t.junction ?? null,
+      solderPointC: t.solder ?? null,
+      sinkC: t.sink ?? null,
+      maxTjC: maxTj,
+      headroomK: headroom,
+      verdict: verdictFor(headroom, MARGIN_K),
+      sinkKPerW: (t.sink! - input.ambientC) / input.heatWatts,
+      requiredForLimitKPerW: lim.kelvinPerWatt,
+      requiredForBudgetKPerW: bud.kelvinPerWatt,
+      network,
+      traces,
+      problems: problems.list,
+    };
+  } catch (err) {
+    if (!isThermalInputError(err)) throw err;
+    problems.add("sink", `no steady state: ${err.message}`);
+    return { ...empty, network, problems: problems.list };
+  }
+}

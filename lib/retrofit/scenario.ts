@@ -98,17 +98,17 @@ const SEARCH = "lib/retrofit inverse search (Illinois regula falsi on steady sol
 
 /** "What it takes": required sink resistance and the highest drive power, at frozen sources. */
 export function whatItTakes(compiled: CompiledBuild, steady: SteadyResult, limits: readonly LimitResult[], driveW: number, o: ResolvedOptions, field: string, problems: ProblemList): WhatItTakes | null {
-  // Sources frozen at the operating point: the searches scale or hold them as they are.
+  // For scaling, sources are frozen at the operating point (a slope scaled with the power would mean nothing).
   const frozen: Network = { ...compiled.network, sources: compiled.network.sources.map((s) => ({ node: s.node, watts: s.watts + (s.wattsPerKelvin ?? 0) * ((steady.temperaturesC[s.node] ?? 0) - (s.referenceC ?? compiled.network.ambientC)) })) };
   try {
     let sinkToAir: WhatItTakes["sinkToAir"] = null;
     const j = limits.find((l) => l.id === "junction");
     if (compiled.sinkLink !== null && j) {
       const present = steady.links[compiled.sinkLink]?.kelvinPerWatt ?? 1;
-      const lim = requiredLinkResistance(frozen, steady, compiled.sinkLink, "junction", j.limitC);
-      const bud = requiredLinkResistance(frozen, steady, compiled.sinkLink, "junction", j.limitC - o.marginK);
-      const inputs = [q("T_j,max", "junction limit", j.limitC, "°C"), q("margin", "budget margin", o.marginK, "K"), q("P_j", "heat at the junction (held)", frozen.sources.find((s) => s.node === "junction")?.watts ?? 0, "W")];
-      const notes = ["Heat held at this mode's operating point; the sink's own link replaced by a plain resistance during the search; searched over 0.001–1000 K/W (null: any sink in that range will do)."];
+      const lim = requiredLinkResistance(compiled.network, steady, compiled.sinkLink, "junction", j.limitC);
+      const bud = requiredLinkResistance(compiled.network, steady, compiled.sinkLink, "junction", j.limitC - o.marginK);
+      const inputs = [q("T_j,max", "junction limit", j.limitC, "°C"), q("margin", "budget margin", o.marginK, "K"), q("P_j", "heat at the junction at this operating point", frozen.sources.find((s) => s.node === "junction")?.watts ?? 0, "W")];
+      const notes = ["The emitter's heat follows Vf(Tj) during the search (linearised at this operating point); driver and cell heat held; the sink's own link replaced by a plain resistance during the search; searched over 0.001–1000 K/W (null: any sink in that range will do)."];
       const infeasible = (f: boolean) => (f ? [] : ["Even a perfect sink does not do it: the rest of the heat path is too hot."]);
       sinkToAir = {
         presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/q across the sink's link", [], [], "lib/thermal steady solve (effective resistance at the solution)"),

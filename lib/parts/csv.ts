@@ -187,7 +187,7 @@ export function partToCsvRow(part: Part | PartInput): Record<string, string> {
 }
 
 /** Parts of one kind → CSV text with the kind's header. */
-export function partsToCsv(parts: readonly Part[], kind: PartKind): string {
+export function partsToCsv(parts: readonly (Part | PartInput)[], kind: PartKind): string {
   const headers = csvHeaders(kind);
   const rows = parts.filter((p) => p.kind === kind).map((p) => headers.map((h) => partToCsvRow(p)[h] ?? ""));
   return Papa.unparse({ fields: headers, data: rows });

@@ -16,3 +16,7 @@ export { mainFigureColumns, formatFieldValue, inputUnitLabel } from "./display";
 export type { FigureColumn } from "./display";
 export { csvColumns, csvHeaders, parsePartRow, parsePartsCsv, partToCsvRow, partsToCsv } from "./csv";
 export type { CsvColumn, CsvError, CsvImport, CsvRowResult } from "./csv";
+export { partListQuerySchema, partPatchSchema, verifySchema, partImportSchema, searchParamsObject, PART_SORTS, MAX_PAGE_SIZE, MAX_IMPORT_ROWS, MAX_EXPORT_ROWS } from "./api-schemas";
+export type { PartListQuery, PartSort, PartPatch, PartImportRequest } from "./api-schemas";
+export { canEditPart, canSeePart } from "./access";
+export type { PartViewer } from "./access";

@@ -15,24 +15,15 @@ export class Client {
   constructor(private readonly origin: string | null = BASE_URL, private readonly address = "203.0.113.10") {}
 
   async request(method: string, path: string, body?: unknown, extraHeaders: Record<string, string> = {}): Promise<Reply> {
-    const headers: Record<string, string> = { "x-forwarded-for": this.address, ...extraHeaders };
-    if (this.origin) headers.origin = this.origin;
+    const headers: Record<string, string> = {};
     if (body !== undefined) headers["content-type"] = "application/json";
-    if (this.cookies.size) headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
-    const response = await fetch(`${BASE_URL}${path}`, {
-      method,
-      headers,
-      body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body),
-      redirect: "manual",
-    });
-    for (const c of response.headers.getSetCookie()) {
-      const [pair] = c.split(";");
-      const [name, ...rest] = (pair ?? "").split("=");
-      if (!name) continue;
-      const value = rest.join("=");
-      if (value === "") this.cookies.delete(name.trim());
-      else this.cookies.set(name.trim(), value);
-    }
+    const raw = body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body);
+    return this.send(method, path, raw, { ...headers, ...extraHeaders });
+  }
+
+  /** Sends a body as it is (FormData, bytes): fetch sets the multipart content type itself. */
+  async send(method: string, path: string, body: BodyInit | undefined, extraHeaders: Record<string, string> = {}): Promise<Reply> {
+    const response = await this.fetchRaw(method, path, body, extraHeaders);
     const text = await response.text();
     let parsed: Json = { text };
     try {
@@ -41,6 +32,23 @@ export class Client {
       // not JSON: keep the text
     }
     return { status: response.status, body: parsed, headers: response.headers };
+  }
+
+  /** The raw response (for downloads), with this client's cookies and origin. */
+  async fetchRaw(method: string, path: string, body?: BodyInit, extraHeaders: Record<string, string> = {}): Promise<Response> {
+    const headers: Record<string, string> = { "x-forwarded-for": this.address, ...extraHeaders };
+    if (this.origin) headers.origin = this.origin;
+    if (this.cookies.size) headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
+    const response = await fetch(`${BASE_URL}${path}`, { method, headers, body, redirect: "manual" });
+    for (const c of response.headers.getSetCookie()) {
+      const [pair] = c.split(";");
+      const [name, ...rest] = (pair ?? "").split("=");
+      if (!name) continue;
+      const value = rest.join("=");
+      if (value === "") this.cookies.delete(name.trim());
+      else this.cookies.set(name.trim(), value);
+    }
+    return response;
   }
 
   get(path: string) {

@@ -1,0 +1,2 @@
+export { ATTACHMENT_TYPES, MAX_ATTACHMENT_BYTES, sniffAttachmentType, describeRefusedType, sanitiseFilename } from "./file-type";
+export type { AttachmentType } from "./file-type";

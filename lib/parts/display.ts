@@ -1,3 +1,4 @@
+import { getMaterial } from "@/lib/thermal";
 import { formatQuantity, QUANTITY_INFO, type UnitPreferences } from "@/lib/units";
 import type { PartKind } from "./common";
 import type { FieldDef } from "./fields";
@@ -29,6 +30,9 @@ export function formatFieldValue(field: FieldDef, value: unknown, prefs: UnitPre
   switch (field.type) {
     case "quantity":
       return typeof value === "number" ? formatQuantity(value, field.quantity, prefs) : "—";
+    case "material":
+      // The handbook name reads better than the id; an unknown id is shown as stored.
+      return typeof value === "string" ? (getMaterial(value)?.name ?? value) : "—";
     case "modes":
       // A table cell has room for the range, not every mode.
       return isModes(value) ? summariseModes(value, prefs) : "—";

@@ -1,9 +1,63 @@
-import { ComingNext } from "@/components/ui/coming-next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { AttachmentsPanel } from "@/components/parts/attachments-panel";
+import { CurveChart } from "@/components/parts/curve-chart";
+import { PROVENANCE_LABELS, VISIBILITY_LABELS } from "@/components/parts/labels";
+import { PartActions } from "@/components/parts/part-actions";
+import { PartFields } from "@/components/parts/part-fields";
+import { getPart } from "@/db/queries/parts";
+import type { CurveKind } from "@/lib/curves";
+import { kindDefinition } from "@/lib/parts";
 import { requirePageUser } from "@/server/auth/session";
+import { partJson, viewerOf } from "@/server/parts-api";
 
 export const metadata = { title: "Part" };
 
-export default async function Page() {
-  await requirePageUser();
-  return <ComingNext title="Part">A part record: fields, curves and attachments.</ComingNext>;
+export default async function Page({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requirePageUser();
+  const { id } = await params;
+  const viewer = viewerOf(user);
+  const record = await getPart({ id, viewer });
+  if (!record) notFound();
+  const part = partJson(record, viewer);
+  const prefs = { length: user.lengthUnits, temperature: user.temperatureUnit } as const;
+  const def = kindDefinition(part.kind);
+  const curves = (def.curveKinds as readonly CurveKind[]).flatMap((kind) => {
+    const curve = part.curves[kind] as { points: { x: number; y: number }[] } | undefined;
+    return curve ? [{ kind, points: curve.points }] : [];
+  });
+  return (
+    <article className="space-y-6">
+      <header className="space-y-2">
+        <p className="text-sm text-ink-soft">
+          <Link href="/parts" className="hover:text-ember">Parts bin</Link> / {def.label}
+        </p>
+        <h1 className="text-2xl font-semibold">{part.name}</h1>
+        <p className="flex flex-wrap gap-2 text-xs">
+          <span className="rounded bg-ember-soft px-2 py-0.5 text-ember">{PROVENANCE_LABELS[part.provenance]}</span>
+          <span className="rounded bg-paper-deep px-2 py-0.5">{VISIBILITY_LABELS[part.visibility]}</span>
+          {part.verified && <span className="rounded bg-ok/10 px-2 py-0.5 text-ok">Verified</span>}
+          <span className="text-ink-soft">by {part.owner.displayName}</span>
+          {part.costEur !== null && <span className="text-ink-soft">· {part.costEur.toFixed(2)} EUR</span>}
+        </p>
+        {part.provenanceNote && <p className="max-w-3xl text-sm text-ink-soft">Source: {part.provenanceNote}</p>}
+        <PartActions id={part.id} name={part.name} canEdit={part.canEdit} isAdmin={user.role === "admin"} verified={part.verified} />
+      </header>
+      <section aria-labelledby="figures-heading" className="space-y-3">
+        <h2 id="figures-heading" className="text-lg font-medium">Figures</h2>
+        <PartFields part={part} prefs={prefs} />
+      </section>
+      {curves.length > 0 && (
+        <section aria-labelledby="curves-heading" className="space-y-3">
+          <h2 id="curves-heading" className="text-lg font-medium">Curves</h2>
+          <div className="grid gap-4 md:grid-cols-2">
+            {curves.map((c) => (
+              <CurveChart key={c.kind} kind={c.kind} points={c.points} prefs={prefs} />
+            ))}
+          </div>
+        </section>
+      )}
+      <AttachmentsPanel partId={part.id} canEdit={part.canEdit} />
+    </article>
+  );
 }

@@ -1,0 +1,77 @@
+import type { CsvError, PartKind, Provenance, Visibility } from "@/lib/parts";
+
+/** What the parts API answers (see server/parts-api.ts); dates are ISO strings. */
+export interface PartSummaryDto {
+  id: string;
+  kind: PartKind;
+  name: string;
+  provenance: Provenance;
+  provenanceNote: string | null;
+  visibility: Visibility;
+  costEur: number | null;
+  verified: boolean;
+  specs: Record<string, unknown>;
+  owner: { id: string; displayName: string };
+  canEdit: boolean;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface PartDto extends PartSummaryDto {
+  /** Curve kind → { points, note? } in storage units, as validated by lib/curves. */
+  curves: Record<string, unknown>;
+  notes: { field: string; message: string }[];
+}
+
+export interface PartPageDto {
+  items: PartSummaryDto[];
+  total: number;
+  page: number;
+  pageSize: number;
+}
+
+export interface AttachmentDto {
+  id: string;
+  filename: string;
+  contentType: string;
+  sizeBytes: number;
+  createdAt: string;
+  url: string;
+}
+
+export interface ImportRowDto {
+  line: number;
+  ok: boolean;
+  name: string | null;
+  errors: CsvError[];
+}
+
+export interface ImportResultDto {
+  mode: "preview" | "commit";
+  kind: PartKind;
+  headerErrors: CsvError[];
+  rows: ImportRowDto[];
+  accepted: number;
+  rejected: number;
+  created?: number;
+}
+
+/** The Parts bin's filters, sort and page: the same names as the API's query string. */
+export interface PartsQuery {
+  kind: PartKind | "";
+  provenance: Provenance | "";
+  owner: "mine" | "everyone";
+  q: string;
+  sort: string;
+  dir: "asc" | "desc";
+  page: number;
+  pageSize: number;
+}
+
+export function queryString(query: PartsQuery): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) {
+    if (value !== "" && value !== undefined) params.set(key, String(value));
+  }
+  return params.toString();
+}

@@ -1,10 +1,12 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
+import { benchParts } from "./bench-parts";
 import { benchRetrofit } from "./bench-retrofit";
 import { benchThermal } from "./bench-thermal";
 
 async function main(): Promise<void> {
   await benchThermal();
   await benchRetrofit();
+  await benchParts();
 }
 
 main().catch((e: unknown) => {

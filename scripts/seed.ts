@@ -5,12 +5,15 @@ loadEnvFile();
 
 async function main(): Promise<void> {
   const { seedAccounts, DEMO_ACCOUNTS } = await import("@/db/seed/accounts");
+  const { seedCatalogue } = await import("@/db/seed/catalogue");
   const { pool } = await import("@/db/client");
   const password = process.env.DEMO_PASSWORD;
   if (!password || password.length < 10) throw new Error("DEMO_PASSWORD (at least 10 characters) is not set; run scripts/env.sh");
-  await seedAccounts(password);
+  const accounts = await seedAccounts(password);
+  const catalogue = await seedCatalogue({ adminId: accounts.admin });
   await pool().end();
   console.log(`[seed] ${DEMO_ACCOUNTS.length} demo accounts ready`);
+  console.log(`[seed] ${Object.keys(catalogue).length} catalogue parts ready (public, verified)`);
 }
 
 main().catch((error: unknown) => {

@@ -4,7 +4,9 @@ import { findShareLinkByHash } from "@/db/queries/shares";
 import { getUserById } from "@/db/queries/users";
 import { ApiError } from "@/lib/http/api-error";
 import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
+import type { BuildEvaluation } from "@/lib/retrofit";
 import { loadDesignParts } from "@/server/builds/load";
+import { solveRevision } from "@/server/builds/solve";
 import { hashShareToken } from "./tokens";
 
 export interface SharedBudget {
@@ -13,13 +15,15 @@ export interface SharedBudget {
   /** The public parts the design uses; a private or shared part is not shown through a link. */
   parts: { id: string; kind: string; name: string; provenance: string; specs: Record<string, unknown>; costEur: number | null }[];
   expiresAt: Date | null;
+  /** The revision's evaluation, worked out as its owner sees the parts (the one solver path, cached). */
+  result: BuildEvaluation;
 }
 
 /**
  * What a share token opens: one revision of one build, read-only, without sign-in. Unknown,
  * revoked and expired tokens are refused with a message saying which (never a 500).
  */
-export async function openShare({ token }: { token: string }): Promise<SharedBudget & { ownerId: string }> {
+export async function openShare({ token }: { token: string }): Promise<SharedBudget> {
   const unknown = new ApiError("not_found:share", "This share link does not exist.", "token");
   if (!SHARE_TOKEN_PATTERN.test(token)) throw unknown;
   const link = await findShareLinkByHash({ tokenHash: hashShareToken(token) });
@@ -31,15 +35,16 @@ export async function openShare({ token }: { token: string }): Promise<SharedBud
   const owner = await getUserById({ id: link.ownerId });
   const build = owner ? await getBuild({ id: link.buildId, viewer: { id: owner.id, role: owner.role } }) : undefined;
   const revision = build ? await getRevision({ buildId: build.id, number: link.revisionNumber }) : undefined;
-  if (!build || !revision) throw unknown;
+  if (!owner || !build || !revision) throw unknown;
   const parts = await loadDesignParts({ design: revision.design, viewer: null });
+  const solved = await solveRevision({ build, revision, viewer: { id: owner.id, role: owner.role } });
   return {
-    ownerId: link.ownerId,
     build: { id: build.id, title: build.title, summary: build.summary, ownerName: build.ownerName, variantNote: build.variantNote },
     revision: { number: revision.number, note: revision.note, createdAt: revision.createdAt, design: revision.design },
     parts: [...parts.values()]
       .filter((p) => p.visibility === "public")
       .map((p) => ({ id: p.id, kind: p.kind, name: p.name, provenance: p.provenance, specs: p.specs, costEur: p.costEur })),
     expiresAt: link.expiresAt,
+    result: solved.evaluation,
   };
 }

@@ -1,0 +1,61 @@
+import "server-only";
+import { getBuild, getRevision, type RevisionRow } from "@/db/queries/builds";
+import type { BuildViewer } from "@/lib/builds/access";
+import { designDiff, figureRows, ladders, warmupSeries } from "@/lib/compare";
+import { ApiError } from "@/lib/http/api-error";
+import type { CompareItem } from "@/lib/reviews/api-schemas";
+import { buildDesignSchema, type BuildDesign } from "@/lib/retrofit";
+import { loadDesignParts, type LoadedBuild } from "@/server/builds/load";
+import { solveRevision } from "@/server/builds/solve";
+
+type Viewer = NonNullable<BuildViewer>;
+
+/**
+ * Every item's build and revision, or a refusal of the whole list: an item the viewer may
+ * not see stops the comparison before anything about the other items is read or returned.
+ */
+export async function loadItems({ items, viewer }: { items: readonly CompareItem[]; viewer: Viewer }): Promise<{ build: LoadedBuild; revision: RevisionRow }[]> {
+  const out: { build: LoadedBuild; revision: RevisionRow }[] = [];
+  for (const [i, item] of items.entries()) {
+    const build = await getBuild({ id: item.buildId, viewer });
+    if (!build) throw new ApiError("not_found:build", `Build ${item.buildId} does not exist or is not shared with you, so nothing is compared.`, `items[${i}]`);
+    const number = item.revision ?? build.currentRevision;
+    const revision = await getRevision({ buildId: build.id, number });
+    if (!revision) throw new ApiError("not_found:revision", `Build ${item.buildId} has no revision ${number}, so nothing is compared.`, `items[${i}]`);
+    out.push({ build, revision });
+  }
+  return out;
+}
+
+export type Comparison = Awaited<ReturnType<typeof compareItems>>;
+
+/** Solves each revision through the one solver path (cached per revision) and lines the results up. */
+export async function compareItems({ items, viewer }: { items: readonly CompareItem[]; viewer: Viewer }) {
+  const loaded = await loadItems({ items, viewer });
+  const designs: BuildDesign[] = loaded.map(({ build, revision }, i) => {
+    const parsed = buildDesignSchema.safeParse(revision.design);
+    if (!parsed.success) throw new ApiError("unprocessable:design", `The stored design of ${build.title} (revision ${revision.number}) no longer reads: ${parsed.error.issues[0]?.message ?? "invalid"}.`, `items[${i}]`);
+    return parsed.data;
+  });
+  const solved = await Promise.all(loaded.map(({ build, revision }) => solveRevision({ build, revision, viewer })));
+  const names = new Map<string, string>();
+  for (const { revision } of loaded) for (const [id, p] of await loadDesignParts({ design: revision.design, viewer })) names.set(id, p.name);
+  const evals = solved.map((s) => s.evaluation);
+  const scenarioIds = [...new Set(evals.flatMap((e) => e.scenarios.map((s) => s.id)))];
+  return {
+    columns: loaded.map(({ build, revision }, i) => ({
+      buildId: build.id,
+      revision: revision.number,
+      currentRevision: build.currentRevision,
+      title: build.title,
+      variantNote: build.variantNote,
+      ownerName: build.ownerName,
+      verdict: evals[i]?.verdict ?? null,
+      problems: (evals[i]?.problems ?? []).filter((p) => p.severity !== "info"),
+    })),
+    differences: designDiff(designs, (id) => names.get(id)),
+    figures: figureRows(evals),
+    warmups: warmupSeries(evals),
+    ladders: scenarioIds.map((id) => ({ scenarioId: id, scenarioName: evals.flatMap((e) => e.scenarios).find((s) => s.id === id)?.name ?? id, columns: ladders(evals, id) })),
+  };
+}

@@ -66,19 +66,46 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
   return { nodes: compiled.nodes, links, temperaturesC: steady.temperaturesC, byPlace, energyBalanceW: steady.energyBalanceW, limits, verdict: worstVerdict(limits.map((l) => l.verdict)), ladder };
 }
 
+/** Warm-up in quarters: stops after the quarter in which every node came within 1 K of steady ("60 min or until steady"). */
+const WARMUP_CHUNKS = 4;
+const STEADY_BAND_K = 1;
+
 export function warmup(network: Network, steady: SteadyResult, limits: readonly LimitResult[], durationS: number, o: ResolvedOptions, field: string, problems: ProblemList): Warmup | null {
   const maxLimits = limits.filter((l) => l.kind === "max");
+  const thresholds = maxLimits.map((l) => ({ node: l.node, limitC: l.limitC }));
+  const chunkS = durationS / WARMUP_CHUNKS;
+  const stepS = durationS / o.warmupIntervals;
+  const timesS: number[] = [];
+  const temps: Record<string, number[]> = Object.fromEntries(network.nodes.map((n) => [n.id, [] as number[]]));
+  const crossings: (number | null)[] = maxLimits.map(() => null);
+  let steadyAt: number | null = null;
+  let initialC: Record<string, number> | undefined;
   try {
-    const r = solveTransient(network, { durationS, stepS: durationS / o.warmupIntervals, thresholds: maxLimits.map((l) => ({ node: l.node, limitC: l.limitC })) });
-    let steadyAt: number | null = null;
-    for (let k = 0; k < r.timesS.length && steadyAt === null; k++) {
-      if (network.nodes.every((n) => Math.abs((r.temperaturesC[n.id]?.[k] ?? 0) - (steady.temperaturesC[n.id] ?? 0)) <= 1)) steadyAt = r.timesS[k] ?? null;
+    for (let c = 0; c < WARMUP_CHUNKS && steadyAt === null; c++) {
+      const t0 = c * chunkS;
+      const r = solveTransient(network, { durationS: chunkS, stepS, thresholds, ...(initialC ? { initialC } : {}) });
+      // Each quarter after the first starts where the last ended: skip its repeated first sample.
+      for (let k = c === 0 ? 0 : 1; k < r.timesS.length; k++) {
+        const t = t0 + r.timesS[k]!;
+        timesS.push(t);
+        let inBand = true;
+        for (const n of network.nodes) {
+          const v = r.temperaturesC[n.id]![k]!;
+          temps[n.id]!.push(v);
+          if (Math.abs(v - (steady.temperaturesC[n.id] ?? v)) > STEADY_BAND_K) inBand = false;
+        }
+        if (inBand && steadyAt === null) steadyAt = t;
+      }
+      r.crossings?.forEach((x, i) => {
+        if (crossings[i] === null && x.timeS !== null) crossings[i] = t0 + x.timeS;
+      });
+      initialC = Object.fromEntries(network.nodes.map((n) => [n.id, temps[n.id]![temps[n.id]!.length - 1]!]));
     }
     return {
-      durationS,
-      timesS: r.timesS,
-      temperaturesC: r.temperaturesC,
-      crossings: maxLimits.map((l, i) => ({ limitId: l.id, node: l.node, limitC: l.limitC, timeS: r.crossings?.[i]?.timeS ?? null })),
+      durationS: timesS[timesS.length - 1] ?? 0,
+      timesS,
+      temperaturesC: temps,
+      crossings: maxLimits.map((l, i) => ({ limitId: l.id, node: l.node, limitC: l.limitC, timeS: crossings[i] ?? null })),
       steadyWithinS: steadyAt,
     };
   } catch (err) {

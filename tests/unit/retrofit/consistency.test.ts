@@ -62,6 +62,11 @@ describe("verdict words (PRODUCT.md: ≥ 10 K within budget, 0–10 K tight, bel
     expect(hi.timesS.length).toBeLessThanOrEqual(241);
     const lo = r.scenarios.find((s) => s.id === "mode:low")!.warmup!;
     expect(lo.crossings.every((c) => c.timeS === null)).toBe(true);
+    // "60 min or until steady": low settles within 1 K before the hour, so its curve stops at the end of that quarter.
+    expect(lo.steadyWithinS).not.toBeNull();
+    expect(lo.durationS).toBeLessThan(3600);
+    expect(lo.durationS).toBeGreaterThanOrEqual(lo.steadyWithinS!);
+    expect(lo.timesS.length).toBe(lo.temperaturesC.junction!.length);
   });
 });
 

@@ -1,20 +1,19 @@
 /**
  * Parts bin benchmark: 5,000 parts in a dedicated database (sinkwise_bench), a production
- * server of the current build on 127.0.0.1:3300, and the median time of the list API with
+ * server of the current build on a free loopback port (3310–3399), and the median time of the list API with
  * filter + sort + search as the Parts bin sends it. Target from the parts issue: median ≤ 50 ms.
  * Prints figures, asserts nothing.
  */
 import { execFileSync, spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { existsSync } from "node:fs";
+import { createConnection } from "node:net";
 import mysql from "mysql2/promise";
 import { partSchema, type PartInput } from "../lib/parts";
 import { CATALOGUE } from "../db/seed/catalogue-data";
 import { loadEnvFile } from "./load-env";
 
 const BENCH_DB = "sinkwise_bench";
-const PORT = 3300;
-const BASE = `http://127.0.0.1:${PORT}`;
 const PARTS = 5000;
 const RUNS = 50;
 
@@ -80,8 +79,26 @@ async function seedParts(conn: mysql.Connection): Promise<void> {
   await conn.query("ANALYZE TABLE part");
 }
 
-async function waitFor(url: string, tries = 300): Promise<void> {
+/** True when something already answers on 127.0.0.1:port (another engineer's server, say). */
+function portBusy(port: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const socket = createConnection(port, "127.0.0.1");
+    socket.once("connect", () => {
+      socket.destroy();
+      resolve(true);
+    });
+    socket.once("error", () => resolve(false));
+  });
+}
+
+async function freePort(): Promise<number> {
+  for (let port = 3310; port < 3400; port++) if (!(await portBusy(port))) return port;
+  throw new Error("no free port in 3310–3399");
+}
+
+async function waitFor(url: string, alive: () => boolean, tries = 300): Promise<void> {
   for (let i = 0; i < tries; i++) {
+    if (!alive()) throw new Error("the bench server exited");
     try {
       if ((await fetch(url)).status < 500) return;
     } catch {
@@ -94,6 +111,8 @@ async function waitFor(url: string, tries = 300): Promise<void> {
 
 export async function benchParts(): Promise<void> {
   loadEnvFile();
+  const PORT = await freePort();
+  const BASE = `http://127.0.0.1:${PORT}`;
   const env = { ...process.env, DATABASE_NAME: BENCH_DB, APP_URL: BASE, NEXT_TELEMETRY_DISABLED: "1" };
   console.log(`\n[bench:parts] database ${BENCH_DB}: migrating and seeding ${PARTS} parts`);
   execFileSync("bash", ["scripts/db.sh", "start"], { stdio: "ignore" });
@@ -112,9 +131,14 @@ export async function benchParts(): Promise<void> {
     console.log("[bench:parts] no production build: running next build");
     execFileSync("node", ["node_modules/next/dist/bin/next", "build"], { env, stdio: "ignore" });
   }
-  const server = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { env, stdio: "ignore" });
+  // Its own process group: `next start` runs next-server as a child, and both must stop.
+  const server = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { env, stdio: "ignore", detached: true });
+  let exited = false;
+  server.once("exit", () => {
+    exited = true;
+  });
   try {
-    await waitFor(`${BASE}/api/v1/health`);
+    await waitFor(`${BASE}/api/v1/health`, () => !exited);
     const signIn = await fetch(`${BASE}/api/v1/auth/signin`, {
       method: "POST",
       headers: { "content-type": "application/json", origin: BASE, "x-forwarded-for": "198.51.100.7" },
@@ -152,7 +176,10 @@ export async function benchParts(): Promise<void> {
     console.log(`[bench:parts]   median ${med.toFixed(1)} ms, p90 ${quantile(samples, 0.9).toFixed(1)} ms, max ${Math.max(...samples).toFixed(1)} ms — target median ≤ 50 ms: ${med <= 50 ? "met" : "NOT met"}`);
     for (const [q, total] of totals) console.log(`[bench:parts]   ${total} matching  ?${q}`);
   } finally {
-    server.kill("SIGTERM");
-    await new Promise((r) => server.once("exit", r));
+    if (!exited && server.pid) {
+      const gone = new Promise((r) => server.once("exit", r));
+      process.kill(-server.pid, "SIGTERM");
+      await gone;
+    }
   }
 }

@@ -1,9 +1,48 @@
-import { ComingNext } from "@/components/ui/coming-next";
+import Link from "next/link";
+import { listBuilds, type BuildSummary } from "@/db/queries/builds";
+import { NewBuildButton } from "@/components/builds/new-build-button";
 import { requirePageUser } from "@/server/auth/session";
 
 export const metadata = { title: "Builds" };
 
-export default async function Page() {
-  await requirePageUser();
-  return <ComingNext title="Builds">Your retrofits and the ones shared with you.</ComingNext>;
+function BuildList({ builds, empty }: { builds: BuildSummary[]; empty: string }) {
+  if (builds.length === 0) return <p className="text-sm text-ink-soft">{empty}</p>;
+  return (
+    <ul className="divide-y divide-line rounded-lg border border-line bg-white/60">
+      {builds.map((b) => (
+        <li key={b.id} className="flex flex-wrap items-baseline gap-x-4 gap-y-1 px-4 py-3">
+          <Link href={`/builds/${b.id}`} className="font-medium hover:text-ember">{b.title}</Link>
+          {b.variantNote && <span className="rounded bg-ember-soft px-1.5 text-xs text-ember">variant: {b.variantNote}</span>}
+          <span className="text-xs text-ink-soft">revision {b.currentRevision} · {b.ownerName} · {b.visibility}</span>
+          <span className="ml-auto flex gap-3 text-sm">
+            <Link href={`/builds/${b.id}`} className="text-ink-soft hover:text-ember">Heat path</Link>
+            <Link href={`/builds/${b.id}/budget`} className="text-ink-soft hover:text-ember">Budget</Link>
+          </span>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
+export default async function BuildsPage() {
+  const user = await requirePageUser();
+  const { mine, shared } = await listBuilds({ viewer: user });
+  return (
+    <div className="space-y-8">
+      <div className="flex items-center gap-4">
+        <h1 className="text-2xl font-semibold">Builds</h1>
+        <div className="ml-auto">
+          <NewBuildButton />
+        </div>
+      </div>
+      <section className="space-y-3">
+        <h2 className="text-lg font-medium">Mine</h2>
+        <BuildList builds={mine} empty="No builds yet. Start one, or copy a shared build." />
+      </section>
+      <section className="space-y-3">
+        <h2 className="text-lg font-medium">Shared with me</h2>
+        <BuildList builds={shared} empty="Nothing is shared with you yet." />
+      </section>
+    </div>
+  );
 }

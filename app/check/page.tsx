@@ -1,13 +1,15 @@
-import { ComingNext } from "@/components/ui/coming-next";
+import { QuickCheckForm } from "@/components/check/quick-check-form";
 
 export const metadata = { title: "Quick check" };
 
 export default function QuickCheckPage() {
   return (
-    <ComingNext title="Quick check">
-      One emitter power, one heatsink (declared K/W or measured) and the ambient temperature give
-      the junction and sink temperatures, a verdict and the sink resistance you need. No account
-      needed.
-    </ComingNext>
+    <div className="space-y-4">
+      <div>
+        <h1 className="text-2xl font-semibold">Quick check</h1>
+        <p className="text-sm text-ink-soft">Is this heatsink enough for this emitter? No account needed.</p>
+      </div>
+      <QuickCheckForm />
+    </div>
   );
 }

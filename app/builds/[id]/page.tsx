@@ -1,9 +1,54 @@
-import { ComingNext } from "@/components/ui/coming-next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { listRevisions } from "@/db/queries/builds";
+import { BuildActions } from "@/components/builds/build-actions";
+import type { JsonObject } from "@/components/builds/design-state";
+import { HeatPathEditor } from "@/components/builds/heat-path-editor";
+import { ApiError } from "@/lib/http/api-error";
 import { requirePageUser } from "@/server/auth/session";
+import { loadBuild, loadRevision } from "@/server/builds/load";
 
 export const metadata = { title: "Heat path" };
 
-export default async function Page() {
-  await requirePageUser();
-  return <ComingNext title="Heat path">The build editor.</ComingNext>;
+export default async function HeatPathPage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requirePageUser();
+  const { id } = await params;
+  const build = await loadBuild({ id, viewer: user }).catch((e: unknown) => {
+    if (e instanceof ApiError) notFound();
+    throw e;
+  });
+  const revision = await loadRevision({ build });
+  const history = await listRevisions({ buildId: build.id });
+  return (
+    <div className="grid gap-6 lg:grid-cols-[1fr_16rem]">
+      <div className="space-y-4">
+        <div className="flex flex-wrap items-baseline gap-3">
+          <h1 className="text-2xl font-semibold">{build.title}</h1>
+          <span className="text-sm text-ink-soft">Heat path · revision {revision.number} · {build.ownerName}</span>
+        </div>
+        {build.variantNote && <p className="text-sm">Variant: <span className="rounded bg-ember-soft px-1.5 text-ember">{build.variantNote}</span></p>}
+        <nav className="no-print flex gap-4 text-sm" aria-label="Build">
+          <span className="font-medium text-ember">Heat path</span>
+          <Link href={`/builds/${build.id}/budget`} className="hover:text-ember">Budget</Link>
+          <Link href={`/builds/${build.id}/report`} className="hover:text-ember">Report</Link>
+        </nav>
+        <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
+      </div>
+      <aside className="space-y-4">
+        <BuildActions buildId={build.id} isOwner={build.access.isOwner} />
+        <section className="rounded-lg border border-line bg-white/60 p-3 text-sm">
+          <h2 className="mb-2 font-medium">History</h2>
+          <ol className="space-y-1.5">
+            {history.map((r) => (
+              <li key={r.id}>
+                <span className={r.number === build.currentRevision ? "font-medium" : ""}>r{r.number}</span>{" "}
+                <span className="text-xs text-ink-soft">{r.createdAt.toISOString().slice(0, 16).replace("T", " ")}</span>
+                {r.note && <div className="text-xs text-ink-soft">{r.note}</div>}
+              </li>
+            ))}
+          </ol>
+        </section>
+      </aside>
+    </div>
+  );
 }

@@ -1,9 +1,33 @@
-import { ComingNext } from "@/components/ui/coming-next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { BudgetScreen } from "@/components/budget/budget-screen";
+import { ApiError } from "@/lib/http/api-error";
 import { requirePageUser } from "@/server/auth/session";
+import { loadBuild, loadRevision } from "@/server/builds/load";
 
 export const metadata = { title: "Budget" };
 
-export default async function Page() {
-  await requirePageUser();
-  return <ComingNext title="Budget">Headroom per limit, the temperature ladder, warm-up curves and runtime.</ComingNext>;
+export default async function BudgetPage({ params }: { params: Promise<{ id: string }> }) {
+  const user = await requirePageUser();
+  const { id } = await params;
+  const build = await loadBuild({ id, viewer: user }).catch((e: unknown) => {
+    if (e instanceof ApiError) notFound();
+    throw e;
+  });
+  const revision = await loadRevision({ build });
+  const env = (revision.design as { environment?: { ambientC?: number } }).environment;
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-baseline gap-3">
+        <h1 className="text-2xl font-semibold">{build.title}</h1>
+        <span className="text-sm text-ink-soft">Budget · revision {revision.number}</span>
+      </div>
+      <nav className="no-print flex gap-4 text-sm" aria-label="Build">
+        <Link href={`/builds/${build.id}`} className="hover:text-ember">Heat path</Link>
+        <span className="font-medium text-ember">Budget</span>
+        <Link href={`/builds/${build.id}/report`} className="hover:text-ember">Report</Link>
+      </nav>
+      <BudgetScreen buildId={build.id} ambientC={env?.ambientC ?? 25} />
+    </div>
+  );
 }

@@ -1,0 +1,10 @@
+import { listRevisions } from "@/db/queries/builds";
+import { requireUser } from "@/server/auth/session";
+import { loadBuild } from "@/server/builds/load";
+import { json, route } from "@/server/route";
+
+export const GET = route<{ params: Promise<{ id: string }> }>(async (_request, { params }) => {
+  const user = await requireUser();
+  const build = await loadBuild({ id: (await params).id, viewer: user });
+  return json({ current: build.currentRevision, revisions: await listRevisions({ buildId: build.id }) });
+});

@@ -1,0 +1,39 @@
+import { deleteBuild, saveRevision, updateBuildMeta } from "@/db/queries/builds";
+import { updateBuildSchema } from "@/lib/builds/api-schemas";
+import { ApiError } from "@/lib/http/api-error";
+import { requireUser } from "@/server/auth/session";
+import { assertDesignParts, loadBuild, loadEditableBuild, loadRevision } from "@/server/builds/load";
+import { json, readJson, route } from "@/server/route";
+
+type Ctx = { params: Promise<{ id: string }> };
+
+export const GET = route<Ctx>(async (_request, { params }) => {
+  const user = await requireUser();
+  const build = await loadBuild({ id: (await params).id, viewer: user });
+  const revision = await loadRevision({ build });
+  return json({ build, revision });
+});
+
+export const PATCH = route<Ctx>(async (request, { params }) => {
+  const user = await requireUser();
+  const build = await loadEditableBuild({ id: (await params).id, viewer: user });
+  const input = await readJson(request, updateBuildSchema, "build");
+  if (input.visibility !== undefined && !build.access.isOwner) {
+    throw new ApiError("forbidden:build", "Only the owner changes who can see the build.", "visibility");
+  }
+  let revision = build.currentRevision;
+  if (input.design) {
+    const partIds = await assertDesignParts({ design: input.design, viewer: user });
+    revision = await saveRevision({ buildId: build.id, userId: user.id, design: input.design, partIds, note: input.note });
+  }
+  await updateBuildMeta({ id: build.id, title: input.title, summary: input.summary, visibility: input.visibility });
+  return json({ build: { id: build.id, currentRevision: revision } });
+});
+
+export const DELETE = route<Ctx>(async (_request, { params }) => {
+  const user = await requireUser();
+  const build = await loadBuild({ id: (await params).id, viewer: user });
+  if (!build.access.isOwner) throw new ApiError("forbidden:build", "Only the owner deletes a build.");
+  await deleteBuild({ id: build.id });
+  return json({ ok: true });
+});

@@ -1,0 +1,37 @@
+"use client";
+
+import { delta, limitLabel, temp, type TempUnit, VERDICT_STYLE } from "./format";
+import { Traceable } from "./trace-view";
+import type { Scenario } from "./types";
+
+/** Every limit of one scenario: temperature, limit, headroom and the verdict word. */
+export function HeadroomTable({ scenario, unit }: { scenario: Scenario; unit: TempUnit }) {
+  const limits = scenario.thermal?.limits ?? [];
+  if (limits.length === 0) return <p className="text-sm text-ink-soft">No limits could be checked for this scenario.</p>;
+  return (
+    <table className="w-full border-collapse text-sm" data-testid="headroom-table">
+      <thead>
+        <tr className="border-b border-line text-left text-ink-soft">
+          <th className="py-1.5 pr-3 font-medium">Limit</th>
+          <th className="py-1.5 pr-3 font-medium">Temperature</th>
+          <th className="py-1.5 pr-3 font-medium">Limit</th>
+          <th className="py-1.5 pr-3 font-medium">Headroom</th>
+          <th className="py-1.5 font-medium">Verdict</th>
+        </tr>
+      </thead>
+      <tbody>
+        {limits.map((l) => (
+          <tr key={l.id} className="border-b border-line/60 align-top">
+            <td className="py-1.5 pr-3">{limitLabel(l)}</td>
+            <td className="py-1.5 pr-3"><Traceable label={temp(l.temperatureC, unit)} trace={l.trace} /></td>
+            <td className="py-1.5 pr-3"><Traceable label={`${l.kind === "min" ? "≥" : "≤"} ${temp(l.limitC, unit)}`} trace={l.limitTrace} /></td>
+            <td className="py-1.5 pr-3 font-mono">{delta(l.headroomK, unit)}</td>
+            <td className="py-1.5">
+              <span className={`rounded border px-1.5 py-0.5 text-xs ${VERDICT_STYLE[l.verdict] ?? ""}`}>{l.verdict}</span>
+            </td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

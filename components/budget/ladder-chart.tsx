@@ -1,0 +1,57 @@
+"use client";
+
+import { Bar } from "react-chartjs-2";
+import "./chart-setup";
+import { heatColour } from "./format";
+import type { Scenario } from "./types";
+
+/**
+ * The temperature ladder: a waterfall from ambient up to the hottest source, one floating
+ * bar per link the heat crosses, so the biggest rung shows what to improve first.
+ */
+export function LadderChart({ scenario, ambientC }: { scenario: Scenario; ambientC: number }) {
+  const ladder = scenario.thermal?.ladder;
+  if (!ladder || ladder.steps.length === 0) return <p className="text-sm text-ink-soft">No temperature ladder for this scenario.</p>;
+  // The steps run from the hot node down to ambient; draw them bottom-up.
+  const steps = [...ladder.steps].reverse();
+  let base = ambientC;
+  const bars = steps.map((s) => {
+    const bar: [number, number] = [base, base + s.deltaK];
+    base += s.deltaK;
+    return bar;
+  });
+  const top = base;
+  return (
+    <div className="h-72" data-testid="ladder-chart">
+      <Bar
+        data={{
+          labels: steps.map((s) => s.place),
+          datasets: [
+            {
+              label: "Temperature rise across the link",
+              data: bars,
+              backgroundColor: bars.map(([, hi]) => heatColour(hi, ambientC, top)),
+              borderRadius: 3,
+            },
+          ],
+        }}
+        options={{
+          indexAxis: "y",
+          maintainAspectRatio: false,
+          plugins: {
+            legend: { display: false },
+            tooltip: {
+              callbacks: {
+                label: (ctx) => {
+                  const s = steps[ctx.dataIndex];
+                  return s ? `+${s.deltaK.toFixed(1)} K · ${s.watts.toFixed(2)} W · ${s.kelvinPerWatt.toFixed(2)} K/W` : "";
+                },
+              },
+            },
+          },
+          scales: { x: { title: { display: true, text: "°C" }, min: Math.floor(ambientC - 2) } },
+        }}
+      />
+    </div>
+  );
+}

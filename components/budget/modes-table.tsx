@@ -1,0 +1,36 @@
+"use client";
+
+import { duration, num, VERDICT_STYLE } from "./format";
+import { Traceable } from "./trace-view";
+import type { Evaluation } from "./types";
+
+/** One row per driver mode: drive, light, runtime, when the first limit is reached, verdict. */
+export function ModesTable({ evaluation }: { evaluation: Evaluation }) {
+  if (evaluation.modes.length === 0) return <p className="text-sm text-ink-soft">No driver modes to evaluate (add a driver with modes).</p>;
+  return (
+    <table className="w-full border-collapse text-sm" data-testid="modes-table">
+      <thead>
+        <tr className="border-b border-line text-left text-ink-soft">
+          <th className="py-1.5 pr-3 font-medium">Mode</th>
+          <th className="py-1.5 pr-3 font-medium">Drive</th>
+          <th className="py-1.5 pr-3 font-medium">Light (hot)</th>
+          <th className="py-1.5 pr-3 font-medium">Runtime</th>
+          <th className="py-1.5 pr-3 font-medium">First limit</th>
+          <th className="py-1.5 font-medium">Verdict</th>
+        </tr>
+      </thead>
+      <tbody>
+        {evaluation.modes.map((m) => (
+          <tr key={m.name} className="border-b border-line/60">
+            <td className="py-1.5 pr-3 font-medium">{m.name}</td>
+            <td className="py-1.5 pr-3">{m.driveW === null ? "–" : `${num(m.driveW, 1)} W`}</td>
+            <td className="py-1.5 pr-3">{m.totalFluxLm === null ? "–" : `${num(m.totalFluxLm, 0)} lm`}</td>
+            <td className="py-1.5 pr-3">{m.runtime ? <Traceable label={duration((m.runtime.value ?? 0) * (m.runtime.unit === "h" ? 3600 : 1))} trace={m.runtime.trace} /> : "–"}</td>
+            <td className="py-1.5 pr-3">{m.firstLimitS === null ? "none within the warm-up" : `${m.firstLimit ?? "a limit"} after ${duration(m.firstLimitS)}`}</td>
+            <td className="py-1.5">{m.verdict ? <span className={`rounded border px-1.5 py-0.5 text-xs ${VERDICT_STYLE[m.verdict] ?? ""}`}>{m.verdict}</span> : "–"}</td>
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}

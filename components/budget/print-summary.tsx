@@ -1,0 +1,80 @@
+import { delta, duration, hours, limitLabel, num, temp, VERDICT_STYLE } from "./format";
+import type { Evaluation } from "./types";
+
+/** The one-page report: every scenario's limits, the modes, the electrical side, the cautions. */
+export function PrintSummary({ evaluation, title, revision, owner }: { evaluation: Evaluation; title: string; revision: number; owner: string }) {
+  const e = evaluation.electrical;
+  return (
+    <article className="mx-auto max-w-4xl space-y-4 bg-white p-6 text-[13px] leading-snug print:p-0" data-testid="report">
+      <header className="flex items-baseline gap-3 border-b border-line pb-2">
+        <h1 className="text-xl font-semibold">{title}</h1>
+        <span className="text-ink-soft">revision {revision} · {owner} · Sinkwise thermal budget</span>
+        <span className={`ml-auto rounded border px-2 py-0.5 font-semibold ${VERDICT_STYLE[evaluation.verdict ?? ""] ?? "border-line"}`}>{evaluation.verdict ?? "not worked out"}</span>
+      </header>
+      <section>
+        <h2 className="mb-1 font-semibold">Modes</h2>
+        <table className="w-full border-collapse">
+          <thead>
+            <tr className="border-b border-line text-left text-ink-soft">
+              <th className="pr-2 font-medium">Mode</th><th className="pr-2 font-medium">Drive</th><th className="pr-2 font-medium">Light, hot</th>
+              <th className="pr-2 font-medium">Runtime</th><th className="pr-2 font-medium">First limit reached</th><th className="font-medium">Verdict</th>
+            </tr>
+          </thead>
+          <tbody>
+            {evaluation.modes.map((m) => (
+              <tr key={m.name} className="border-b border-line/50">
+                <td className="pr-2">{m.name}</td>
+                <td className="pr-2">{m.driveW === null ? "–" : `${num(m.driveW)} W`}</td>
+                <td className="pr-2">{m.totalFluxLm === null ? "–" : `${num(m.totalFluxLm, 0)} lm`}</td>
+                <td className="pr-2">{m.runtime?.value == null ? "–" : hours(m.runtime.value)}</td>
+                <td className="pr-2">{m.firstLimitS === null ? "none in the warm-up" : `${m.firstLimit} after ${duration(m.firstLimitS)}`}</td>
+                <td>{m.verdict ?? "–"}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </section>
+      <section className="grid grid-cols-2 gap-4">
+        {evaluation.scenarios.map((s) => (
+          <div key={s.id}>
+            <h2 className="mb-1 font-semibold">{s.kind === "charging" ? "Charging" : `Mode ${s.name}`} — {s.thermal?.verdict ?? "not worked out"}</h2>
+            <table className="w-full border-collapse">
+              <tbody>
+                {(s.thermal?.limits ?? []).map((l) => (
+                  <tr key={l.id} className="border-b border-line/50">
+                    <td className="pr-2">{limitLabel(l)}</td>
+                    <td className="pr-2">{temp(l.temperatureC)}</td>
+                    <td className="pr-2">{l.kind === "min" ? "≥" : "≤"} {temp(l.limitC)}</td>
+                    <td>{delta(l.headroomK)}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        ))}
+      </section>
+      <section>
+        <h2 className="mb-1 font-semibold">Electrical</h2>
+        <p>
+          {e.pack ? `Pack ${e.pack.series}S${e.pack.parallel}P: ${num(e.pack.nominalVoltage.value, 2)} V, ${num(e.pack.capacityMAh, 0)} mAh, ${num(e.pack.energyWh.value)} Wh. ` : "No cells. "}
+          {e.charge ? `Charging at ${num(e.charge.currentA, 2)} A: constant current ${hours(e.charge.ccHours.value)}, full after ${hours(e.charge.totalHours.value)}; charger heat ${num(e.charge.lossW.value, 2)} W. ` : "No charger. "}
+          {e.protectionTripA !== null ? `Protection trips at ${num(e.protectionTripA)} A (peak pack current ${num(e.peakPackCurrentA, 2)} A).` : "No protection circuit."}
+        </p>
+      </section>
+      {evaluation.problems.filter((p) => p.severity === "error").length > 0 && (
+        <section>
+          <h2 className="mb-1 font-semibold">Open problems</h2>
+          <ul className="list-disc pl-5">
+            {evaluation.problems.filter((p) => p.severity === "error").map((p, i) => <li key={i}>{p.field}: {p.message}</li>)}
+          </ul>
+        </section>
+      )}
+      <section className="border-t border-line pt-2">
+        <h2 className="mb-1 font-semibold">Cautions</h2>
+        <ul className="space-y-0.5">
+          {evaluation.cautions.map((c) => <li key={c.id}><strong>{c.title}.</strong> {c.text}</li>)}
+        </ul>
+      </section>
+    </article>
+  );
+}

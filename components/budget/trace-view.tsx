@@ -1,0 +1,57 @@
+"use client";
+
+import type { Trace } from "@/lib/thermal";
+import { num } from "./format";
+
+function fmt(v: number): string {
+  if (!Number.isFinite(v)) return "–";
+  const a = Math.abs(v);
+  if (a !== 0 && (a < 1e-3 || a >= 1e6)) return v.toExponential(3);
+  return a < 10 ? v.toPrecision(3) : num(v, a < 100 ? 1 : 0);
+}
+
+/** Expands a number into its trace: formula, inputs with units, result, source. */
+export function TraceView({ trace, depth = 0 }: { trace: Trace; depth?: number }) {
+  return (
+    <div className={`space-y-1 text-xs ${depth > 0 ? "border-l border-line pl-3" : ""}`}>
+      <div className="font-medium text-ink">{trace.formula}</div>
+      <div className="font-mono text-ink-soft">{trace.equation}</div>
+      {trace.inputs.length > 0 && (
+        <ul className="grid grid-cols-[auto_1fr] gap-x-3 font-mono">
+          {trace.inputs.concat(trace.intermediates).map((q, i) => (
+            <li key={`${q.symbol}-${i}`} className="contents">
+              <span>{q.symbol} = {fmt(q.value)} {q.unit}</span>
+              <span className="font-sans text-ink-soft">{q.name}</span>
+            </li>
+          ))}
+        </ul>
+      )}
+      <div className="font-mono">→ {trace.result.symbol} = {fmt(trace.result.value)} {trace.result.unit}</div>
+      <div className="text-ink-soft">Source: {trace.source}</div>
+      {trace.validity && (
+        <div className={trace.validity.inRange ? "text-ink-soft" : "text-tight"}>
+          Valid for {trace.validity.range}{trace.validity.inRange ? "" : " — used outside this range here"}
+        </div>
+      )}
+      {trace.notes.map((n) => (
+        <div key={n} className="text-ink-soft">Note: {n}</div>
+      ))}
+      {trace.parts.map((p, i) => (
+        <TraceView key={i} trace={p} depth={depth + 1} />
+      ))}
+    </div>
+  );
+}
+
+/** A figure with a "how" toggle that opens its trace. */
+export function Traceable({ label, trace }: { label: string; trace: Trace | null | undefined }) {
+  if (!trace) return <span>{label}</span>;
+  return (
+    <details className="group inline-block align-top">
+      <summary className="cursor-pointer list-none underline decoration-dotted underline-offset-2 hover:text-ember">{label}</summary>
+      <div className="mt-2 max-w-xl rounded border border-line bg-white p-3 shadow-sm">
+        <TraceView trace={trace} />
+      </div>
+    </details>
+  );
+}

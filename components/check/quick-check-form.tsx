@@ -1,0 +1,149 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { type FormEvent, useState } from "react";
+import { delta, num, temp, VERDICT_STYLE } from "@/components/budget/format";
+import { TraceView } from "@/components/budget/trace-view";
+import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
+import { FINISHES, materialOptions } from "@/lib/parts";
+import type { QuickCheckResult } from "@/lib/retrofit";
+
+const MATERIALS = materialOptions();
+
+type Field = { name: string; label: string; placeholder: string; hint?: string };
+
+const GEOMETRY: Field[] = [
+  { name: "baseLengthM", label: "Base length (along the fins)", placeholder: "60 mm" },
+  { name: "baseWidthM", label: "Base width", placeholder: "60 mm" },
+  { name: "baseThicknessM", label: "Base thickness", placeholder: "5 mm" },
+  { name: "finCount", label: "Fin count", placeholder: "8" },
+  { name: "finHeightM", label: "Fin height", placeholder: "30 mm" },
+  { name: "finThicknessM", label: "Fin thickness", placeholder: "1.5 mm" },
+  { name: "finSpacingM", label: "Gap between fins", placeholder: "6.5 mm" },
+];
+
+function Input({ f, error }: { f: Field; error?: string }) {
+  return (
+    <label className="block text-sm">
+      <span className="mb-1 block font-medium">{f.label}</span>
+      <input name={f.name} placeholder={f.placeholder} defaultValue={f.placeholder} aria-label={f.label} className="w-full rounded border border-line bg-white px-2 py-1.5" />
+      {f.hint && !error && <span className="mt-0.5 block text-xs text-ink-soft">{f.hint}</span>}
+      {error && <span role="alert" className="mt-0.5 block text-xs text-over">{error}</span>}
+    </label>
+  );
+}
+
+/** One heat source on one heatsink: Tj, sink temperature, verdict and the K/W you need. */
+export function QuickCheckForm() {
+  const [mode, setMode] = useState<"declared" | "geometry">("declared");
+  const check = useMutation({ mutationFn: (body: unknown) => fetchJson<QuickCheckResult>("/api/v1/check", { method: "POST", body }) });
+  const err = check.error instanceof ApiClientError ? check.error : null;
+  const errorFor = (path: string) => (err && err.path === path ? err.message.replace(/^[^:]*: /, "") : undefined);
+
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const d = new FormData(e.currentTarget);
+    const s = (k: string) => String(d.get(k) ?? "").trim();
+    const opt = (k: string) => (s(k) === "" ? undefined : s(k));
+    const sink =
+      mode === "declared"
+        ? { declaredKPerW: s("declaredKPerW") }
+        : {
+            geometry: {
+              rating: "geometry",
+              ...Object.fromEntries(GEOMETRY.map((g) => [g.name, g.name === "finCount" ? Number(s(g.name)) : s(g.name)])),
+              material: s("material"),
+              finish: s("finish"),
+            },
+          };
+    const bondLine = opt("bondLineM");
+    check.mutate({
+      heatWatts: s("heatWatts"),
+      sink,
+      ambientC: s("ambientC"),
+      rthJspKPerW: opt("rthJspKPerW"),
+      maxTjC: opt("maxTjC"),
+      interface: bondLine ? { areaM2: s("contactAreaM2"), specs: { specifiedAs: "bulk", bondLineM: bondLine, conductivityWPerMK: s("conductivityWPerMK") } } : undefined,
+    });
+  }
+
+  const r = check.data;
+  return (
+    <div className="grid gap-6 lg:grid-cols-[1fr_1fr]">
+      <form onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg border border-line bg-white/60 p-4">
+        <div className="grid gap-3 sm:grid-cols-2">
+          <Input f={{ name: "heatWatts", label: "Heat from the emitter", placeholder: "7 W", hint: "Electrical power × heat fraction (often 60–80 % for white LEDs)" }} error={errorFor("heatWatts")} />
+          <Input f={{ name: "ambientC", label: "Ambient", placeholder: "25 °C" }} error={errorFor("ambientC")} />
+          <Input f={{ name: "rthJspKPerW", label: "Rth junction → solder point", placeholder: "2.5 K/W", hint: "From the emitter's datasheet" }} error={errorFor("rthJspKPerW")} />
+          <Input f={{ name: "maxTjC", label: "Maximum junction temperature", placeholder: "125 °C" }} error={errorFor("maxTjC")} />
+        </div>
+        <fieldset className="space-y-3">
+          <legend className="text-sm font-medium">Heatsink</legend>
+          <div className="flex gap-4 text-sm">
+            <label><input type="radio" name="mode" checked={mode === "declared"} onChange={() => setMode("declared")} /> Declared K/W</label>
+            <label><input type="radio" name="mode" checked={mode === "geometry"} onChange={() => setMode("geometry")} /> Measured geometry</label>
+          </div>
+          {mode === "declared" ? (
+            <Input f={{ name: "declaredKPerW", label: "Sink-to-air resistance", placeholder: "4 K/W", hint: "Check that the figure is for still air: sellers often quote it with a fan." }} error={errorFor("sink.declaredKPerW")} />
+          ) : (
+            <div className="grid gap-3 sm:grid-cols-2">
+              {GEOMETRY.map((g) => <Input key={g.name} f={g} error={errorFor(`sink.geometry.${g.name}`)} />)}
+              <label className="block text-sm">
+                <span className="mb-1 block font-medium">Material</span>
+                <select name="material" aria-label="Material" className="w-full rounded border border-line bg-white px-2 py-1.5" defaultValue="aluminium-6063-t5">
+                  {MATERIALS.map((m) => <option key={m.value} value={m.value}>{m.label}</option>)}
+                </select>
+              </label>
+              <label className="block text-sm">
+                <span className="mb-1 block font-medium">Finish</span>
+                <select name="finish" aria-label="Finish" className="w-full rounded border border-line bg-white px-2 py-1.5" defaultValue="as-supplied">
+                  {FINISHES.map((f) => <option key={f} value={f}>{f}</option>)}
+                </select>
+              </label>
+            </div>
+          )}
+        </fieldset>
+        <fieldset className="grid gap-3 sm:grid-cols-3">
+          <legend className="mb-1 text-sm font-medium">Interface (optional)</legend>
+          <label className="block text-sm"><span className="mb-1 block">Bond line</span><input name="bondLineM" placeholder="50 um" aria-label="Bond line" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
+          <label className="block text-sm"><span className="mb-1 block">Conductivity</span><input name="conductivityWPerMK" placeholder="3 W/(m K)" aria-label="Conductivity" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
+          <label className="block text-sm"><span className="mb-1 block">Contact area</span><input name="contactAreaM2" placeholder="2.5 cm^2" aria-label="Contact area" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
+        </fieldset>
+        <button type="submit" className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90" disabled={check.isPending}>
+          {check.isPending ? "Working…" : "Check it"}
+        </button>
+        {err && !["heatWatts", "ambientC", "rthJspKPerW", "maxTjC"].includes(err.path) && !err.path.startsWith("sink.") && (
+          <p role="alert" className="text-sm text-over">{err.message}</p>
+        )}
+        {err && err.path.startsWith("sink.") && !errorFor(err.path) && <p role="alert" className="text-sm text-over">{err.message}</p>}
+      </form>
+      <section aria-live="polite" className="space-y-3" data-testid="quick-check-result">
+        {!r && <p className="text-sm text-ink-soft">Fill in what you know and press “Check it”. Sinkwise solves the junction → solder point → sink → air path, with convection and radiation worked out at the temperatures reached.</p>}
+        {r && (
+          <>
+            <div className="flex items-center gap-3">
+              <span className={`rounded border px-2 py-1 text-sm font-semibold ${VERDICT_STYLE[r.verdict ?? ""] ?? "border-line"}`} data-testid="quick-verdict">{r.verdict ?? "could not be worked out"}</span>
+              <span className="text-sm text-ink-soft">headroom {delta(r.headroomK)} to {temp(r.maxTjC)}</span>
+            </div>
+            <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
+              <dt className="text-ink-soft">Junction</dt><dd className="font-medium">{temp(r.tjC, "C", 1)}</dd>
+              <dt className="text-ink-soft">Solder point</dt><dd>{temp(r.solderPointC, "C", 1)}</dd>
+              <dt className="text-ink-soft">Heatsink</dt><dd>{temp(r.sinkC, "C", 1)}</dd>
+              <dt className="text-ink-soft">Sink-to-air, this sink</dt><dd>{num(r.sinkKPerW, 2)} K/W</dd>
+              <dt className="text-ink-soft">Needed for the budget (10 K margin)</dt><dd>{r.requiredForBudgetKPerW === null ? "–" : `≤ ${num(r.requiredForBudgetKPerW, 2)} K/W`}</dd>
+              <dt className="text-ink-soft">Needed to just reach the limit</dt><dd>{r.requiredForLimitKPerW === null ? "–" : `≤ ${num(r.requiredForLimitKPerW, 2)} K/W`}</dd>
+            </dl>
+            {r.problems.length > 0 && (
+              <ul className="list-disc pl-5 text-xs text-ink-soft">{r.problems.map((p, i) => <li key={i}>{p.field}: {p.message}</li>)}</ul>
+            )}
+            <details className="rounded border border-line bg-white p-3">
+              <summary className="cursor-pointer text-sm font-medium">How these numbers were worked out</summary>
+              <div className="mt-2 space-y-3">{r.traces.map((t, i) => <TraceView key={i} trace={t} />)}</div>
+            </details>
+            <p className="text-xs text-ink-soft">An estimate for a sink in open air. Inside a closed housing it runs hotter: model the whole retrofit as a build. Hot heatsinks burn; confirm with a thermocouple.</p>
+          </>
+        )}
+      </section>
+    </div>
+  );
+}

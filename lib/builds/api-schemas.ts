@@ -1,0 +1,37 @@
+import { z } from "zod";
+import { buildDesignSchema } from "@/lib/retrofit";
+
+const title = z.string({ error: "Give the build a title." }).trim().min(1, { error: "Give the build a title." }).max(160);
+const summary = z.string().trim().max(2000, { error: "Keep the summary under 2000 characters." });
+const visibility = z.enum(["private", "shared"], { error: "Visibility is private or shared." });
+
+export const createBuildSchema = z.strictObject({
+  title,
+  summary: summary.default(""),
+  visibility: visibility.default("private"),
+  design: buildDesignSchema,
+  note: z.string().trim().max(500).default("First revision"),
+});
+
+/** Title/summary/visibility change in place; a design makes a new, immutable revision. */
+export const updateBuildSchema = z.strictObject({
+  title: title.optional(),
+  summary: summary.optional(),
+  visibility: visibility.optional(),
+  design: buildDesignSchema.optional(),
+  note: z.string().trim().max(500).default(""),
+});
+
+export const forkBuildSchema = z.strictObject({
+  title: title.optional(),
+  /** What the variant changes ("driver strapped to the case"); makes the fork a variant. */
+  variantNote: z.string().trim().max(500).optional(),
+  revision: z.number().int().positive().optional(),
+});
+
+export const solveBuildSchema = z.strictObject({
+  revision: z.number().int().positive().optional(),
+});
+
+export type CreateBuildInput = z.infer<typeof createBuildSchema>;
+export type UpdateBuildInput = z.infer<typeof updateBuildSchema>;

@@ -1,0 +1,46 @@
+import "server-only";
+import { getBuild, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
+import { getPart, type PartRecord } from "@/db/queries/parts";
+import type { BuildAccess, BuildViewer } from "@/lib/builds/access";
+import { collectPartIds } from "@/lib/builds/part-ids";
+import { ApiError } from "@/lib/http/api-error";
+
+export type LoadedBuild = BuildSummary & { access: BuildAccess };
+
+/** The build when the viewer may see it, else 404 (a private build's existence is not told). */
+export async function loadBuild({ id, viewer }: { id: string; viewer: BuildViewer }): Promise<LoadedBuild> {
+  const build = await getBuild({ id, viewer });
+  if (!build) throw new ApiError("not_found:build", "No such build, or it is not shared with you.", "id");
+  return build;
+}
+
+export async function loadEditableBuild({ id, viewer }: { id: string; viewer: BuildViewer }): Promise<LoadedBuild> {
+  const build = await loadBuild({ id, viewer });
+  if (!build.access.canEdit) throw new ApiError("forbidden:build", "This build is read-only for you: only its owner (or someone it is shared with for editing) changes it.");
+  return build;
+}
+
+export async function loadRevision({ build, number }: { build: LoadedBuild; number?: number }): Promise<RevisionRow> {
+  const n = number ?? build.currentRevision;
+  const revision = await getRevision({ buildId: build.id, number: n });
+  if (!revision) throw new ApiError("not_found:revision", `This build has no revision ${n}.`, "revision");
+  return revision;
+}
+
+/** The parts a design refers to that the viewer may see, by id. */
+export async function loadDesignParts({ design, viewer }: { design: unknown; viewer: BuildViewer }): Promise<Map<string, PartRecord>> {
+  const ids = collectPartIds(design);
+  const found = await Promise.all(ids.map((id) => getPart({ id, viewer })));
+  return new Map(found.filter((p): p is PartRecord => p !== undefined).map((p) => [p.id, p]));
+}
+
+/** Refuses a design naming parts the author cannot see (or that do not exist), naming them. */
+export async function assertDesignParts({ design, viewer }: { design: unknown; viewer: BuildViewer }): Promise<string[]> {
+  const ids = collectPartIds(design);
+  const parts = await loadDesignParts({ design, viewer });
+  const missing = ids.filter((id) => !parts.has(id));
+  if (missing.length) {
+    throw new ApiError("bad_request:design", `These parts do not exist or are not visible to you: ${missing.join(", ")}.`, "design");
+  }
+  return ids;
+}

@@ -1,0 +1,99 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { GOOD_PARTS } from "../unit/parts/fixtures";
+import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
+import { signedIn } from "../support/http";
+
+let session: Awaited<ReturnType<typeof launch>>;
+const ids: Record<string, string> = {};
+const tag = Date.now().toString(36);
+
+beforeAll(async () => {
+  // Parts the maker composes the retrofit from (generic, invented; see the parts fixtures).
+  const maker = await signedIn("maker@sinkwise.test");
+  for (const [kind, part] of Object.entries(GOOD_PARTS)) {
+    const r = await maker.post("/api/v1/parts", { ...part, name: `${part.name} ${tag}`, visibility: "private" });
+    expect(r.status, JSON.stringify(r.body)).toBe(201);
+    ids[kind] = (r.body.part as { id: string }).id;
+  }
+  session = await launch();
+});
+afterAll(async () => {
+  await session?.close();
+});
+
+describe("a retrofit from Parts bin records to its Budget, in chromium", () => {
+  it("composes the build in the Heat path editor, saves a revision and reads the Budget", async () => {
+    const page = await session.browser.newPage();
+    await signInThroughForm(page, "maker@sinkwise.test");
+    await page.getByRole("button", { name: "New build" }).click();
+    await page.getByLabel("Title of the new build").fill(`E2E lantern ${tag}`);
+    await page.getByRole("button", { name: "Create" }).click();
+    await page.getByTestId("heat-path-editor").waitFor();
+
+    const pick = async (label: string, id: string | undefined) => {
+      const select = page.getByLabel(label, { exact: true });
+      await expect.poll(() => select.locator(`option[value="${id}"]`).count()).toBe(1);
+      await select.selectOption(id ?? "");
+    };
+    await pick("Housing", ids.housing);
+    await pick("Emitter", ids.emitter);
+    await pick("Board → heatsink interface", ids.interface);
+    await pick("Heatsink", ids.heatsink);
+    await pick("Driver", ids.driver);
+    await page.getByLabel("Driver cooling").selectOption("strapped");
+    await pick("Strap / spreader", ids.spreader);
+    await pick("Cell", ids.cell);
+    await page.getByLabel("Cells in parallel").fill("2");
+    await pick("Protection", ids.protection);
+    await pick("Charger", ids.charger);
+    const ambient = page.getByLabel("Ambient temperature");
+    await ambient.fill("77 °F");
+    await ambient.blur();
+    await page.getByLabel("Revision note").fill("all parts in");
+    await page.getByRole("button", { name: /Save as revision 2/ }).click();
+    await expect.poll(() => page.getByRole("status").textContent()).toContain("Saved as revision 2");
+    await page.screenshot({ path: `${ARTEFACTS}/budget-editor.png`, fullPage: true });
+
+    await page.getByRole("link", { name: "Budget", exact: true }).click();
+    const verdict = page.getByTestId("overall-verdict");
+    await verdict.waitFor({ timeout: 30_000 });
+    expect(["within budget", "tight", "over budget"]).toContain((await verdict.textContent())?.trim());
+    const headroom = page.getByTestId("headroom-table");
+    await expect.poll(() => headroom.textContent()).toContain("LED junction");
+    expect(await headroom.textContent()).not.toContain("NaN");
+    for (const id of ["ladder-chart", "warmup-chart", "derating-flux", "electrical-panel", "cautions", "modes-table"]) {
+      await page.getByTestId(id).waitFor();
+    }
+    // The pack from the editor: two cells in parallel at the cell's voltage.
+    await expect.poll(() => page.getByTestId("electrical-panel").textContent()).toContain("1S2P");
+    await page.screenshot({ path: `${ARTEFACTS}/budget-screen.png`, fullPage: true });
+    await page.getByTestId("warmup-chart").screenshot({ path: `${ARTEFACTS}/budget-warmup.png` });
+    await page.getByTestId("ladder-chart").screenshot({ path: `${ARTEFACTS}/budget-ladder.png` });
+    // Expanding a number shows its trace.
+    await headroom.locator("summary").first().click();
+    await expect.poll(() => headroom.textContent()).toContain("Source:");
+
+    await page.getByRole("link", { name: "Report", exact: true }).click();
+    await page.getByTestId("report").waitFor();
+    expect(await page.getByTestId("report").textContent()).toContain("Cautions");
+    await page.screenshot({ path: `${ARTEFACTS}/budget-report.png`, fullPage: true });
+    await page.close();
+  });
+
+  it("answers a wrong unit on the editor next to the field, without saving", async () => {
+    const page = await session.browser.newPage();
+    await signInThroughForm(page, "maker@sinkwise.test");
+    await page.getByRole("button", { name: "New build" }).click();
+    await page.getByLabel("Title of the new build").fill(`E2E bad unit ${tag}`);
+    await page.getByRole("button", { name: "Create" }).click();
+    await page.getByTestId("heat-path-editor").waitFor();
+    const ambient = page.getByLabel("Ambient temperature");
+    await ambient.fill("3 W");
+    await ambient.blur();
+    await page.getByRole("button", { name: /Save as revision 2/ }).click();
+    await expect.poll(() => page.locator("fieldset [role=alert]").first().textContent()).toMatch(/temperature/);
+    expect(await page.getByRole("button", { name: /Save as revision 2/ }).count()).toBe(1);
+    await page.close();
+  });
+});
+

@@ -6,11 +6,13 @@ set -uo pipefail
 cd "$(dirname "$0")/.."
 . scripts/lib.sh
 
+# Other ports than npm start's, so both can run at once; TEST_* variables move them again.
+PORT="${TEST_APP_PORT:-3100}"
 export DATABASE_NAME="sinkwise_test"
-export SMTP_PORT=1026
-export MAIL_INBOX_URL="http://127.0.0.1:1081"
-export APP_URL="http://127.0.0.1:3100"
-export S3_ENDPOINT="http://127.0.0.1:4570"
+export SMTP_PORT="${TEST_SMTP_PORT:-1026}"
+export MAIL_INBOX_URL="http://127.0.0.1:${TEST_INBOX_PORT:-1081}"
+export APP_URL="http://127.0.0.1:$PORT"
+export S3_ENDPOINT="http://127.0.0.1:${TEST_S3_PORT:-4570}"
 export S3_BUCKET="sinkwise-test"
 export SINKWISE_TEST_URL="$APP_URL"
 mkdir -p .data test-results
@@ -46,7 +48,6 @@ node_modules/.bin/tsx --conditions=react-server scripts/seed.ts || fail_setup "s
 
 echo "[test] building"
 node node_modules/next/dist/bin/next build >.data/logs/test-build.log 2>&1 || { tail -n 40 .data/logs/test-build.log; fail_setup "next build"; }
-PORT=3100
 assert_port_free "$PORT" || fail_setup "port $PORT"
 node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" >.data/logs/test-server.log 2>&1 &
 SERVER_PID=$!

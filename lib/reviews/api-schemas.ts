@@ -25,7 +25,7 @@ export const requestReviewSchema = z.strictObject({
 
 /**
  * Where a comment is pinned: a node of the heat path by its id ("junction"), a link by
- * "from->to" ("driver->wallDriver"), or a figure of the Budget by its key ("mode:High/headroom").
+ * "from->to" ("driver->wall-driver"), or a figure of the Budget by its key ("mode:High/headroom").
  */
 export const ANCHOR_KEY_PATTERN = /^[A-Za-z0-9][A-Za-z0-9 :._/>#()-]*$/;
 export const anchorSchema = z.strictObject({

@@ -145,8 +145,8 @@ describe("reviews: pinned comments and the verdict", () => {
     const id = await requestReview(buildId);
     const c1 = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "driver" }, body: "Driver board runs close to its limit on high." });
     expect(c1.status, JSON.stringify(c1.body)).toBe(201);
-    const c2 = await owner.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "link", key: "driver->wallDriver" }, body: "The strap is 25 mm wide." });
-    expect(c2.status).toBe(201);
+    const c2 = await owner.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "link", key: "driver->wall-driver" }, body: "The strap is 25 mm wide." });
+    expect(c2.status, JSON.stringify(c2.body)).toBe(201);
     expect((await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "figure", key: "mode:high/headroom" }, body: "See the headroom." })).status).toBe(201);
     expect((await otherReviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "driver" }, body: "x" })).status).toBe(404);
     expect((await otherMaker.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "driver" }, body: "x" })).status).toBe(404);
@@ -155,13 +155,21 @@ describe("reviews: pinned comments and the verdict", () => {
     const badKind = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "part", key: "driver" }, body: "x" });
     expect(badKind.status).toBe(400);
     expect(badKind.body.error?.path).toBe("anchor.kind");
+    const nowhere = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "flux-capacitor" }, body: "x" });
+    expect(nowhere.status).toBe(400);
+    expect(nowhere.body.error?.path).toBe("anchor.key");
+    expect(nowhere.body.error?.message).toContain("junction");
+    const anchors = (await reviewer.get(`/api/v1/reviews/${id}`)).body.anchors as { nodes: { key: string }[]; links: { key: string }[]; figures: { key: string }[] };
+    expect(anchors.nodes.map((n) => n.key)).toEqual(expect.arrayContaining(["junction", "driver", "wall-driver"]));
+    expect(anchors.links.map((n) => n.key)).toContain("driver->wall-driver");
+    expect(anchors.figures.map((n) => n.key)).toContain("mode:high/headroom");
     const empty = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "driver" }, body: "  " });
     expect(empty.status).toBe(400);
     expect(empty.body.error?.path).toBe("body");
     const comments = (await owner.get(`/api/v1/reviews/${id}`)).body.comments as Comment[];
     expect(comments.map((c) => [c.anchorKind, c.anchorKey])).toEqual([
       ["node", "driver"],
-      ["link", "driver->wallDriver"],
+      ["link", "driver->wall-driver"],
       ["figure", "mode:high/headroom"],
     ]);
     // The owner hears of the reviewer's comments.

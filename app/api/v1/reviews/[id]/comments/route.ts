@@ -1,6 +1,8 @@
 import { addComment, listComments } from "@/db/queries/reviews";
 import { ApiError } from "@/lib/http/api-error";
+import { anchorProblem } from "@/lib/reviews/anchors";
 import { commentSchema } from "@/lib/reviews/api-schemas";
+import { reviewAnchors } from "@/server/reviews/anchors";
 import { requireUser } from "@/server/auth/session";
 import { loadReview } from "@/server/reviews/load";
 import { json, readJson, route } from "@/server/route";
@@ -19,6 +21,8 @@ export const POST = route<Ctx>(async (request, { params }) => {
   const { review, role } = await loadReview({ id: (await params).id, viewer: user });
   if (role === "admin") throw new ApiError("forbidden:review", "Only the reviewer and the build's owner comment on a review.");
   const input = await readJson(request, commentSchema, "comment");
+  const problem = anchorProblem(await reviewAnchors({ review }), input.anchor);
+  if (problem) throw new ApiError("bad_request:comment", problem, "anchor.key");
   const other = role === "reviewer" ? review.requestedBy : review.reviewerId;
   const { id } = await addComment({
     reviewId: review.id,

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { expm, inv, matrix, multiply, subtract, identity, type Matrix } from "mathjs";
 import { Matrix as MlMatrix, solve as mlSolve } from "ml-matrix";
-import { Solver as OdexSolver } from "odex";
+import { OdexSolver } from "../../support/odex";
 import { describe, expect, it } from "vitest";
 import { naturalConvectionCoefficient, solveSteady, solveTransient, STEFAN_BOLTZMANN } from "@/lib/thermal";
 import { linearNetwork, linearSystem, net } from "./helpers";

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { currentUser } from "@/server/auth/session";
+import { NotificationBell } from "@/components/reviews/notification-bell";
 import { AccountMenu } from "./account-menu";
 import { navFor } from "./nav-items";
 
@@ -22,7 +23,10 @@ export async function SiteHeader() {
         </nav>
         <div className="ml-auto text-sm">
           {user ? (
-            <AccountMenu />
+            <span className="flex items-center gap-2">
+              <NotificationBell />
+              <AccountMenu />
+            </span>
           ) : (
             <span className="flex items-center gap-3">
               <Link href="/signin" className="hover:text-ember">Sign in</Link>

@@ -1,0 +1,107 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ARTEFACTS, launch, type Page, signInThroughForm } from "../support/browser";
+import { BASE_URL, Client, signedIn } from "../support/http";
+import { createParts, newBuild, retrofitDesign } from "../support/retrofit";
+
+// The demo maker compares three ways of cooling the driver, asks the demo reviewer for a
+// review; the reviewer pins a comment to the heat path and records a verdict; the maker sees it.
+let maker: Awaited<ReturnType<typeof launch>>;
+let reviewer: Awaited<ReturnType<typeof launch>>;
+const tag = Date.now().toString(36);
+const title = `Square lantern ${tag}`;
+const ids: { strapped: string; pressed: string; floating: string } = { strapped: "", pressed: "", floating: "" };
+
+beforeAll(async () => {
+  // Builds made through the API: the three driver-cooling variants of one lantern.
+  const api: Client = await signedIn("maker@sinkwise.test");
+  const parts = await createParts(api, "shared");
+  ids.strapped = await newBuild(api, { title, design: retrofitDesign(parts, "strapped") });
+  for (const [key, note, cooling] of [["pressed", "driver pressed to the wall", "ground-plane-to-wall"], ["floating", "driver floating free", "floating"]] as const) {
+    const r = await api.post(`/api/v1/builds/${ids.strapped}/fork`, { variantNote: note });
+    ids[key] = (r.body.build as { id: string }).id;
+    expect((await api.patch(`/api/v1/builds/${ids[key]}`, { design: retrofitDesign(parts, cooling), note })).status).toBe(200);
+  }
+  [maker, reviewer] = await Promise.all([launch(), launch()]);
+}, 120_000);
+
+afterAll(async () => {
+  await maker?.close();
+  await reviewer?.close();
+});
+
+async function shot(page: Page, name: string) {
+  await page.screenshot({ path: `${ARTEFACTS}/${name}.png`, fullPage: true });
+}
+
+describe("Side by side and the Review desk in chromium", () => {
+  it("the maker compares the three driver-cooling variants and saves the comparison", async () => {
+    const page = await maker.browser.newPage();
+    await signInThroughForm(page, "maker@sinkwise.test");
+    await page.goto(`${BASE_URL}/compare`);
+    await page.getByLabel(`Compare ${title}`, { exact: true }).check();
+    await page.getByLabel(`Compare ${title} — driver pressed to the wall`).check();
+    await page.getByLabel(`Compare ${title} — driver floating free`).check();
+    await page.getByRole("button", { name: "Compare side by side" }).click();
+    await page.getByTestId("compare-figures").waitFor({ timeout: 60_000 });
+    expect(await page.getByTestId("compare-column").count()).toBe(3);
+    // The mounting difference is listed first.
+    const firstDiff = page.getByTestId("compare-differences").locator("tr").first();
+    await expect.poll(() => firstDiff.textContent()).toContain("Driver cooling");
+    await expect.poll(() => firstDiff.textContent()).toContain("floating free in the housing's air");
+    await page.getByTestId("compare-warmup-chart").locator("canvas").waitFor();
+    await page.getByTestId("compare-ladders").locator("canvas").first().waitFor();
+    await shot(page, "compare-driver-cooling");
+    await page.getByRole("button", { name: "Save the comparison" }).click();
+    await page.waitForURL(/\/compare\?saved=/);
+    await page.getByTestId("compare-figures").waitFor({ timeout: 60_000 });
+    await page.close();
+  });
+
+  it("the maker requests a review from the demo reviewer", async () => {
+    const page = await maker.browser.newPage();
+    await page.goto(`${BASE_URL}/builds/${ids.strapped}/reviews`);
+    const form = page.getByRole("form", { name: "Request a review" });
+    await form.getByLabel("Reviewer's e-mail").fill("reviewer@sinkwise.test");
+    await form.getByLabel("Note for the reviewer").fill("Which driver cooling holds on high?");
+    await form.getByRole("button", { name: "Request the review" }).click();
+    await page.getByRole("status").filter({ hasText: "Review requested from" }).waitFor();
+    await page.getByTestId("build-review").first().waitFor();
+    await shot(page, "review-requested");
+    await page.close();
+  });
+
+  it("the reviewer pins a comment to the driver node and records a verdict", async () => {
+    const page = await reviewer.browser.newPage();
+    await signInThroughForm(page, "reviewer@sinkwise.test");
+    await page.getByTestId("unread-count").waitFor();
+    await page.goto(`${BASE_URL}/reviews`);
+    await page.getByRole("link", { name: title, exact: true }).first().click();
+    await page.waitForURL(/\/reviews\/[^/]+$/);
+    await page.locator('[data-anchor="node:driver"]').click();
+    await page.getByLabel("Comment", { exact: true }).fill("Strapped, the driver board keeps its headroom on high; floating free it does not.");
+    await page.getByRole("button", { name: "Pin the comment" }).click();
+    await page.getByTestId("review-comment").filter({ hasText: "keeps its headroom" }).waitFor();
+    await expect.poll(() => page.getByTestId("review-comment").first().textContent()).toContain("node driver");
+    const verdict = page.getByRole("form", { name: "Verdict" });
+    await verdict.getByLabel("changes requested").check();
+    await verdict.getByLabel("Summary").fill("Keep the copper strap; time-limit high mode.");
+    await verdict.getByRole("button", { name: "Record the verdict" }).click();
+    await page.getByTestId("verdict").waitFor();
+    await expect.poll(() => page.getByTestId("verdict").textContent()).toContain("Keep the copper strap");
+    await shot(page, "review-verdict");
+    await page.close();
+  });
+
+  it("the maker sees the verdict on the build and in the notifications", async () => {
+    const page = await maker.browser.newPage();
+    await page.goto(`${BASE_URL}/builds/${ids.strapped}/reviews`);
+    const review = page.getByTestId("build-review").first();
+    await expect.poll(() => review.textContent()).toContain("changes requested");
+    await expect.poll(() => review.textContent()).toContain("Keep the copper strap; time-limit high mode.");
+    await page.getByTestId("unread-count").waitFor();
+    await page.getByRole("button", { name: /^Notifications/ }).click();
+    await page.getByRole("dialog", { name: "Notifications" }).getByText("changes requested").first().waitFor();
+    await shot(page, "review-seen-by-maker");
+    await page.close();
+  });
+});

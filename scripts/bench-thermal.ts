@@ -4,6 +4,8 @@
  * 200-node steady ≤ 5 ms, heap added by a 500-node steady ≤ 20 MB.
  */
 import { execFileSync, spawnSync } from "node:child_process";
+import { setFlagsFromString } from "node:v8";
+import { runInNewContext } from "node:vm";
 import { networkSchema, solveSteady, solveTransient, type Network, type NetworkInput } from "../lib/thermal";
 import { compileNetwork } from "../lib/thermal/compile";
 import { assemble } from "../lib/thermal/solver/assemble";
@@ -33,15 +35,55 @@ function median(xs: number[]): number {
   return s[Math.floor(s.length / 2)]!;
 }
 
-function time(runs: number, f: () => void): number {
-  for (let i = 0; i < Math.min(20, runs); i++) f();
-  const samples: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = process.hrtime.bigint();
-    f();
-    samples.push(Number(process.hrtime.bigint() - t0) / 1e6);
+/**
+ * The garbage collector as a function, so the heap figure starts from a clean heap: from
+ * `--expose-gc` when given, else switched on at run time (`npm run bench` passes no flags).
+ */
+function collector(): (() => void) | undefined {
+  const given = (globalThis as { gc?: () => void }).gc;
+  if (given) return given;
+  try {
+    setFlagsFromString("--expose-gc");
+    const gc: unknown = runInNewContext("gc");
+    return typeof gc === "function" ? () => void gc() : undefined;
+  } catch {
+    return undefined;
   }
-  return median(samples);
+}
+
+/** Calls per sample so one sample lasts about a millisecond: timer overhead and a lone GC pause then barely move a median of microsecond calls. */
+function batchSize(f: () => void): number {
+  const t0 = performance.now();
+  let calls = 0;
+  while (performance.now() - t0 < 5) {
+    f();
+    calls++;
+  }
+  return Math.max(1, Math.round(calls / 5));
+}
+
+/**
+ * Median time of one call, in ms, for each function, measured fairly on a shared machine:
+ * every function is warmed up first (at least 50 calls and 200 ms, so the JIT has
+ * optimised it), then the samples are interleaved (f₁, f₂, f₁, f₂, …) so a burst of load
+ * from other processes hits all of them alike, and the median of ≥ 21 samples is reported.
+ */
+function timeEach(fs: readonly (() => void)[], samples = 31): number[] {
+  for (const f of fs) {
+    const t0 = performance.now();
+    for (let i = 0; i < 50 || performance.now() - t0 < 200; i++) f();
+  }
+  const batches = fs.map(batchSize);
+  const times: number[][] = fs.map(() => []);
+  for (let s = 0; s < Math.max(21, samples); s++) {
+    fs.forEach((f, k) => {
+      const batch = batches[k]!;
+      const t0 = performance.now();
+      for (let i = 0; i < batch; i++) f();
+      times[k]!.push((performance.now() - t0) / batch);
+    });
+  }
+  return times.map(median);
 }
 
 /** Textbook dense LU with partial pivoting on a Float64Array, plus the two triangular solves. */
@@ -87,14 +129,14 @@ function jacobianAtSolution(network: Network) {
   return { n: c.n, j, f, iterations: s.iterations };
 }
 
-function baselineMs(network: Network, solves: number): number {
+/** One bare LU solve of the network's Jacobian at its solution, as a function to time. */
+function baseline(network: Network): () => void {
   const { n, j, f } = jacobianAtSolution(network);
   let sink = 0;
-  const per = time(400, () => {
+  return () => {
     sink += bareLuSolve(j, f, n)[0]!;
-  });
-  if (Number.isNaN(sink)) console.log("(baseline produced NaN)");
-  return per * solves;
+    if (Number.isNaN(sink)) console.log("(baseline produced NaN)");
+  };
 }
 
 /** The same warm-up in SciPy's BDF, in a child python process, on a network whose links Python can evaluate (resistance, convection, radiation). */
@@ -132,7 +174,9 @@ def f(t, T):
     return out / C
 grid = np.arange(0, 1801, 1.0)
 runs = []
-for _ in range(5):
+for _ in range(3):
+    solve_ivp(f, (0, 1800), np.full(n, Ta), method="BDF", t_eval=grid, rtol=1e-6, atol=1e-6)
+for _ in range(21):
     t0 = time.perf_counter()
     r = solve_ivp(f, (0, 1800), np.full(n, Ta), method="BDF", t_eval=grid, rtol=1e-6, atol=1e-6)
     runs.append((time.perf_counter() - t0) * 1000)
@@ -150,26 +194,25 @@ export async function benchThermal(): Promise<void> {
   const n20 = lampNetwork(20, { naturalConvection: true });
   const steady = solveSteady(n20);
   const compiled = compileNetwork(n20);
-  const steadyMs = time(500, () => void solveSteady(n20));
-  const steadySolveMs = time(500, () => void solveCompiledSteady(compiled, resolveSteadyOptions()));
-  const base20 = baselineMs(n20, steady.iterations);
-  console.log(`  steady, 20 nodes non-linear: median ${fmt(steadyMs * 1000, 1)} µs (solve only ${fmt(steadySolveMs * 1000, 1)} µs), ${steady.iterations} iterations`);
-  console.log(`    baseline: bare Float64Array LU × ${steady.iterations} = ${fmt(base20 * 1000, 1)} µs → ratio ${fmt(steadyMs / base20)} (solve only ${fmt(steadySolveMs / base20)}; target ≤ 2)`);
+  const [steadyMs, steadySolveMs, luMs] = timeEach([() => void solveSteady(n20), () => void solveCompiledSteady(compiled, resolveSteadyOptions()), baseline(n20)]);
+  const base20 = luMs! * steady.iterations;
+  console.log(`  steady, 20 nodes non-linear: median ${fmt(steadyMs! * 1000, 1)} µs (solve only ${fmt(steadySolveMs! * 1000, 1)} µs), ${steady.iterations} iterations`);
+  console.log(`    baseline: bare Float64Array LU × ${steady.iterations} = ${fmt(base20 * 1000, 1)} µs → ratio ${fmt(steadyMs! / base20)} (solve only ${fmt(steadySolveMs! / base20)}; target ≤ 2)`);
 
   const warm = () => solveTransient(n20, { durationS: 1800, stepS: 1 });
   const w = warm();
-  const warmMs = time(15, () => void warm());
-  const baseWarm = baselineMs(n20, w.factorisations);
-  console.log(`  warm-up, 20 nodes, 30 min at 1 s steps: median ${fmt(warmMs)} ms (target ≤ 20), ${w.factorisations} factorisations, ${w.newtonIterations} Newton corrections`);
-  console.log(`    baseline: bare LU × ${w.factorisations} = ${fmt(baseWarm)} ms → ratio ${fmt(warmMs / baseWarm)}`);
+  const [warmMs, luWarmMs] = timeEach([() => void warm(), baseline(n20)], 21);
+  const baseWarm = luWarmMs! * w.factorisations;
+  console.log(`  warm-up, 20 nodes, 30 min at 1 s steps: median ${fmt(warmMs!)} ms (target ≤ 20), ${w.factorisations} factorisations, ${w.newtonIterations} Newton corrections`);
+  console.log(`    baseline: bare LU × ${w.factorisations} = ${fmt(baseWarm)} ms → ratio ${fmt(warmMs! / baseWarm)}`);
 
   const n200 = lampNetwork(200, { naturalConvection: true });
   const it200 = solveSteady(n200).iterations;
-  const ms200 = time(30, () => void solveSteady(n200));
-  console.log(`  steady, 200 nodes: median ${fmt(ms200)} ms, ${it200} iterations (target ≤ 5)`);
+  const [ms200] = timeEach([() => void solveSteady(n200)], 21);
+  console.log(`  steady, 200 nodes: median ${fmt(ms200!)} ms, ${it200} iterations (target ≤ 5)`);
 
   const n500 = lampNetwork(500, { naturalConvection: true });
-  const gc = (globalThis as { gc?: () => void }).gc;
+  const gc = collector();
   gc?.();
   const before = process.memoryUsage().heapUsed;
   let peak = before;
@@ -178,9 +221,9 @@ export async function benchThermal(): Promise<void> {
   console.log(`  heap added by a 500-node steady solve: ${fmt((peak - before) / 1048576, 1)} MB${gc ? "" : " (no --expose-gc: includes garbage not yet collected)"} (target ≤ 20), ${r500.iterations} iterations`);
 
   const radiative = lampNetwork(20, { naturalConvection: false });
-  const oursMs = time(15, () => void solveTransient(radiative, { durationS: 1800, stepS: 1 }));
+  const [oursMs] = timeEach([() => void solveTransient(radiative, { durationS: 1800, stepS: 1 })], 21);
   const scipy = scipyWarmupMs(radiative);
   if (typeof scipy === "number") {
-    console.log(`  scipy solve_ivp(BDF), same 30-min warm-up (20 nodes, radiation + convection): ${fmt(scipy)} ms vs ours ${fmt(oursMs)} ms → scipy/ours ${fmt(scipy / oursMs, 1)}×`);
+    console.log(`  scipy solve_ivp(BDF), same 30-min warm-up (20 nodes, radiation + convection): ${fmt(scipy)} ms vs ours ${fmt(oursMs!)} ms → scipy/ours ${fmt(scipy / oursMs!, 1)}×`);
   } else console.log(`  scipy comparison ${scipy}`);
 }

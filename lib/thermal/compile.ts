@@ -1,17 +1,19 @@
 import { toKelvin } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
-import { linkModel, type LinkModel } from "./link-models";
+import { linkModel, type AnyLinkModel } from "./link-models";
 import type { Network } from "./schema";
-import { minimumDegreeOrder } from "./solver/ordering";
-import { referenceIssues } from "./validate";
+import { groupLinks, type LinkGroups } from "./solver/assemble";
+import { minimumDegreeOrder, type FillPattern } from "./solver/ordering";
+import { scratch } from "./solver/scratch";
+import { checkReferences } from "./validate";
 
 export interface CompiledLink {
   /** Solver index of the `from` node, or −1 for ambient. */
   a: number;
   /** Solver index of the `to` node, or −1 for ambient. */
   b: number;
-  model: LinkModel;
+  model: AnyLinkModel;
 }
 
 /**
@@ -30,6 +32,10 @@ export interface CompiledNetwork {
   p0: Float64Array;
   p1: Float64Array;
   links: CompiledLink[];
+  /** Where the LU factors of the network's matrix can be non-zero (the factor visits only these). */
+  pattern: FillPattern;
+  /** The same links by kind, in flat arrays for the assembly loops. */
+  groups: LinkGroups;
   linear: boolean;
   network: Network;
 }
@@ -37,31 +43,46 @@ export interface CompiledNetwork {
 export const formatPath = (path: readonly (string | number)[]): string =>
   path.map((p) => (typeof p === "number" ? `[${p}]` : String(p))).join(".").replace(/\.\[/g, "[");
 
-/** Throws the first reference problem as a ThermalInputError (direct callers that skipped the schema get the same message). */
-export function assertReferences(network: Network): void {
-  const issue = referenceIssues(network)[0];
+/** Throws the first reference problem as a ThermalInputError (direct callers that skipped the schema get the same message); returns each id's index in `nodes`. */
+export function assertReferences(network: Network): Map<string, number> {
+  const { issues, index } = checkReferences(network);
+  const issue = issues[0];
   if (issue) throw new ThermalInputError("bad_request:network", `${formatPath(issue.path)}: ${issue.message}`, formatPath(issue.path));
+  return index;
 }
 
 export function compileNetwork(network: Network): CompiledNetwork {
-  assertReferences(network);
+  const original = assertReferences(network);
+  const mark = scratch.mark();
+  try {
+    return compileChecked(network, original);
+  } finally {
+    scratch.release(mark);
+  }
+}
+
+function compileChecked(network: Network, original: Map<string, number>): CompiledNetwork {
+  const ambient = AMBIENT_ID;
   const nodeCount = network.nodes.length;
-  const original = new Map(network.nodes.map((node, i) => [node.id, i]));
-  const idx = (id: string) => (id === AMBIENT_ID ? -1 : original.get(id)!);
+  const linkCount = network.links.length;
+  // ends[2l], ends[2l+1]: the link's nodes as indices into `network.nodes`, −1 for ambient.
+  const ends = scratch.ints(2 * linkCount);
+  for (let l = 0; l < linkCount; l++) {
+    const link = network.links[l]!;
+    ends[2 * l] = link.from === ambient ? -1 : original.get(link.from)!;
+    ends[2 * l + 1] = link.to === ambient ? -1 : original.get(link.to)!;
+  }
+  assertPathToAmbient(network, ends);
 
-  const edges = network.links.map((l) => [idx(l.from), idx(l.to)] as const);
-  assertPathToAmbient(network, edges);
-
-  const order = minimumDegreeOrder(nodeCount, edges);
-  const solverIndex = new Int32Array(nodeCount);
-  order.forEach((orig, k) => (solverIndex[orig] = k));
-  const at = (i: number) => (i < 0 ? -1 : solverIndex[i]!);
-
-  const capacity = new Float64Array(nodeCount);
-  network.nodes.forEach((node, i) => (capacity[solverIndex[i]!] = node.heatCapacityJPerK ?? 0));
-  const p0 = new Float64Array(nodeCount);
-  const p1 = new Float64Array(nodeCount);
+  const { order, solverIndex, pattern } = minimumDegreeOrder(nodeCount, ends);
+  // One buffer for the three per-node arrays (see solver/scratch.ts on what each allocation costs).
+  const perNode = new Float64Array(3 * nodeCount);
+  const capacity = perNode.subarray(0, nodeCount);
+  const p0 = perNode.subarray(nodeCount, 2 * nodeCount);
+  const p1 = perNode.subarray(2 * nodeCount);
+  for (let i = 0; i < nodeCount; i++) capacity[solverIndex[i]!] = network.nodes[i]!.heatCapacityJPerK ?? 0;
   const ambientK = toKelvin(network.ambientC);
+  let linear = true;
   for (const s of network.sources ?? []) {
     const k = solverIndex[original.get(s.node)!]!;
     const slope = s.wattsPerKelvin ?? 0;
@@ -69,54 +90,49 @@ export function compileNetwork(network: Network): CompiledNetwork {
     p0[k]! += s.watts - slope * refK;
     p1[k]! += slope;
   }
-  const links = network.links.map((l, i) => ({ a: at(edges[i]![0]), b: at(edges[i]![1]), model: linkModel(l) }));
-  return {
-    n: nodeCount,
-    ids: Array.from(order, (orig) => network.nodes[orig]!.id),
-    solverIndex,
-    ambientK,
-    capacity,
-    p0,
-    p1,
-    links,
-    linear: links.every((l) => l.model.linear) && p1.every((v) => v === 0),
-    network,
-  };
+  for (let k = 0; k < nodeCount; k++) if (p1[k] !== 0) linear = false;
+  const links: CompiledLink[] = new Array<CompiledLink>(linkCount);
+  for (let l = 0; l < linkCount; l++) {
+    const model = linkModel(network.links[l]!);
+    const a = ends[2 * l]!;
+    const b = ends[2 * l + 1]!;
+    links[l] = { a: a < 0 ? -1 : solverIndex[a]!, b: b < 0 ? -1 : solverIndex[b]!, model };
+    if (!model.linear) linear = false;
+  }
+  const ids = new Array<string>(nodeCount);
+  for (let k = 0; k < nodeCount; k++) ids[k] = network.nodes[order[k]!]!.id;
+  return { n: nodeCount, ids, solverIndex, ambientK, capacity, p0, p1, links, pattern, groups: groupLinks(links), linear, network };
 }
 
-function assertPathToAmbient(network: Network, edges: readonly (readonly [number, number])[]): void {
+/** Representative of i's set, halving the path on the way. */
+function root(parent: Int32Array, i: number): number {
+  while (parent[i] !== i) {
+    const up = parent[parent[i]!]!;
+    parent[i] = up;
+    i = up;
+  }
+  return i;
+}
+
+/** Union–find over the nodes plus ambient (index n): a node is stranded when it ends up outside ambient's set. */
+function assertPathToAmbient(network: Network, ends: Int32Array): void {
   const n = network.nodes.length;
-  const adjacency: number[][] = Array.from({ length: n }, () => []);
-  const reached = new Uint8Array(n);
-  const queue: number[] = [];
-  for (const [a, b] of edges) {
-    if (a >= 0 && b >= 0) {
-      adjacency[a]!.push(b);
-      adjacency[b]!.push(a);
-    } else {
-      const k = a >= 0 ? a : b;
-      if (k >= 0 && !reached[k]) {
-        reached[k] = 1;
-        queue.push(k);
-      }
-    }
+  const parent = scratch.ints(n + 1);
+  for (let i = 0; i <= n; i++) parent[i] = i;
+  for (let e = 0; e < ends.length; e += 2) {
+    const a = root(parent, ends[e]! < 0 ? n : ends[e]!);
+    const b = root(parent, ends[e + 1]! < 0 ? n : ends[e + 1]!);
+    if (a !== b) parent[a] = b;
   }
-  while (queue.length > 0) {
-    const k = queue.pop()!;
-    for (const m of adjacency[k]!) {
-      if (!reached[m]) {
-        reached[m] = 1;
-        queue.push(m);
-      }
-    }
-  }
-  const stranded = network.nodes.map((node, i) => ({ id: node.id, i })).filter((x) => !reached[x.i]);
+  const ambient = root(parent, n);
+  const stranded: number[] = [];
+  for (let i = 0; i < n; i++) if (root(parent, i) !== ambient) stranded.push(i);
   if (stranded.length > 0) {
-    const names = stranded.slice(0, 20).map((x) => `"${x.id}"`).join(", ") + (stranded.length > 20 ? ` and ${stranded.length - 20} more` : "");
+    const names = stranded.slice(0, 20).map((i) => `"${network.nodes[i]!.id}"`).join(", ") + (stranded.length > 20 ? ` and ${stranded.length - 20} more` : "");
     throw new ThermalInputError(
       "unprocessable:network",
       `no heat path to ambient from node${stranded.length > 1 ? "s" : ""} ${names}`,
-      `nodes[${stranded[0]!.i}].id`,
+      `nodes[${stranded[0]!}].id`,
     );
   }
 }

@@ -1,7 +1,7 @@
 import { STEFAN_BOLTZMANN } from "./constants";
 import { finnedHeatsinkConductance } from "./elements/heatsink";
-import { naturalConvectionH } from "./elements/natural-convection";
-import type { NetworkLink, Surface } from "./schema";
+import { NaturalConvectionLink } from "./solver/convection-kernel";
+import type { NetworkLink } from "./schema";
 
 /**
  * What the solvers need from a link: the heat q it carries from its `from` node (at ti,
@@ -10,11 +10,16 @@ import type { NetworkLink, Surface } from "./schema";
  */
 export interface LinkModel {
   readonly linear: boolean;
+  /** Which assembly loop takes the link (solver/assemble.ts): a field, so sorting needs no `instanceof`. */
+  readonly kind: LinkKind;
   evaluate(ti: number, tj: number, out: Float64Array, derivatives: boolean): void;
 }
 
-class LinearLink implements LinkModel {
+export type LinkKind = "linear" | "radiation" | "natural-convection" | "correlation";
+
+export class LinearLink implements LinkModel {
   readonly linear = true;
+  readonly kind = "linear";
   constructor(readonly conductance: number) {}
   evaluate(ti: number, tj: number, out: Float64Array): void {
     out[0] = this.conductance * (ti - tj);
@@ -23,9 +28,11 @@ class LinearLink implements LinkModel {
   }
 }
 
-class RadiationLink implements LinkModel {
+export class RadiationLink implements LinkModel {
   readonly linear = false;
-  constructor(private readonly c: number) {}
+  readonly kind = "radiation";
+  /** ε·σ·A, W/K⁴. */
+  constructor(readonly c: number) {}
   evaluate(ti: number, tj: number, out: Float64Array): void {
     const ti2 = ti * ti;
     const tj2 = tj * tj;
@@ -43,8 +50,9 @@ class RadiationLink implements LinkModel {
 const derivativeStep = (ti: number, tj: number) => Math.max(1e-7, 1e-3 * Math.abs(ti - tj));
 
 /** q = G(ti, tj)·(ti − tj) with G from a correlation; derivatives by forward difference. */
-class CorrelationLink implements LinkModel {
+export class CorrelationLink implements LinkModel {
   readonly linear = false;
+  readonly kind = "correlation";
   constructor(private readonly conductance: (ti: number, tj: number) => number) {}
   evaluate(ti: number, tj: number, out: Float64Array, derivatives: boolean): void {
     const q = this.conductance(ti, tj) * (ti - tj);
@@ -56,11 +64,10 @@ class CorrelationLink implements LinkModel {
   }
 }
 
-function naturalConvectionLink(areaM2: number, surface: Surface, lengthM: number): LinkModel {
-  return new CorrelationLink((ti, tj) => naturalConvectionH(surface, lengthM, ti, tj) * areaM2);
-}
+/** Every model `linkModel` builds; `kind` tells them apart. */
+export type AnyLinkModel = LinearLink | RadiationLink | NaturalConvectionLink | CorrelationLink;
 
-export function linkModel(link: NetworkLink): LinkModel {
+export function linkModel(link: NetworkLink): AnyLinkModel {
   switch (link.type) {
     case "resistance":
       return new LinearLink(1 / link.kelvinPerWatt);
@@ -69,7 +76,7 @@ export function linkModel(link: NetworkLink): LinkModel {
     case "convection":
       return new LinearLink(link.coefficientWPerM2K * link.areaM2);
     case "natural-convection":
-      return naturalConvectionLink(link.areaM2, link.surface, link.characteristicLengthM);
+      return new NaturalConvectionLink(link.areaM2, link.surface, link.characteristicLengthM);
     case "radiation":
       return new RadiationLink(link.emissivity * STEFAN_BOLTZMANN * link.areaM2);
     case "finned-heatsink":

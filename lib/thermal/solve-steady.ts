@@ -1,6 +1,7 @@
 import { compileNetwork, type CompiledNetwork } from "./compile";
 import { toCelsius } from "./constants";
 import { ThermalInputError } from "./errors";
+import { setEntry } from "./record";
 import type { LinkType, Network } from "./schema";
 import { resolveSteadyOptions, solveCompiledSteady, type SteadyOptions } from "./solver/steady";
 
@@ -72,11 +73,14 @@ export function steadyResult(c: CompiledNetwork, t: Float64Array, iterations: nu
     const ratio = (ti - tj) / q;
     const smallSignal = out[1]! > 0 ? 1 / out[1]! : Number.MAX_VALUE;
     const r = Math.abs(q) > 1e-12 && Number.isFinite(ratio) && ratio > 0 ? ratio : smallSignal;
-    return { from: link.from, to: link.to, type: link.type, ...(link.label ? { label: link.label } : {}), watts: q, kelvinPerWatt: Math.min(r, Number.MAX_VALUE) };
+    const kelvinPerWatt = Math.min(r, Number.MAX_VALUE);
+    return link.label ? { from: link.from, to: link.to, type: link.type, label: link.label, watts: q, kelvinPerWatt } : { from: link.from, to: link.to, type: link.type, watts: q, kelvinPerWatt };
   });
   let sources = 0;
   for (let i = 0; i < c.n; i++) sources += c.p0[i]! + c.p1[i]! * t[i]!;
-  const temperaturesC = Object.fromEntries(c.network.nodes.map((node, i) => [node.id, toCelsius(t[c.solverIndex[i]!]!)]));
+  const temperaturesC: Record<string, number> = {};
+  const nodes = c.network.nodes;
+  for (let i = 0; i < nodes.length; i++) setEntry(temperaturesC, nodes[i]!.id, toCelsius(t[c.solverIndex[i]!]!));
   return { converged: true, iterations, temperaturesC, links, energyBalanceW: sources - toAmbient, residualW };
 }
 

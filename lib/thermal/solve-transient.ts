@@ -1,6 +1,7 @@
 import { compileNetwork, formatPath } from "./compile";
-import { NETWORK_LIMITS, toCelsius, toKelvin } from "./constants";
+import { NETWORK_LIMITS, toKelvin, ZERO_CELSIUS_K } from "./constants";
 import { ThermalInputError } from "./errors";
+import { setEntry } from "./record";
 import type { Network, Threshold, TransientOptions } from "./schema";
 import { solveCompiledTransient, type ResolvedTransientOptions } from "./solver/transient";
 import { transientIssues } from "./validate";
@@ -56,16 +57,20 @@ export function solveTransient(network: Network, options: TransientOptions, sett
   const compiled = compileNetwork(network);
   const resolved = resolveOptions(network, compiled.solverIndex, options, settings);
   const solution = solveCompiledTransient(compiled, resolved);
-  const temperaturesC: Record<string, number[]> = Object.fromEntries(
-    network.nodes.map((node, i) => {
-      const s = solution.series[compiled.solverIndex[i]!]!;
-      return [node.id, Array.from(s, toCelsius)];
-    }),
-  );
-  for (const [id, values] of Object.entries(temperaturesC)) {
-    if (values.some((v) => !Number.isFinite(v) || v < -273.15)) {
-      throw new ThermalInputError("unprocessable:solution", `node "${id}" has no physical temperature during the warm-up`, "");
+  const temperaturesC: Record<string, number[]> = {};
+  const zeroC = ZERO_CELSIUS_K;
+  for (let i = 0; i < network.nodes.length; i++) {
+    const id = network.nodes[i]!.id;
+    const kelvin = solution.series[compiled.solverIndex[i]!]!;
+    const values = new Array<number>(kelvin.length);
+    for (let k = 0; k < kelvin.length; k++) {
+      const v = kelvin[k]! - zeroC;
+      if (!Number.isFinite(v) || v < -zeroC) {
+        throw new ThermalInputError("unprocessable:solution", `node "${id}" has no physical temperature during the warm-up`, "");
+      }
+      values[k] = v;
     }
+    setEntry(temperaturesC, id, values);
   }
   const result: TransientResult = {
     timesS: solution.timesS,

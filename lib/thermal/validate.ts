@@ -26,31 +26,43 @@ interface NetworkRefs {
  * direct caller gets the same message as a ThermalInputError).
  */
 export function referenceIssues(network: NetworkRefs): ReferenceIssue[] {
+  return checkReferences(network).issues;
+}
+
+/** The reference checks, and each node id's index in `nodes` (the compiler reuses it rather than building it again). */
+export function checkReferences(network: NetworkRefs): { issues: ReferenceIssue[]; index: Map<string, number> } {
   const issues: ReferenceIssue[] = [];
   const seen = new Map<string, number>();
-  network.nodes.forEach((node, i) => {
-    if (node.id === AMBIENT_ID) {
-      issues.push({ message: `node id "${AMBIENT_ID}" is reserved for the fixed ambient node`, path: ["nodes", i, "id"] });
-    } else if (seen.has(node.id)) {
-      issues.push({ message: `duplicate node id "${node.id}" (also nodes[${seen.get(node.id)}])`, path: ["nodes", i, "id"] });
-    } else seen.set(node.id, i);
-  });
-  const known = (id: string) => id === AMBIENT_ID || seen.has(id);
-  network.links.forEach((link, i) => {
-    if (!known(link.from)) issues.push({ message: `link names unknown node "${link.from}"`, path: ["links", i, "from"] });
-    if (!known(link.to)) issues.push({ message: `link names unknown node "${link.to}"`, path: ["links", i, "to"] });
+  // Plain loops and a local copy of the ambient id: this runs on every solve, and each closure
+  // or imported binding read is a measurable part of a small network's set-up.
+  const ambient = AMBIENT_ID;
+  const { nodes, links } = network;
+  for (let i = 0; i < nodes.length; i++) {
+    const id = nodes[i]!.id;
+    if (id === ambient) {
+      issues.push({ message: `node id "${ambient}" is reserved for the fixed ambient node`, path: ["nodes", i, "id"] });
+    } else if (seen.has(id)) {
+      issues.push({ message: `duplicate node id "${id}" (also nodes[${seen.get(id)}])`, path: ["nodes", i, "id"] });
+    } else seen.set(id, i);
+  }
+  for (let i = 0; i < links.length; i++) {
+    const link = links[i]!;
+    if (link.from !== ambient && !seen.has(link.from)) issues.push({ message: `link names unknown node "${link.from}"`, path: ["links", i, "from"] });
+    if (link.to !== ambient && !seen.has(link.to)) issues.push({ message: `link names unknown node "${link.to}"`, path: ["links", i, "to"] });
     if (link.from === link.to) issues.push({ message: `link joins node "${link.from}" to itself`, path: ["links", i, "to"] });
     if (link.type === "finned-heatsink" && link.baseWidthM !== undefined && link.finCount !== undefined && link.finThicknessM !== undefined) {
       if (link.finCount * link.finThicknessM >= link.baseWidthM) {
         issues.push({ message: `${link.finCount} fins of ${link.finThicknessM} m do not fit on a ${link.baseWidthM} m base`, path: ["links", i, "finThicknessM"] });
       }
     }
-  });
-  (network.sources ?? []).forEach((source, i) => {
-    if (source.node === AMBIENT_ID) issues.push({ message: "a heat source cannot sit on the fixed ambient node", path: ["sources", i, "node"] });
-    else if (!seen.has(source.node)) issues.push({ message: `source names unknown node "${source.node}"`, path: ["sources", i, "node"] });
-  });
-  return issues;
+  }
+  const sources = network.sources ?? [];
+  for (let i = 0; i < sources.length; i++) {
+    const node = sources[i]!.node;
+    if (node === ambient) issues.push({ message: "a heat source cannot sit on the fixed ambient node", path: ["sources", i, "node"] });
+    else if (!seen.has(node)) issues.push({ message: `source names unknown node "${node}"`, path: ["sources", i, "node"] });
+  }
+  return { issues, index: seen };
 }
 
 interface TransientRefs {

@@ -1,6 +1,7 @@
-import { AIR, airInto, airPropertiesAt, type AirProperties } from "../air-properties";
+import { airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, toKelvin } from "../constants";
 import type { Surface } from "../schema";
+import { coefficientAt, filmAir, FILM_SLOTS, SURFACE_CODE } from "../solver/convection-kernel";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
 
 const INCROPERA_CH9 = 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", ch. 9';
@@ -106,15 +107,12 @@ export function nusseltNumber(surface: Surface, ra: number, pr: number): number 
   }
 }
 
-const scratch = new Float64Array(5);
+const scratch = new Float64Array(FILM_SLOTS);
 
-/** h of a surface in W/(m²·K), allocation-free; equals `naturalConvectionCoefficient(...).coefficientWPerM2K`. */
+/** h of a surface in W/(m²·K), allocation-free; equals `naturalConvectionCoefficient(...).coefficientWPerM2K` (the solvers' kernel, shared so both agree). */
 export function naturalConvectionH(surface: Surface, lengthM: number, surfaceK: number, fluidK: number): number {
-  airInto(0.5 * (surfaceK + fluidK), scratch);
-  const delta = Math.max(Math.abs(surfaceK - fluidK), MIN_DELTA_K);
-  const effective = surfaceK >= fluidK ? surface : flip[surface];
-  const ra = (STANDARD_GRAVITY * scratch[AIR.beta]! * delta * lengthM ** 3) / (scratch[AIR.nu]! * scratch[AIR.alpha]!);
-  return (nusseltNumber(effective, ra, scratch[AIR.pr]!) * scratch[AIR.k]!) / lengthM;
+  filmAir(0.5 * (surfaceK + fluidK), scratch, false);
+  return coefficientAt(SURFACE_CODE[surface], lengthM, STANDARD_GRAVITY * lengthM ** 3, scratch, surfaceK, fluidK);
 }
 
 const flip: Record<Surface, Surface> = {

@@ -1,4 +1,96 @@
-import type { CompiledNetwork } from "../compile";
+import type { CompiledLink, CompiledNetwork } from "../compile";
+import type { LinkModel } from "../link-models";
+import type { NaturalConvectionLink } from "./convection-kernel";
+
+/**
+ * The links sorted by kind into flat arrays, so assembly runs one tight loop per kind:
+ * linear and radiation links become plain numbers (no call at all), natural convection
+ * one monomorphic call, and only the rare remaining models a general one.
+ */
+export interface LinkGroups {
+  linA: Int32Array;
+  linB: Int32Array;
+  linG: Float64Array;
+  radA: Int32Array;
+  radB: Int32Array;
+  /** ε·σ·A of each radiation link, W/K⁴. */
+  radC: Float64Array;
+  natA: Int32Array;
+  natB: Int32Array;
+  nat: NaturalConvectionLink[];
+  othA: Int32Array;
+  othB: Int32Array;
+  oth: LinkModel[];
+}
+
+export function groupLinks(links: readonly CompiledLink[]): LinkGroups {
+  let lin = 0;
+  let rad = 0;
+  let nat = 0;
+  let oth = 0;
+  for (const { model } of links) {
+    if (model.kind === "linear") lin++;
+    else if (model.kind === "radiation") rad++;
+    else if (model.kind === "natural-convection") nat++;
+    else oth++;
+  }
+  // Two buffers carved into views rather than ten arrays (see scratch.ts on what each allocation costs).
+  const ints = new Int32Array(2 * (lin + rad + nat + oth));
+  const reals = new Float64Array(lin + rad);
+  let at = 0;
+  const take = (length: number) => ints.subarray(at, (at += length));
+  const g: LinkGroups = {
+    linA: take(lin),
+    linB: take(lin),
+    linG: reals.subarray(0, lin),
+    radA: take(rad),
+    radB: take(rad),
+    radC: reals.subarray(lin),
+    natA: take(nat),
+    natB: take(nat),
+    nat: [],
+    othA: take(oth),
+    othB: take(oth),
+    oth: [],
+  };
+  lin = 0;
+  rad = 0;
+  for (const { a, b, model } of links) {
+    if (model.kind === "linear") {
+      g.linA[lin] = a;
+      g.linB[lin] = b;
+      g.linG[lin++] = model.conductance;
+    } else if (model.kind === "radiation") {
+      g.radA[rad] = a;
+      g.radB[rad] = b;
+      g.radC[rad++] = model.c;
+    } else if (model.kind === "natural-convection") {
+      g.natA[g.nat.length] = a;
+      g.natB[g.nat.length] = b;
+      g.nat.push(model);
+    } else {
+      g.othA[g.oth.length] = a;
+      g.othB[g.oth.length] = b;
+      g.oth.push(model);
+    }
+  }
+  return g;
+}
+
+/** Adds a link's heat q (from a to b) and its derivatives to the residual and the dense Jacobian; index −1 is ambient. */
+function scatter(f: Float64Array, jac: Float64Array | null, n: number, a: number, b: number, q: number, di: number, dj: number): void {
+  if (a >= 0) f[a]! += q;
+  if (b >= 0) f[b]! -= q;
+  if (jac === null) return;
+  if (a >= 0) {
+    jac[a * n + a]! += di;
+    if (b >= 0) jac[a * n + b]! += dj;
+  }
+  if (b >= 0) {
+    jac[b * n + b]! -= dj;
+    if (a >= 0) jac[b * n + a]! -= di;
+  }
+}
 
 /**
  * Residual F_i(T) = Σ heat leaving node i − P_i(T) and, if `jacobian` is given, its
@@ -7,33 +99,44 @@ import type { CompiledNetwork } from "../compile";
 export function assemble(c: CompiledNetwork, t: Float64Array, f: Float64Array, jacobian: Float64Array | null, out: Float64Array): void {
   const n = c.n;
   const amb = c.ambientK;
-  for (let i = 0; i < n; i++) f[i] = -(c.p0[i]! + c.p1[i]! * t[i]!);
+  const { p0, p1, groups: g } = c;
+  for (let i = 0; i < n; i++) f[i] = -(p0[i]! + p1[i]! * t[i]!);
   if (jacobian) {
     jacobian.fill(0);
-    for (let i = 0; i < n; i++) jacobian[i * n + i] = -c.p1[i]!;
+    for (let i = 0; i < n; i++) jacobian[i * n + i] = -p1[i]!;
+  }
+  const { linA, linB, linG } = g;
+  for (let l = 0; l < linA.length; l++) {
+    const a = linA[l]!;
+    const b = linB[l]!;
+    const gl = linG[l]!;
+    scatter(f, jacobian, n, a, b, gl * ((a < 0 ? amb : t[a]!) - (b < 0 ? amb : t[b]!)), gl, -gl);
+  }
+  const { radA, radB, radC } = g;
+  for (let l = 0; l < radA.length; l++) {
+    const a = radA[l]!;
+    const b = radB[l]!;
+    const ti = a < 0 ? amb : t[a]!;
+    const tj = b < 0 ? amb : t[b]!;
+    const ti2 = ti * ti;
+    const tj2 = tj * tj;
+    const cl = radC[l]!;
+    scatter(f, jacobian, n, a, b, cl * (ti2 * ti2 - tj2 * tj2), 4 * cl * ti2 * ti, -4 * cl * tj2 * tj);
   }
   const derivatives = jacobian !== null;
-  const links = c.links;
-  for (let l = 0; l < links.length; l++) {
-    const link = links[l]!;
-    const a = link.a;
-    const b = link.b;
-    link.model.evaluate(a < 0 ? amb : t[a]!, b < 0 ? amb : t[b]!, out, derivatives);
-    const q = out[0]!;
-    if (a >= 0) f[a]! += q;
-    if (b >= 0) f[b]! -= q;
-    if (jacobian) {
-      const di = out[1]!;
-      const dj = out[2]!;
-      if (a >= 0) {
-        jacobian[a * n + a]! += di;
-        if (b >= 0) jacobian[a * n + b]! += dj;
-      }
-      if (b >= 0) {
-        jacobian[b * n + b]! -= dj;
-        if (a >= 0) jacobian[b * n + a]! -= di;
-      }
-    }
+  const { natA, natB, nat } = g;
+  for (let l = 0; l < nat.length; l++) {
+    const a = natA[l]!;
+    const b = natB[l]!;
+    nat[l]!.evaluate(a < 0 ? amb : t[a]!, b < 0 ? amb : t[b]!, out, derivatives);
+    scatter(f, jacobian, n, a, b, out[0]!, out[1]!, out[2]!);
+  }
+  const { othA, othB, oth } = g;
+  for (let l = 0; l < oth.length; l++) {
+    const a = othA[l]!;
+    const b = othB[l]!;
+    oth[l]!.evaluate(a < 0 ? amb : t[a]!, b < 0 ? amb : t[b]!, out, derivatives);
+    scatter(f, jacobian, n, a, b, out[0]!, out[1]!, out[2]!);
   }
 }
 

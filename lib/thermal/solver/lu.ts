@@ -1,24 +1,29 @@
+import type { FillPattern } from "./ordering";
+
 /**
  * LU factorisation of the dense, row-major n×n matrix of a heat network, in place.
  *
  * A network's Jacobian is a Z-matrix whose columns sum to ≥ 0 (each link takes from one
- * node what it gives the other), so Gaussian elimination needs no pivoting; the factor
- * skips the zeros of each pivot row and column, which keeps sparse networks in the
- * minimum-degree order close to linear cost. If a pivot still comes out tiny (a source
- * that grows with temperature can break the sign pattern) the caller falls back to
- * partial pivoting.
+ * node what it gives the other), so Gaussian elimination needs no pivoting; the factor and
+ * the triangular solves visit only the entries of the fill pattern worked out with the
+ * minimum-degree order, so a sparse network costs close to its number of links, not n²
+ * (the storage stays dense: the matrix is assembled and copied with single memory moves).
+ * If a pivot still comes out tiny (a source that grows with temperature can break the
+ * sign pattern) the caller falls back to partial pivoting, which ignores the pattern.
  */
 export class NetworkLu {
   readonly n: number;
   readonly a: Float64Array;
-  private readonly cols: Int32Array;
   private readonly perm: Int32Array;
   private pivoted = false;
 
-  constructor(n: number) {
+  constructor(
+    n: number,
+    /** Set anew by whoever reuses the factor for another network of the same size. */
+    public pattern: FillPattern,
+  ) {
     this.n = n;
     this.a = new Float64Array(n * n);
-    this.cols = new Int32Array(n);
     this.perm = new Int32Array(n);
   }
 
@@ -66,29 +71,25 @@ export class NetworkLu {
   }
 
   private factorNoPivot(): boolean {
-    const { n, a, cols } = this;
+    const { n, a } = this;
+    const { ptr, upper } = this.pattern;
     for (let k = 0; k < n; k++) {
       const kk = k * n;
       const piv = a[kk + k]!;
-      let nc = 0;
+      const p0 = ptr[k]!;
+      const p1 = ptr[k + 1]!;
       let scale = Math.abs(piv);
-      for (let j = k + 1; j < n; j++) {
-        const v = a[kk + j]!;
-        if (v !== 0) {
-          cols[nc++] = j;
-          scale = Math.max(scale, Math.abs(v));
-        }
-      }
+      for (let p = p0; p < p1; p++) scale = Math.max(scale, Math.abs(a[kk + upper[p]!]!));
       if (!(Math.abs(piv) > 1e-13 * scale) || !Number.isFinite(piv)) return false;
-      for (let i = k + 1; i < n; i++) {
-        const ik = i * n + k;
-        const v = a[ik]!;
+      // The pattern is symmetric: the rows below the pivot with an entry in column k are row k's columns.
+      for (let q = p0; q < p1; q++) {
+        const ii = upper[q]! * n;
+        const v = a[ii + k]!;
         if (v === 0) continue;
         const l = v / piv;
-        a[ik] = l;
-        const ii = i * n;
-        for (let c = 0; c < nc; c++) {
-          const j = cols[c]!;
+        a[ii + k] = l;
+        for (let p = p0; p < p1; p++) {
+          const j = upper[p]!;
           a[ii + j]! -= l * a[kk + j]!;
         }
       }
@@ -109,14 +110,39 @@ export class NetworkLu {
 
   /** Solves A·x = b with the factors; x may alias b. */
   solve(b: Float64Array, x: Float64Array): void {
-    const { n, a, perm } = this;
     if (this.pivoted) {
-      const t = new Float64Array(n);
-      for (let i = 0; i < n; i++) t[i] = b[perm[i]!]!;
-      for (let i = 0; i < n; i++) x[i] = t[i]!;
-    } else if (x !== b) {
-      for (let i = 0; i < n; i++) x[i] = b[i]!;
+      this.solvePivoted(b, x);
+      return;
     }
+    const { n, a } = this;
+    const { ptr, upper, lowerPtr, lower } = this.pattern;
+    if (x !== b) x.set(b);
+    for (let i = 1; i < n; i++) {
+      const ii = i * n;
+      let s = x[i]!;
+      for (let p = lowerPtr[i]!; p < lowerPtr[i + 1]!; p++) {
+        const j = lower[p]!;
+        s -= a[ii + j]! * x[j]!;
+      }
+      x[i] = s;
+    }
+    for (let i = n - 1; i >= 0; i--) {
+      const ii = i * n;
+      let s = x[i]!;
+      for (let p = ptr[i]!; p < ptr[i + 1]!; p++) {
+        const j = upper[p]!;
+        s -= a[ii + j]! * x[j]!;
+      }
+      x[i] = s / a[ii + i]!;
+    }
+  }
+
+  /** Row exchanges can move entries anywhere, so after a pivoted factorisation the solves run dense. */
+  private solvePivoted(b: Float64Array, x: Float64Array): void {
+    const { n, a, perm } = this;
+    const t = new Float64Array(n);
+    for (let i = 0; i < n; i++) t[i] = b[perm[i]!]!;
+    for (let i = 0; i < n; i++) x[i] = t[i]!;
     for (let i = 1; i < n; i++) {
       const ii = i * n;
       let s = x[i]!;

@@ -2,6 +2,7 @@ import type { CompiledNetwork } from "../compile";
 import { ThermalInputError } from "../errors";
 import { assemble, maxAbs } from "./assemble";
 import { NetworkLu } from "./lu";
+import type { FillPattern } from "./ordering";
 
 export interface SteadyOptions {
   /** Temperatures are converged to this, K (default 1e-6): Newton stops when a full step is below a tenth of it. */
@@ -58,13 +59,16 @@ export class SolverWorkspace {
   j: Float64Array;
   jNew: Float64Array;
   readonly d: Float64Array;
-  constructor(readonly n: number) {
-    this.lu = new NetworkLu(n);
+  /** Trial temperatures of the line search. */
+  readonly trial: Float64Array;
+  constructor(readonly n: number, pattern: FillPattern) {
+    this.lu = new NetworkLu(n, pattern);
     this.f = new Float64Array(n);
     this.fNew = new Float64Array(n);
     this.j = new Float64Array(n * n);
     this.jNew = new Float64Array(n * n);
     this.d = new Float64Array(n);
+    this.trial = new Float64Array(n);
   }
 
   /** Factorises a copy of `j` (pivoting only if the cheap factorisation meets a tiny pivot). */
@@ -76,11 +80,34 @@ export class SolverWorkspace {
   }
 }
 
+/**
+ * Networks up to this size keep their workspace for the next solve of the same size: for a
+ * 20-node network its nine arrays cost more to allocate (V8 gives each typed array over
+ * 64 bytes its own backing store) than a Newton iteration, and a search of the inverse
+ * problems solves the same network dozens of times. Larger ones allocate afresh, so the
+ * module never holds more than about 100 kB (three 64 × 64 matrices).
+ */
+const KEEP_WORKSPACE_UP_TO = 64;
+let spare: SolverWorkspace | null = null;
+
+/** A workspace for n nodes with this fill pattern; taken out of the spare slot, so a nested solve can never share it. */
+export function takeWorkspace(n: number, pattern: FillPattern): SolverWorkspace {
+  const ws = spare !== null && spare.n === n ? spare : new SolverWorkspace(n, pattern);
+  if (ws === spare) spare = null;
+  ws.lu.pattern = pattern;
+  return ws;
+}
+
+/** Hands a workspace back once nothing refers to its arrays any more. */
+export function returnWorkspace(ws: SolverWorkspace): void {
+  if (ws.n <= KEEP_WORKSPACE_UP_TO) spare = ws;
+}
+
 /** Linear network with each link replaced by its secant conductance at a guessed rise: exact for linear networks, a safe start otherwise. */
 function initialGuess(c: CompiledNetwork, ws: SolverWorkspace): Float64Array {
   const n = c.n;
   const j = ws.j;
-  const rhs = new Float64Array(n);
+  const rhs = ws.fNew;
   j.fill(0);
   for (let i = 0; i < n; i++) {
     j[i * n + i] = -c.p1[i]!;
@@ -113,9 +140,11 @@ function initialGuess(c: CompiledNetwork, ws: SolverWorkspace): Float64Array {
  */
 export function solveCompiledSteady(c: CompiledNetwork, options: ResolvedSteadyOptions, start?: Float64Array): CompiledSteadySolution {
   const n = c.n;
-  const ws = new SolverWorkspace(n);
-  let t: Float64Array = start ? Float64Array.from(start) : initialGuess(c, ws);
-  let tNew: Float64Array = new Float64Array(n);
+  const ws = takeWorkspace(n, c.pattern);
+  // `owned` is handed to the caller; the line search alternates it with the workspace's `trial`.
+  const owned: Float64Array = start ? Float64Array.from(start) : initialGuess(c, ws);
+  let t = owned;
+  let tNew = ws.trial;
   assemble(c, t, ws.f, ws.j, ws.out);
   let nf = maxAbs(ws.f);
   let converged = false;
@@ -163,5 +192,10 @@ export function solveCompiledSteady(c: CompiledNetwork, options: ResolvedSteadyO
   }
   ws.lu.a.set(ws.j);
   const stable = converged && ws.lu.factor() && ws.lu.pivotsPositive();
+  if (t !== owned) {
+    owned.set(t);
+    t = owned;
+  }
+  returnWorkspace(ws);
   return { t, converged, iterations, residualW: nf, stable };
 }

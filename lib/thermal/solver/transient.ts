@@ -1,7 +1,7 @@
 import type { CompiledNetwork } from "../compile";
 import { ThermalInputError } from "../errors";
-import { assemble, maxAbs } from "./assemble";
-import { SolverWorkspace } from "./steady";
+import { assemble } from "./assemble";
+import { returnWorkspace, takeWorkspace, type SolverWorkspace } from "./steady";
 
 export interface ResolvedTransientOptions {
   durationS: number;
@@ -47,7 +47,7 @@ export function outputTimes(durationS: number, stepS: number): number[] {
  */
 export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientOptions): CompiledTransientSolution {
   const n = c.n;
-  const ws = new SolverWorkspace(n);
+  const ws = takeWorkspace(n, c.pattern);
   const times = outputTimes(o.durationS, o.stepS);
   const series = Array.from({ length: n }, () => new Float64Array(times.length));
   let prev = new Float64Array(n);
@@ -84,6 +84,7 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
     cur.set(next);
     hPrev = h;
   }
+  returnWorkspace(ws);
   return { timesS: times, series, newtonIterations: stats.newton, factorisations: stats.factor };
 }
 
@@ -113,39 +114,45 @@ function solveStep(
   const reuse = c.linear && !hold && stats.factoredFor === a;
   let sinceRefresh = reuse ? 0 : Infinity;
   let exact = reuse;
+  const f = ws.f;
   for (let it = 0; it < o.maxIterationsPerStep; it++) {
     const refresh = sinceRefresh >= o.refreshAfter;
-    assemble(c, t, ws.f, refresh ? ws.j : null, ws.out);
-    for (let i = 0; i < n; i++) {
-      const ci = cap[i]!;
-      if (ci === 0) continue;
-      if (held) {
-        ws.f[i] = t[i]! - held[i]!;
-      } else {
-        ws.f[i]! += ci * (a * t[i]! + b * tn[i]! + cc * tnm1[i]!);
+    assemble(c, t, f, refresh ? ws.j : null, ws.out);
+    if (held) {
+      for (let i = 0; i < n; i++) if (cap[i] !== 0) f[i] = t[i]! - held[i]!;
+    } else {
+      for (let i = 0; i < n; i++) {
+        const ci = cap[i]!;
+        if (ci !== 0) f[i]! += ci * (a * t[i]! + b * tn[i]! + cc * tnm1[i]!);
       }
     }
     if (refresh) {
+      const j = ws.j;
       for (let i = 0; i < n; i++) {
         const ci = cap[i]!;
         if (ci === 0) continue;
         if (held) {
-          ws.j.fill(0, i * n, i * n + n);
-          ws.j[i * n + i] = 1;
-        } else ws.j[i * n + i]! += ci * a;
+          j.fill(0, i * n, i * n + n);
+          j[i * n + i] = 1;
+        } else j[i * n + i]! += ci * a;
       }
-      if (!ws.factor(ws.j)) throw new ThermalInputError("unprocessable:convergence", `warm-up met a singular system at t = ${timeS} s`, "");
+      if (!ws.factor(j)) throw new ThermalInputError("unprocessable:convergence", `warm-up met a singular system at t = ${timeS} s`, "");
       stats.factor++;
       stats.factoredFor = hold ? NaN : a;
       sinceRefresh = 0;
       exact = c.linear;
     }
-    for (let i = 0; i < n; i++) ws.d[i] = -ws.f[i]!;
-    ws.lu.solve(ws.d, ws.d);
+    // The correction is −J⁻¹F: solve for J⁻¹F in place and subtract it, noting the largest move.
+    ws.lu.solve(f, f);
     stats.newton++;
     sinceRefresh++;
-    const step = maxAbs(ws.d);
-    for (let i = 0; i < n; i++) t[i]! += ws.d[i]!;
+    let step = 0;
+    for (let i = 0; i < n; i++) {
+      const v = f[i]!;
+      t[i]! -= v;
+      const m = Math.abs(v);
+      if (m > step || m !== m) step = m !== m ? Infinity : m;
+    }
     if (!Number.isFinite(step)) break;
     // For a linear network one solve with the exact matrix is the answer.
     if (step < o.toleranceK || (exact && it === 0)) return;

@@ -4,37 +4,14 @@
  * filter + sort + search as the Parts bin sends it. Target from the parts issue: median ≤ 50 ms.
  * Prints figures, asserts nothing.
  */
-import { execFileSync, spawn } from "node:child_process";
 import { randomBytes } from "node:crypto";
-import { existsSync } from "node:fs";
-import { createConnection } from "node:net";
-import mysql from "mysql2/promise";
+import type mysql from "mysql2/promise";
 import { partSchema, type PartInput } from "../lib/parts";
 import { CATALOGUE } from "../db/seed/catalogue-data";
-import { loadEnvFile } from "./load-env";
+import { BENCH_DB, connectBenchDb, median, prepareBenchDb, quantile, startBenchServer } from "./bench-server";
 
-const BENCH_DB = "sinkwise_bench";
 const PARTS = 5000;
 const RUNS = 50;
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)] ?? Number.NaN;
-}
-function quantile(xs: number[], q: number): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.min(s.length - 1, Math.floor(s.length * q))] ?? Number.NaN;
-}
-
-async function connect(): Promise<mysql.Connection> {
-  return mysql.createConnection({
-    host: process.env.DATABASE_HOST ?? "127.0.0.1",
-    port: Number(process.env.DATABASE_PORT ?? 3307),
-    user: process.env.DATABASE_USER,
-    password: process.env.DATABASE_PASSWORD,
-    database: BENCH_DB,
-  });
-}
 
 /** 5,000 parts: every catalogue part in many variants, spread over owners, provenance and visibility. */
 async function seedParts(conn: mysql.Connection): Promise<void> {
@@ -79,73 +56,19 @@ async function seedParts(conn: mysql.Connection): Promise<void> {
   await conn.query("ANALYZE TABLE part");
 }
 
-/** True when something already answers on 127.0.0.1:port (another engineer's server, say). */
-function portBusy(port: number): Promise<boolean> {
-  return new Promise((resolve) => {
-    const socket = createConnection(port, "127.0.0.1");
-    socket.once("connect", () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once("error", () => resolve(false));
-  });
-}
-
-async function freePort(): Promise<number> {
-  for (let port = 3310; port < 3400; port++) if (!(await portBusy(port))) return port;
-  throw new Error("no free port in 3310–3399");
-}
-
-async function waitFor(url: string, alive: () => boolean, tries = 300): Promise<void> {
-  for (let i = 0; i < tries; i++) {
-    if (!alive()) throw new Error("the bench server exited");
-    try {
-      if ((await fetch(url)).status < 500) return;
-    } catch {
-      // not up yet
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
-  throw new Error(`${url} did not answer`);
-}
-
 export async function benchParts(): Promise<void> {
-  loadEnvFile();
-  const PORT = await freePort();
-  const BASE = `http://127.0.0.1:${PORT}`;
-  const env = { ...process.env, DATABASE_NAME: BENCH_DB, APP_URL: BASE, NEXT_TELEMETRY_DISABLED: "1" };
   console.log(`\n[bench:parts] database ${BENCH_DB}: migrating and seeding ${PARTS} parts`);
-  execFileSync("bash", ["scripts/db.sh", "start"], { stdio: "ignore" });
-  execFileSync("bash", ["scripts/db.sh", "create-db", BENCH_DB], { stdio: "ignore" });
-  const tsx = ["node_modules/.bin/tsx", "--conditions=react-server"];
-  execFileSync(tsx[0]!, [tsx[1]!, "scripts/migrate.ts"], { env, stdio: "ignore" });
-  execFileSync(tsx[0]!, [tsx[1]!, "scripts/seed.ts"], { env, stdio: "ignore" });
-  const conn = await connect();
+  prepareBenchDb();
+  const conn = await connectBenchDb();
   try {
     await seedParts(conn);
   } finally {
     await conn.end();
   }
-
-  if (!existsSync(".next/BUILD_ID")) {
-    console.log("[bench:parts] no production build: running next build");
-    execFileSync("node", ["node_modules/next/dist/bin/next", "build"], { env, stdio: "ignore" });
-  }
-  // Its own process group: `next start` runs next-server as a child, and both must stop.
-  const server = spawn("node", ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { env, stdio: "ignore", detached: true });
-  let exited = false;
-  server.once("exit", () => {
-    exited = true;
-  });
+  const server = await startBenchServer("parts");
+  const BASE = server.base;
   try {
-    await waitFor(`${BASE}/api/v1/health`, () => !exited);
-    const signIn = await fetch(`${BASE}/api/v1/auth/signin`, {
-      method: "POST",
-      headers: { "content-type": "application/json", origin: BASE, "x-forwarded-for": "198.51.100.7" },
-      body: JSON.stringify({ email: "maker@sinkwise.test", password: process.env.DEMO_PASSWORD }),
-    });
-    const cookie = (signIn.headers.getSetCookie()[0] ?? "").split(";")[0] ?? "";
-    if (signIn.status !== 200) throw new Error(`bench sign-in failed: ${signIn.status}`);
+    const cookie = await server.signIn("maker@sinkwise.test");
     // What the Parts bin sends: a kind or provenance filter, a sort, sometimes a search, a page.
     const queries = [
       "kind=heatsink&sort=name&dir=asc&page=1&pageSize=25",
@@ -176,10 +99,6 @@ export async function benchParts(): Promise<void> {
     console.log(`[bench:parts]   median ${med.toFixed(1)} ms, p90 ${quantile(samples, 0.9).toFixed(1)} ms, max ${Math.max(...samples).toFixed(1)} ms — target median ≤ 50 ms: ${med <= 50 ? "met" : "NOT met"}`);
     for (const [q, total] of totals) console.log(`[bench:parts]   ${total} matching  ?${q}`);
   } finally {
-    if (!exited && server.pid) {
-      const gone = new Promise((r) => server.once("exit", r));
-      process.kill(-server.pid, "SIGTERM");
-      await gone;
-    }
+    await server.stop();
   }
 }

@@ -1,4 +1,5 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
+import { benchBuilds } from "./bench-builds";
 import { benchParts } from "./bench-parts";
 import { benchRetrofit } from "./bench-retrofit";
 import { benchThermal } from "./bench-thermal";
@@ -7,6 +8,7 @@ async function main(): Promise<void> {
   await benchThermal();
   await benchRetrofit();
   await benchParts();
+  await benchBuilds();
 }
 
 main().catch((e: unknown) => {

@@ -206,13 +206,16 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
     .limit(50);
 }
 
-export async function getCachedResult({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<unknown | undefined> {
+/** The cached result as stored JSON text, so a cache hit is sent without parsing it. */
+export async function getCachedResultText({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<string | undefined> {
   const rows = await db()
     .select({ result: revisionResults.result })
     .from(revisionResults)
     .where(and(eq(revisionResults.revisionId, revisionId), eq(revisionResults.solverVersion, solverVersion)))
     .limit(1);
-  return rows[0] ? parseJson(rows[0].result) : undefined;
+  const value: unknown = rows[0]?.result;
+  if (value === undefined) return undefined;
+  return typeof value === "string" ? value : JSON.stringify(value);
 }
 
 export async function putCachedResult({ revisionId, solverVersion, result }: { revisionId: string; solverVersion: string; result: unknown }): Promise<void> {

@@ -157,14 +157,19 @@ export async function listPartsForExport({ viewer, query, limit }: { viewer: Par
 
 /** One part when the viewer may see it; undefined otherwise (callers answer 404 either way). */
 export async function getPart({ id, viewer }: { id: string; viewer: PartViewer }): Promise<PartRecord | undefined> {
+  return (await getParts({ ids: [id], viewer }))[0];
+}
+
+/** The parts among `ids` the viewer may see (one query; a build names up to a dozen). */
+export async function getParts({ ids, viewer }: { ids: readonly string[]; viewer: PartViewer }): Promise<PartRecord[]> {
+  if (ids.length === 0) return [];
   const rows = await db()
     .select({ ...summaryColumns, curves: parts.curves })
     .from(parts)
     .innerJoin(users, eq(users.id, parts.ownerId))
-    .where(and(eq(parts.id, id), visibleTo(viewer)))
-    .limit(1);
-  const row = rows[0];
-  return row ? { ...toSummary(row), curves: jsonObject(row.curves) } : undefined;
+    .where(and(inArray(parts.id, [...ids]), visibleTo(viewer)))
+    .limit(ids.length);
+  return rows.map((row) => ({ ...toSummary(row), curves: jsonObject(row.curves) }));
 }
 
 function columnsOf(part: Part) {

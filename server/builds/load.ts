@@ -1,6 +1,6 @@
 import "server-only";
 import { getBuild, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
-import { getPart, type PartRecord } from "@/db/queries/parts";
+import { getParts, type PartRecord } from "@/db/queries/parts";
 import type { BuildAccess, BuildViewer } from "@/lib/builds/access";
 import { collectPartIds } from "@/lib/builds/part-ids";
 import { ApiError } from "@/lib/http/api-error";
@@ -29,9 +29,8 @@ export async function loadRevision({ build, number }: { build: LoadedBuild; numb
 
 /** The parts a design refers to that the viewer may see, by id. */
 export async function loadDesignParts({ design, viewer }: { design: unknown; viewer: BuildViewer }): Promise<Map<string, PartRecord>> {
-  const ids = collectPartIds(design);
-  const found = await Promise.all(ids.map((id) => getPart({ id, viewer })));
-  return new Map(found.filter((p): p is PartRecord => p !== undefined).map((p) => [p.id, p]));
+  const found = await getParts({ ids: collectPartIds(design), viewer });
+  return new Map(found.map((p) => [p.id, p]));
 }
 
 /** Refuses a design naming parts the author cannot see (or that do not exist), naming them. */

@@ -1,6 +1,6 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { getCachedResult, putCachedResult, type RevisionRow } from "@/db/queries/builds";
+import { getCachedResultText, putCachedResult, type RevisionRow } from "@/db/queries/builds";
 import type { PartRecord } from "@/db/queries/parts";
 import type { BuildViewer } from "@/lib/builds/access";
 import { partSchema, type Part } from "@/lib/parts";
@@ -34,16 +34,30 @@ function cacheKey(records: Map<string, PartRecord>): string {
   return `${SOLVER_VERSION}:${h.digest("hex").slice(0, 24)}`;
 }
 
-/** Evaluates a revision for a viewer, from the cache when it holds this key. */
-export async function solveRevision({ build, revision, viewer }: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<RevisionSolve> {
+/**
+ * Evaluates a revision for a viewer, from the cache when it holds this key. The answer is
+ * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
+ */
+async function solveToText({ build, revision, viewer }: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation }> {
   const records = await loadDesignParts({ design: revision.design, viewer });
   const key = cacheKey(records);
-  const hit = await getCachedResult({ revisionId: revision.id, solverVersion: key });
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
-  if (hit) return { ...base, cached: true, evaluation: hit as BuildEvaluation };
+  const hit = await getCachedResultText({ revisionId: revision.id, solverVersion: key });
+  if (hit !== undefined) return { head: { ...base, cached: true }, evaluationJson: hit };
   const evaluation = evaluateRevision({ design: revision.design, records });
   await putCachedResult({ revisionId: revision.id, solverVersion: key, result: evaluation });
-  return { ...base, cached: false, evaluation };
+  return { head: { ...base, cached: false }, evaluationJson: JSON.stringify(evaluation), evaluation };
+}
+
+export async function solveRevision(args: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<RevisionSolve> {
+  const r = await solveToText(args);
+  return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(r.evaluationJson) as BuildEvaluation) };
+}
+
+/** The solve route's body as JSON text (`RevisionSolve`), built around the cached text. */
+export async function solveRevisionJson(args: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<string> {
+  const r = await solveToText(args);
+  return `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`;
 }
 
 /** Resolves the design against the part records and runs the evaluation (pure from here on). */

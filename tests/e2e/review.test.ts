@@ -79,6 +79,29 @@ describe("Side by side and the Review desk in chromium", () => {
     await page.close();
   });
 
+  it("the maker shares the Budget read-only; the link opens without signing in and stops when revoked", async () => {
+    const page = await maker.browser.newPage();
+    await page.goto(`${BASE_URL}/builds/${ids.strapped}/reviews`);
+    const panel = page.getByRole("region", { name: "Share links" });
+    await panel.getByLabel("Expires after (days)").fill("7");
+    await panel.getByRole("button", { name: "Create a link" }).click();
+    const url = await panel.getByTestId("share-url").inputValue();
+    expect(url).toMatch(/\/share\/[A-Za-z0-9_-]{43}$/);
+    // The reviewer's browser has not signed in yet: it stands for anyone with the link.
+    const anon = await reviewer.browser.newPage();
+    await anon.goto(url.replace(/^https?:\/\/[^/]+/, BASE_URL));
+    await anon.getByTestId("shared-budget").waitFor();
+    await anon.getByTestId("overall-verdict").waitFor({ timeout: 30_000 });
+    await anon.getByTestId("warmup-chart").locator("canvas").waitFor();
+    await shot(anon, "share-link-view");
+    await panel.getByRole("button", { name: "Revoke" }).first().click();
+    await panel.getByText("revoked").first().waitFor();
+    await anon.reload();
+    await anon.getByText("This share link was revoked by the build's owner.").waitFor();
+    await anon.close();
+    await page.close();
+  });
+
   it("the reviewer pins a comment to the driver node and records a verdict", async () => {
     const page = await reviewer.browser.newPage();
     await signInThroughForm(page, "reviewer@sinkwise.test");

@@ -5,13 +5,26 @@ import { requirePageUser } from "@/server/auth/session";
 
 export const metadata = { title: "Builds" };
 
+/** Each build followed by its variants, so heat-path alternatives are listed together. */
+function grouped(builds: BuildSummary[]): (BuildSummary & { nested: boolean })[] {
+  const ids = new Set(builds.map((b) => b.id));
+  const children = new Map<string, BuildSummary[]>();
+  for (const b of builds) {
+    if (b.variantOf && ids.has(b.variantOf)) children.set(b.variantOf, [...(children.get(b.variantOf) ?? []), b]);
+  }
+  return builds
+    .filter((b) => !(b.variantOf && ids.has(b.variantOf)))
+    .flatMap((b) => [{ ...b, nested: false }, ...(children.get(b.id) ?? []).map((c) => ({ ...c, nested: true }))]);
+}
+
 function BuildList({ builds, empty }: { builds: BuildSummary[]; empty: string }) {
   if (builds.length === 0) return <p className="text-sm text-ink-soft">{empty}</p>;
   return (
     <ul className="divide-y divide-line rounded-lg border border-line bg-white/60">
-      {builds.map((b) => (
-        <li key={b.id} className="flex flex-wrap items-baseline gap-x-4 gap-y-1 px-4 py-3">
+      {grouped(builds).map((b) => (
+        <li key={b.id} className={`flex flex-wrap items-baseline gap-x-4 gap-y-1 py-3 pr-4 ${b.nested ? "pl-10" : "pl-4"}`}>
           <Link href={`/builds/${b.id}`} className="font-medium hover:text-ember">{b.title}</Link>
+          {b.nested && <span aria-hidden className="-ml-5 text-ink-soft">↳</span>}
           {b.variantNote && <span className="rounded bg-ember-soft px-1.5 text-xs text-ember">variant: {b.variantNote}</span>}
           <span className="text-xs text-ink-soft">revision {b.currentRevision} · {b.ownerName} · {b.visibility}</span>
           <span className="ml-auto flex gap-3 text-sm">

@@ -9,7 +9,8 @@ import { HeadroomTable } from "./headroom-table";
 import { HeatPathDiagram } from "./heat-path-diagram";
 import { LadderChart } from "./ladder-chart";
 import { ModesTable } from "./modes-table";
-import type { Evaluation } from "./types";
+import { VERDICTS } from "@/lib/retrofit";
+import type { Evaluation, Scenario } from "./types";
 import { WarmupChart } from "./warmup-chart";
 import { WhatItTakes } from "./what-it-takes";
 
@@ -24,7 +25,10 @@ function Panel({ title, children }: { title: string; children: React.ReactNode }
 
 /** Everything the Budget shows for one evaluation; also used by share links and Side by side. */
 export function BudgetReport({ evaluation, ambientC, unit = "C" }: { evaluation: Evaluation; ambientC: number; unit?: TempUnit }) {
-  const [scenarioId, setScenarioId] = useState(evaluation.scenarios[0]?.id ?? "");
+  // Open on the scenario that needs attention most: the worst verdict, the first of equals.
+  const rank = (v: string | null | undefined) => (v ? VERDICTS.indexOf(v as (typeof VERDICTS)[number]) : -1);
+  const worst = evaluation.scenarios.reduce<Scenario | undefined>((w, s) => (!w || rank(s.thermal?.verdict) > rank(w.thermal?.verdict) ? s : w), undefined);
+  const [scenarioId, setScenarioId] = useState(worst?.id ?? "");
   const scenario = evaluation.scenarios.find((s) => s.id === scenarioId) ?? evaluation.scenarios[0];
   const errors = evaluation.problems.filter((p) => p.severity !== "info");
   return (

@@ -9,6 +9,10 @@ import type { Scenario } from "./types";
  * The temperature ladder: a waterfall from ambient up to the hottest source, one floating
  * bar per link the heat crosses, so the biggest rung shows what to improve first.
  */
+function short(label: string, max = 34): string {
+  return label.length > max ? `${label.slice(0, max - 1)}…` : label;
+}
+
 export function LadderChart({ scenario, ambientC }: { scenario: Scenario; ambientC: number }) {
   const ladder = scenario.thermal?.ladder;
   if (!ladder || ladder.steps.length === 0) return <p className="text-sm text-ink-soft">No temperature ladder for this scenario.</p>;
@@ -42,6 +46,7 @@ export function LadderChart({ scenario, ambientC }: { scenario: Scenario; ambien
             legend: { display: false },
             tooltip: {
               callbacks: {
+                title: (items) => steps[items[0]?.dataIndex ?? 0]?.place ?? "",
                 label: (ctx) => {
                   const s = steps[ctx.dataIndex];
                   return s ? `+${s.deltaK.toFixed(1)} K · ${s.watts.toFixed(2)} W · ${s.kelvinPerWatt.toFixed(2)} K/W` : "";
@@ -49,7 +54,11 @@ export function LadderChart({ scenario, ambientC }: { scenario: Scenario; ambien
               },
             },
           },
-          scales: { x: { title: { display: true, text: "°C" }, min: Math.floor(ambientC - 2) } },
+          scales: {
+            x: { title: { display: true, text: "°C" }, min: Math.floor(ambientC - 2) },
+            // Long link names are cut at the end (the tooltip has the whole name).
+            y: { ticks: { callback: (_v, i) => short(steps[i]?.place ?? "") } },
+          },
         }}
       />
     </div>

@@ -1,0 +1,93 @@
+import { describe, expect, it } from "vitest";
+import { designDiff, figureRows, ladders, warmupSeries } from "@/lib/compare";
+import { heatPathAnchors, anchorProblem } from "@/lib/reviews/anchors";
+import { buildDesignSchema, type BuildEvaluation } from "@/lib/retrofit";
+
+const names = (id: string) => ({ tape: "Copper tape strap", pad: "Gap pad", drv: "Buck driver" })[id];
+const design = (cooling: object) => buildDesignSchema.parse({ lightEngine: { count: 2 }, driver: { part: { partId: "drv" }, cooling }, environment: { ambientC: 20 } });
+
+describe("designDiff", () => {
+  it("lists the slots that differ first, with part names, and the rest after", () => {
+    const rows = designDiff([design({ kind: "strapped", spreader: { partId: "tape" } }), design({ kind: "ground-plane-to-wall", interface: { partId: "pad" } }), design({ kind: "floating" })], names);
+    expect(rows[0]).toEqual({
+      slot: "driver.cooling",
+      label: "Driver cooling",
+      values: ["strapped to the housing with Copper tape strap", "ground plane pressed to the housing through Gap pad", "floating free in the housing's air"],
+      differs: true,
+    });
+    expect(rows.filter((r) => r.differs)).toHaveLength(1);
+    expect(rows.find((r) => r.slot === "driver.part")?.values).toEqual(["Buck driver", "Buck driver", "Buck driver"]);
+    expect(rows.find((r) => r.slot === "environment.ambientC")?.values[0]).toBe("20.0 °C");
+    expect(designDiff([design({ kind: "strapped", spreader: { partId: "secret" } })], names)[0]?.values[0]).toContain("not visible");
+  });
+});
+
+// A hand-made evaluation with only what the comparison reads; the figures are invented.
+function evaluation(o: { driverC: number; headroomK: number; limitAtS: number | null; runtimeH: number | null; cost: number; verdict: "within budget" | "tight" | "over budget" }): BuildEvaluation {
+  const scenario = {
+    id: "mode:high",
+    kind: "mode",
+    name: "high",
+    thermal: {
+      nodes: [{ id: "junction", place: "LED junction", slot: "" }, { id: "driver", place: "driver board", slot: "" }],
+      links: [{ index: 0, from: "driver", to: "wall", place: "strap", slot: "" }, { index: 1, from: "driver", to: "wall", place: "radiation", slot: "" }],
+      byPlace: { "driver board": o.driverC },
+      limits: [{ id: "driver-board", place: "driver board", node: "driver", kind: "max", limitC: 100, headroomK: o.headroomK }],
+      verdict: o.verdict,
+      ladder: { riseK: 40, remainderK: 0, steps: [{ place: "strap", deltaK: 40 }] },
+    },
+    warmup: { timesS: [0, 60, 120], temperaturesC: { driver: [20, 50, o.driverC] }, crossings: [{ limitId: "driver-board", timeS: o.limitAtS }] },
+    mode: { totalFluxLm: 1000, runtime: o.runtimeH === null ? null : { value: o.runtimeH }, driveW: 8 },
+    whatItTakes: null,
+  };
+  const e = { verdict: o.verdict, scenarios: [scenario], costs: { totalEur: o.cost, savingEur: 50 - o.cost }, electrical: { pack: null, charge: null } };
+  return e as unknown as BuildEvaluation;
+}
+
+describe("figureRows", () => {
+  const rows = figureRows([
+    evaluation({ driverC: 80, headroomK: 20, limitAtS: null, runtimeH: 2, cost: 30, verdict: "within budget" }),
+    evaluation({ driverC: 70, headroomK: 30, limitAtS: null, runtimeH: 2, cost: 31, verdict: "within budget" }),
+    evaluation({ driverC: 110, headroomK: -10, limitAtS: 1800, runtimeH: null, cost: 29, verdict: "over budget" }),
+  ]);
+  const row = (key: string) => rows.find((r) => r.key === key)!;
+
+  it("gives deltas against the first column and judges them by direction", () => {
+    expect(row("mode:high/temperature:driver board")).toMatchObject({ values: [80, 70, 110], deltas: [null, -10, 30], judgements: [null, "better", "worse"] });
+    expect(row("mode:high/headroom:driver-board")).toMatchObject({ deltas: [null, 10, -30], judgements: [null, "better", "worse"] });
+    expect(row("build/cost")).toMatchObject({ deltas: [null, 1, -1], judgements: [null, "worse", "better"] });
+    expect(row("build/verdict").judgements).toEqual([null, "same", "worse"]);
+    expect(row("mode:high/verdict").values).toEqual(["within budget", "within budget", "over budget"]);
+  });
+
+  it("counts a limit never reached as better than any time, in minutes", () => {
+    expect(row("mode:high/time:driver-board")).toMatchObject({ unit: "min", values: [null, null, 30], judgements: [null, "same", "worse"] });
+  });
+
+  it("leaves a figure a column cannot give as null, never NaN", () => {
+    expect(row("mode:high/runtime")).toMatchObject({ values: [2, 2, null], deltas: [null, 0, null], judgements: [null, "same", null] });
+    expect(row("build/capacity").values).toEqual([null, null, null]);
+    for (const r of rows) for (const d of r.deltas) if (d !== null) expect(Number.isFinite(d)).toBe(true);
+  });
+
+  it("lines warm-up curves and ladders up by column", () => {
+    const evals = [evaluation({ driverC: 80, headroomK: 20, limitAtS: null, runtimeH: 2, cost: 30, verdict: "tight" }), evaluation({ driverC: 90, headroomK: 10, limitAtS: null, runtimeH: 2, cost: 30, verdict: "tight" })];
+    const w = warmupSeries(evals);
+    expect(w).toHaveLength(1);
+    expect(w[0]).toMatchObject({ node: "driver", limitC: 100 });
+    expect(w[0]!.columns[1]).toEqual({ timesMin: [0, 1, 2], temperaturesC: [20, 50, 90] });
+    expect(ladders(evals, "mode:high")[0]?.steps).toEqual([{ place: "strap", deltaK: 40 }]);
+    expect(ladders(evals, "charging")).toEqual([null, null]);
+  });
+});
+
+describe("review anchors", () => {
+  it("offers the heat path's nodes, links by from->to (parallel links merged) and the figures", () => {
+    const a = heatPathAnchors(evaluation({ driverC: 80, headroomK: 20, limitAtS: null, runtimeH: 2, cost: 30, verdict: "tight" }));
+    expect(a.nodes.map((n) => n.key)).toEqual(["junction", "driver"]);
+    expect(a.links).toEqual([{ key: "driver->wall", label: "strap + radiation" }]);
+    expect(a.figures.map((f) => f.key)).toEqual(expect.arrayContaining(["build/verdict", "mode:high/headroom", "mode:high/warmup"]));
+    expect(anchorProblem(a, { kind: "link", key: "driver->wall" })).toBeNull();
+    expect(anchorProblem(a, { kind: "node", key: "sink" })).toBe('"sink" is not a node of this revision\'s heat path; choose one of: junction, driver.');
+  });
+});

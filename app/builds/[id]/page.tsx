@@ -4,6 +4,7 @@ import { listRevisions } from "@/db/queries/builds";
 import { BuildActions } from "@/components/builds/build-actions";
 import type { JsonObject } from "@/components/builds/design-state";
 import { HeatPathEditor } from "@/components/builds/heat-path-editor";
+import { HeatPathPreview } from "@/components/budget/heat-path-preview";
 import { ApiError } from "@/lib/http/api-error";
 import { requirePageUser } from "@/server/auth/session";
 import { loadBuild, loadRevision } from "@/server/builds/load";
@@ -33,6 +34,10 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
           <Link href={`/builds/${build.id}/report`} className="hover:text-ember">Report</Link>
         </nav>
         <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
+        <section className="rounded-lg border border-line bg-white/60 p-4">
+          <h2 className="mb-2 font-semibold">What the build means thermally</h2>
+          <HeatPathPreview buildId={build.id} revision={revision.number} ambientC={(revision.design as { environment?: { ambientC?: number } }).environment?.ambientC ?? 25} />
+        </section>
       </div>
       <aside className="space-y-4">
         <BuildActions buildId={build.id} isOwner={build.access.isOwner} />

@@ -1,9 +1,11 @@
 import "server-only";
+import { notFound } from "next/navigation";
 import { getBuild, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
 import { getParts, type PartRecord } from "@/db/queries/parts";
 import type { BuildAccess, BuildViewer } from "@/lib/builds/access";
 import { collectPartIds } from "@/lib/builds/part-ids";
 import { ApiError } from "@/lib/http/api-error";
+import { requirePageUser } from "@/server/auth/session";
 
 export type LoadedBuild = BuildSummary & { access: BuildAccess };
 
@@ -42,4 +44,20 @@ export async function assertDesignParts({ design, viewer }: { design: unknown; v
     throw new ApiError("bad_request:design", `These parts do not exist or are not visible to you: ${missing.join(", ")}.`, "design");
   }
   return ids;
+}
+
+/**
+ * For the build's pages: the signed-in viewer's build and its current revision, or the
+ * not-found page (the same for a missing build and one that is not shared with them).
+ */
+export async function loadBuildPage(params: Promise<{ id: string }>): Promise<{ user: Awaited<ReturnType<typeof requirePageUser>>; build: LoadedBuild; revision: RevisionRow }> {
+  const user = await requirePageUser();
+  const { id } = await params;
+  try {
+    const build = await loadBuild({ id, viewer: user });
+    return { user, build, revision: await loadRevision({ build }) };
+  } catch (e) {
+    if (e instanceof ApiError) notFound();
+    throw e;
+  }
 }

@@ -1,4 +1,5 @@
 import { beforeAll, describe, expect, it } from "vitest";
+import { GOOD_PARTS } from "../unit/parts/fixtures";
 import { Client, signedIn, uniqueEmail } from "../support/http";
 
 // Builds by role: owner, another maker, a reviewer, an admin, anonymous.
@@ -9,25 +10,8 @@ let admin: Client;
 let emitterId = "";
 let privatePartId = "";
 
-const EMITTER = {
-  kind: "emitter",
-  name: "Test emitter for builds",
-  provenance: "estimate",
-  visibility: "shared",
-  specs: {
-    rthJspKPerW: "2.5 K/W",
-    maxTjC: "150 °C",
-    vfV: "2.9 V",
-    vfRefCurrentA: "700 mA",
-    vfTempCoeffVPerK: "-2 mV/K",
-    efficacyLmPerW: "150 lm/W",
-    heatFraction: "70 %",
-    beamAngleDeg: "120°",
-    boardLengthM: "16 mm",
-    boardWidthM: "16 mm",
-  },
-  curves: {},
-};
+// The fixture emitter (generic, invented), shared so other makers can pick it.
+const EMITTER = { ...GOOD_PARTS.emitter, name: "Test emitter for builds", visibility: "shared" as const, curves: {} };
 
 function design(partId?: string, ambient: number | string = 25) {
   return { lightEngine: partId ? { emitter: { partId }, count: 1 } : { count: 1 }, environment: { ambientC: ambient } };

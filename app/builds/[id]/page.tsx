@@ -1,24 +1,15 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { listRevisions } from "@/db/queries/builds";
 import { BuildActions } from "@/components/builds/build-actions";
 import type { JsonObject } from "@/components/builds/design-state";
 import { HeatPathEditor } from "@/components/builds/heat-path-editor";
 import { HeatPathPreview } from "@/components/budget/heat-path-preview";
-import { ApiError } from "@/lib/http/api-error";
-import { requirePageUser } from "@/server/auth/session";
-import { loadBuild, loadRevision } from "@/server/builds/load";
+import { loadBuildPage } from "@/server/builds/load";
 
 export const metadata = { title: "Heat path" };
 
 export default async function HeatPathPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser();
-  const { id } = await params;
-  const build = await loadBuild({ id, viewer: user }).catch((e: unknown) => {
-    if (e instanceof ApiError) notFound();
-    throw e;
-  });
-  const revision = await loadRevision({ build });
+  const { build, revision } = await loadBuildPage(params);
   const history = await listRevisions({ buildId: build.id });
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_16rem]">

@@ -1,20 +1,11 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { BudgetScreen } from "@/components/budget/budget-screen";
-import { ApiError } from "@/lib/http/api-error";
-import { requirePageUser } from "@/server/auth/session";
-import { loadBuild, loadRevision } from "@/server/builds/load";
+import { loadBuildPage } from "@/server/builds/load";
 
 export const metadata = { title: "Budget" };
 
 export default async function BudgetPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser();
-  const { id } = await params;
-  const build = await loadBuild({ id, viewer: user }).catch((e: unknown) => {
-    if (e instanceof ApiError) notFound();
-    throw e;
-  });
-  const revision = await loadRevision({ build });
+  const { build, revision } = await loadBuildPage(params);
   const env = (revision.design as { environment?: { ambientC?: number } }).environment;
   return (
     <div className="space-y-4">

@@ -1,22 +1,13 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { PrintSummary } from "@/components/budget/print-summary";
 import { PrintButton } from "@/components/ui/print-button";
-import { ApiError } from "@/lib/http/api-error";
-import { requirePageUser } from "@/server/auth/session";
-import { loadBuild, loadRevision } from "@/server/builds/load";
+import { loadBuildPage } from "@/server/builds/load";
 import { solveRevision } from "@/server/builds/solve";
 
 export const metadata = { title: "Report" };
 
 export default async function ReportPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser();
-  const { id } = await params;
-  const build = await loadBuild({ id, viewer: user }).catch((e: unknown) => {
-    if (e instanceof ApiError) notFound();
-    throw e;
-  });
-  const revision = await loadRevision({ build });
+  const { user, build, revision } = await loadBuildPage(params);
   const { evaluation } = await solveRevision({ build, revision, viewer: user });
   return (
     <div className="space-y-4">

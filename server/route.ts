@@ -12,11 +12,13 @@ type Handler<C> = (request: Request, context: C) => Promise<Response>;
 /**
  * Wraps a route handler: refuses cross-origin state changes, turns ApiError into our
  * JSON error body, reports an unreachable database as 503 and never leaks internals.
+ * `stateless: true` is for POSTs that compute and change nothing (the quick check): they
+ * read no session and write nothing, so any origin (curl, another site) may call them.
  */
-export function route<C = unknown>(handler: Handler<C>): Handler<C> {
+export function route<C = unknown>(handler: Handler<C>, options: { stateless?: boolean } = {}): Handler<C> {
   return async (request, context) => {
     try {
-      if (!["GET", "HEAD", "OPTIONS"].includes(request.method)) assertSameOrigin(request);
+      if (!options.stateless && !["GET", "HEAD", "OPTIONS"].includes(request.method)) assertSameOrigin(request);
       return await handler(request, context);
     } catch (error) {
       return errorResponse(error);

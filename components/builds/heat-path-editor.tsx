@@ -5,8 +5,11 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { type ReactNode, useState } from "react";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
+import { materialOptions } from "@/lib/parts";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
+
+const MATERIAL_CHOICES = materialOptions().map((m) => [m.value, m.label] as const);
 
 type Props = { buildId: string; title: string; revision: number; design: JsonObject; canEdit: boolean };
 
@@ -78,10 +81,20 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         <ChoiceSelect
           choices={[["in-housing-air", "Heatsink in the housing's air"], ["pressed-to-wall", "Heatsink pressed to the housing wall"], ["through-reflector", "Heat through the reflector to the rim"]]}
           {...f("lightEngine.mount.kind", "Mounting")}
-          onChange={(_p, v) => change("lightEngine.mount", { kind: v ?? "in-housing-air" })}
+          onChange={(_p, v) => change("lightEngine.mount", v === "through-reflector" ? { kind: v, reflector: { material: MATERIAL_CHOICES[0]?.[0] ?? "" } } : { kind: v ?? "in-housing-air" })}
         />
         {mountKind === "pressed-to-wall" && <PartSelect kind="interface" {...f("lightEngine.mount.interface", "Heatsink → wall interface")} />}
         {mountKind === "pressed-to-wall" && <UnitInput unitHint="e.g. 9 cm^2" {...f("lightEngine.mount.contactAreaM2", "Contact area with the wall")} />}
+        {mountKind === "through-reflector" && (
+          <>
+            <ChoiceSelect choices={MATERIAL_CHOICES} {...f("lightEngine.mount.reflector.material", "Reflector material")} />
+            <UnitInput unitHint="e.g. 0.5 mm" {...f("lightEngine.mount.reflector.thicknessM", "Reflector wall thickness")} />
+            <UnitInput unitHint="sink to rim, e.g. 30 mm" {...f("lightEngine.mount.reflector.lengthM", "Reflector path length")} />
+            <UnitInput unitHint="e.g. 12 cm" {...f("lightEngine.mount.reflector.meanCircumferenceM", "Mean circumference")} />
+            <UnitInput unitHint="e.g. 4 cm^2" {...f("lightEngine.mount.reflector.rimContactAreaM2", "Rim contact with the housing")} />
+            <PartSelect kind="interface" {...f("lightEngine.mount.interface", "Rim → housing interface")} />
+          </>
+        )}
       </Section>
       <Section title="Driver" note="Small drivers dump heat through their ground plane; floating free in a closed housing they run hot.">
         <PartSelect kind="driver" {...f("driver.part", "Driver")} />

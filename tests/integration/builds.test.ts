@@ -63,6 +63,25 @@ describe("builds: create, read, revise", () => {
     expect(((await owner.get(`/api/v1/builds/${id}/revisions`)).body.revisions as unknown[]).length).toBe(2);
   });
 
+  it("accepts every mounting and driver-cooling kind the Heat path editor offers, with units", async () => {
+    const id = await newBuild(owner);
+    const mounts = [
+      { kind: "in-housing-air" },
+      { kind: "pressed-to-wall", contactAreaM2: "9 cm^2" },
+      { kind: "through-reflector", reflector: { material: "aluminium-6063-t5", thicknessM: "0.5 mm", lengthM: "30 mm", meanCircumferenceM: "12 cm", rimContactAreaM2: "4 cm^2" } },
+    ];
+    const coolings = [{ kind: "floating" }, { kind: "ground-plane-to-wall" }];
+    for (const mount of mounts) {
+      for (const cooling of coolings) {
+        const r = await owner.patch(`/api/v1/builds/${id}`, { design: { lightEngine: { emitter: { partId: emitterId }, mount }, driver: { cooling } } });
+        expect(r.status, JSON.stringify(r.body)).toBe(200);
+      }
+    }
+    const rev = await owner.get(`/api/v1/builds/${id}`);
+    const mount = (rev.body.revision as { design: { lightEngine: { mount: { reflector?: { lengthM: number } } } } }).design.lightEngine.mount;
+    expect(mount.reflector?.lengthM).toBeCloseTo(0.03, 9);
+  });
+
   it("refuses bad designs naming the field, and writes nothing", async () => {
     const before = ((await owner.get("/api/v1/builds")).body.mine as unknown[]).length;
     const zero = await owner.post("/api/v1/builds", { title: "Bad", design: { lightEngine: { count: 0 } } });

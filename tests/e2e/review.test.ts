@@ -92,7 +92,7 @@ describe("Side by side and the Review desk in chromium", () => {
     await anon.goto(url.replace(/^https?:\/\/[^/]+/, BASE_URL));
     await anon.getByTestId("shared-budget").waitFor();
     await anon.getByTestId("overall-verdict").waitFor({ timeout: 30_000 });
-    await anon.getByTestId("warmup-chart").locator("canvas").waitFor();
+    await anon.getByTestId("ladder-chart").locator("canvas").waitFor();
     await shot(anon, "share-link-view");
     await panel.getByRole("button", { name: "Revoke" }).first().click();
     await panel.getByText("revoked").first().waitFor();

@@ -1,20 +1,12 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { BuildReviews } from "@/components/reviews/build-reviews";
-import { ApiError } from "@/lib/http/api-error";
-import { requirePageUser } from "@/server/auth/session";
-import { loadBuild } from "@/server/builds/load";
+import { loadBuildPage } from "@/server/builds/load";
 
 export const metadata = { title: "Reviews and sharing" };
 
 /** A build's reviews, verdicts and share links (the same panel the Heat path page can show). */
 export default async function BuildReviewsPage({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser();
-  const { id } = await params;
-  const build = await loadBuild({ id, viewer: user }).catch((e: unknown) => {
-    if (e instanceof ApiError) notFound();
-    throw e;
-  });
+  const { user, build } = await loadBuildPage(params);
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-baseline gap-3">

@@ -208,8 +208,9 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
 
 /** The cached result as stored JSON text, so a cache hit is sent without parsing it. */
 export async function getCachedResultText({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<string | undefined> {
+  // Selected as plain SQL so the JSON column's text is not parsed on the way out.
   const rows = await db()
-    .select({ result: revisionResults.result })
+    .select({ result: sql<string>`${revisionResults.result}` })
     .from(revisionResults)
     .where(and(eq(revisionResults.revisionId, revisionId), eq(revisionResults.solverVersion, solverVersion)))
     .limit(1);
@@ -218,9 +219,9 @@ export async function getCachedResultText({ revisionId, solverVersion }: { revis
   return typeof value === "string" ? value : JSON.stringify(value);
 }
 
-export async function putCachedResult({ revisionId, solverVersion, result }: { revisionId: string; solverVersion: string; result: unknown }): Promise<void> {
+export async function putCachedResult({ revisionId, solverVersion, resultJson }: { revisionId: string; solverVersion: string; resultJson: string }): Promise<void> {
   await db()
     .insert(revisionResults)
-    .values({ revisionId, solverVersion, result, createdAt: new Date() })
+    .values({ revisionId, solverVersion, result: sql`${resultJson}`, createdAt: new Date() })
     .onDuplicateKeyUpdate({ set: { result: sql`VALUES(${revisionResults.result})`, createdAt: new Date() } });
 }

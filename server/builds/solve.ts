@@ -12,7 +12,7 @@ import { loadDesignParts, type LoadedBuild } from "./load";
  * Bump when the engine or the compiler changes what a result contains or how it is worked
  * out: cached results of another version are recomputed.
  */
-export const SOLVER_VERSION = `e${EVALUATION_VERSION}.1`;
+export const SOLVER_VERSION = `e${EVALUATION_VERSION}.2`;
 
 export type RevisionSolve = {
   buildId: string;
@@ -35,6 +35,14 @@ function cacheKey(records: Map<string, PartRecord>): string {
 }
 
 /**
+ * Seven significant digits are far below what a thermal estimate can claim (0.001 K at
+ * 100 °C) and halve the size of a result, most of which is warm-up curves.
+ */
+function roundForDisplay(_key: string, value: unknown): unknown {
+  return typeof value === "number" && !Number.isInteger(value) ? Number(value.toPrecision(7)) : value;
+}
+
+/**
  * Evaluates a revision for a viewer, from the cache when it holds this key. The answer is
  * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
  */
@@ -45,8 +53,9 @@ async function solveToText({ build, revision, viewer }: { build: LoadedBuild; re
   const hit = await getCachedResultText({ revisionId: revision.id, solverVersion: key });
   if (hit !== undefined) return { head: { ...base, cached: true }, evaluationJson: hit };
   const evaluation = evaluateRevision({ design: revision.design, records });
-  await putCachedResult({ revisionId: revision.id, solverVersion: key, result: evaluation });
-  return { head: { ...base, cached: false }, evaluationJson: JSON.stringify(evaluation), evaluation };
+  const evaluationJson = JSON.stringify(evaluation, roundForDisplay);
+  await putCachedResult({ revisionId: revision.id, solverVersion: key, resultJson: evaluationJson });
+  return { head: { ...base, cached: false }, evaluationJson, evaluation: JSON.parse(evaluationJson) as BuildEvaluation };
 }
 
 export async function solveRevision(args: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<RevisionSolve> {

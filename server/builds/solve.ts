@@ -55,7 +55,7 @@ async function solveToText({ build, revision, viewer }: { build: LoadedBuild; re
   const evaluation = evaluateRevision({ design: revision.design, records });
   const evaluationJson = JSON.stringify(evaluation, roundForDisplay);
   await putCachedResult({ revisionId: revision.id, solverVersion: key, resultJson: evaluationJson });
-  return { head: { ...base, cached: false }, evaluationJson, evaluation: JSON.parse(evaluationJson) as BuildEvaluation };
+  return { head: { ...base, cached: false }, evaluationJson, evaluation };
 }
 
 export async function solveRevision(args: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<RevisionSolve> {

@@ -7,16 +7,18 @@ async function main(): Promise<void> {
   const { seedAccounts, DEMO_ACCOUNTS } = await import("@/db/seed/accounts");
   const { seedCatalogue } = await import("@/db/seed/catalogue");
   const { seedBuilds } = await import("@/db/seed/builds");
+  const { seedReviews } = await import("@/db/seed/reviews");
   const { pool } = await import("@/db/client");
   const password = process.env.DEMO_PASSWORD;
   if (!password || password.length < 10) throw new Error("DEMO_PASSWORD (at least 10 characters) is not set; run scripts/env.sh");
   const accounts = await seedAccounts(password);
   const catalogue = await seedCatalogue({ adminId: accounts.admin });
   const builds = await seedBuilds({ makerId: accounts.maker, ids: catalogue });
+  await seedReviews({ ids: accounts, builds });
   await pool().end();
   console.log(`[seed] ${DEMO_ACCOUNTS.length} demo accounts ready`);
   console.log(`[seed] ${Object.keys(catalogue).length} catalogue parts ready (public, verified)`);
-  console.log(`[seed] ${Object.keys(builds).length} demo builds ready (with their heat-path variants)`);
+  console.log(`[seed] ${Object.keys(builds).length} demo builds ready (with their heat-path variants), a finished review and a queued one`);
 }
 
 main().catch((error: unknown) => {

@@ -25,8 +25,7 @@ export type RevisionSolve = {
 /**
  * The cache key of a revision's result: the solver version and a fingerprint of the parts
  * as read now (id + last change). A revision is immutable, but a part it names by id can be
- * edited, and a viewer may not see every part; either gives another key, so a stale or
- * someone else's answer is never served.
+ * edited or made private; either gives another key, so a stale answer is never served.
  */
 function cacheKey(records: Map<string, PartRecord>): string {
   const h = createHash("sha256");
@@ -46,8 +45,11 @@ function roundForDisplay(_key: string, value: unknown): unknown {
  * Evaluates a revision for a viewer, from the cache when it holds this key. The answer is
  * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
  */
-async function solveToText({ build, revision, viewer }: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation }> {
-  const records = await loadDesignParts({ design: revision.design, viewer });
+async function solveToText({ build, revision }: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation }> {
+  // Parts are read as the build's owner sees them: whoever may see the build (a reviewer,
+  // a class member, a share link) gets the same Budget as its owner, though the owner's
+  // private part records themselves stay private (only their effect on the figures shows).
+  const records = await loadDesignParts({ design: revision.design, viewer: { id: build.ownerId, role: "maker" } });
   const key = cacheKey(records);
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
   const hit = await getCachedResultText({ revisionId: revision.id, solverVersion: key });

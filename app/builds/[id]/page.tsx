@@ -1,6 +1,7 @@
-import Link from "next/link";
+import { BuildNav } from "@/components/builds/build-nav";
 import { listRevisions } from "@/db/queries/builds";
 import { BuildActions } from "@/components/builds/build-actions";
+import { BuildReviews } from "@/components/reviews/build-reviews";
 import type { JsonObject } from "@/components/builds/design-state";
 import { HeatPathEditor } from "@/components/builds/heat-path-editor";
 import { HeatPathPreview } from "@/components/budget/heat-path-preview";
@@ -9,7 +10,7 @@ import { loadBuildPage } from "@/server/builds/load";
 export const metadata = { title: "Heat path" };
 
 export default async function HeatPathPage({ params }: { params: Promise<{ id: string }> }) {
-  const { build, revision } = await loadBuildPage(params);
+  const { user, build, revision } = await loadBuildPage(params);
   const history = await listRevisions({ buildId: build.id });
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_16rem]">
@@ -19,11 +20,7 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
           <span className="text-sm text-ink-soft">Heat path · revision {revision.number} · {build.ownerName}</span>
         </div>
         {build.variantNote && <p className="text-sm">Variant: <span className="rounded bg-ember-soft px-1.5 text-ember">{build.variantNote}</span></p>}
-        <nav className="no-print flex gap-4 text-sm" aria-label="Build">
-          <span className="font-medium text-ember">Heat path</span>
-          <Link href={`/builds/${build.id}/budget`} className="hover:text-ember">Budget</Link>
-          <Link href={`/builds/${build.id}/report`} className="hover:text-ember">Report</Link>
-        </nav>
+        <BuildNav buildId={build.id} current="heat-path" />
         <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
         <section className="rounded-lg border border-line bg-white/60 p-4">
           <h2 className="mb-2 font-semibold">What the build means thermally</h2>
@@ -32,6 +29,7 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
       </div>
       <aside className="space-y-4">
         <BuildActions buildId={build.id} isOwner={build.access.isOwner} />
+        <BuildReviews buildId={build.id} viewer={user} />
         <section className="rounded-lg border border-line bg-white/60 p-3 text-sm">
           <h2 className="mb-2 font-medium">History</h2>
           <ol className="space-y-1.5">

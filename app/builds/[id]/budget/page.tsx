@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { BuildNav } from "@/components/builds/build-nav";
 import { BudgetScreen } from "@/components/budget/budget-screen";
 import { loadBuildPage } from "@/server/builds/load";
 
@@ -13,11 +13,7 @@ export default async function BudgetPage({ params }: { params: Promise<{ id: str
         <h1 className="text-2xl font-semibold">{build.title}</h1>
         <span className="text-sm text-ink-soft">Budget · revision {revision.number}</span>
       </div>
-      <nav className="no-print flex gap-4 text-sm" aria-label="Build">
-        <Link href={`/builds/${build.id}`} className="hover:text-ember">Heat path</Link>
-        <span className="font-medium text-ember">Budget</span>
-        <Link href={`/builds/${build.id}/report`} className="hover:text-ember">Report</Link>
-      </nav>
+      <BuildNav buildId={build.id} current="budget" />
       <BudgetScreen buildId={build.id} ambientC={env?.ambientC ?? 25} />
     </div>
   );

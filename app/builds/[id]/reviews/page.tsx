@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { BuildNav } from "@/components/builds/build-nav";
 import { BuildReviews } from "@/components/reviews/build-reviews";
 import { loadBuildPage } from "@/server/builds/load";
 
@@ -13,12 +13,7 @@ export default async function BuildReviewsPage({ params }: { params: Promise<{ i
         <h1 className="text-2xl font-semibold">{build.title}</h1>
         <span className="text-sm text-ink-soft">Reviews and sharing · revision {build.currentRevision}</span>
       </div>
-      <nav className="no-print flex gap-4 text-sm" aria-label="Build">
-        <Link href={`/builds/${build.id}`} className="hover:text-ember">Heat path</Link>
-        <Link href={`/builds/${build.id}/budget`} className="hover:text-ember">Budget</Link>
-        <Link href={`/builds/${build.id}/report`} className="hover:text-ember">Report</Link>
-        <span className="font-medium text-ember">Reviews</span>
-      </nav>
+      <BuildNav buildId={build.id} current="reviews" />
       <div className="max-w-xl">
         <BuildReviews buildId={build.id} viewer={user} />
       </div>

@@ -225,3 +225,34 @@ export async function putCachedResult({ revisionId, solverVersion, resultJson }:
     .values({ revisionId, solverVersion, result: sql`${resultJson}`, createdAt: new Date() })
     .onDuplicateKeyUpdate({ set: { result: sql`VALUES(${revisionResults.result})`, createdAt: new Date() } });
 }
+
+export interface BuildMemberRow {
+  userId: string;
+  email: string;
+  displayName: string;
+  role: string;
+  canEdit: boolean;
+}
+
+/** The people a build is shared with, by name. */
+export async function listBuildMembers({ buildId }: { buildId: string }): Promise<BuildMemberRow[]> {
+  const rows = await db()
+    .select({ userId: buildMembers.userId, email: users.email, displayName: users.displayName, role: users.role, canEdit: buildMembers.canEdit })
+    .from(buildMembers)
+    .innerJoin(users, eq(users.id, buildMembers.userId))
+    .where(eq(buildMembers.buildId, buildId))
+    .orderBy(users.displayName)
+    .limit(500);
+  return rows.map((r) => ({ ...r, canEdit: Boolean(r.canEdit) }));
+}
+
+/** Adds a member, or changes an existing member's edit right (sharing twice is not an error). */
+export async function putBuildMember({ buildId, userId, canEdit }: { buildId: string; userId: string; canEdit: boolean }): Promise<void> {
+  await db().insert(buildMembers).values({ buildId, userId, canEdit }).onDuplicateKeyUpdate({ set: { canEdit } });
+}
+
+/** Removes a member; false when they were not one. */
+export async function removeBuildMember({ buildId, userId }: { buildId: string; userId: string }): Promise<boolean> {
+  const [result] = await db().delete(buildMembers).where(and(eq(buildMembers.buildId, buildId), eq(buildMembers.userId, userId)));
+  return result.affectedRows > 0;
+}

@@ -4,6 +4,7 @@ import { BuildActions } from "@/components/builds/build-actions";
 import { BuildReviews } from "@/components/reviews/build-reviews";
 import type { JsonObject } from "@/components/builds/design-state";
 import { HeatPathEditor } from "@/components/builds/heat-path-editor";
+import { MembersPanel } from "@/components/builds/members-panel";
 import { HeatPathPreview } from "@/components/budget/heat-path-preview";
 import { loadBuildPage } from "@/server/builds/load";
 
@@ -29,6 +30,7 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
       </div>
       <aside className="space-y-4">
         <BuildActions buildId={build.id} isOwner={build.access.isOwner} />
+        {build.access.isOwner && <MembersPanel buildId={build.id} />}
         <BuildReviews buildId={build.id} viewer={user} />
         <section className="rounded-lg border border-line bg-white/60 p-3 text-sm">
           <h2 className="mb-2 font-medium">History</h2>

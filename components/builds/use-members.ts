@@ -1,0 +1,29 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { fetchJson } from "@/components/ui/fetch-json";
+
+/** A person a build is shared with; `email` is sent to the owner only. */
+export type BuildMember = { userId: string; email?: string; displayName: string; role: string; canEdit: boolean };
+
+const key = (buildId: string) => ["build", buildId, "members"] as const;
+
+export function useMembers(buildId: string) {
+  return useQuery({ queryKey: key(buildId), queryFn: () => fetchJson<{ members: BuildMember[] }>(`/api/v1/builds/${buildId}/members`) });
+}
+
+export function useAddMember(buildId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { email: string; canEdit: boolean }) => fetchJson<{ member: BuildMember }>(`/api/v1/builds/${buildId}/members`, { method: "POST", body }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: key(buildId) }),
+  });
+}
+
+export function useRemoveMember(buildId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (userId: string) => fetchJson<{ ok: true }>(`/api/v1/builds/${buildId}/members/${encodeURIComponent(userId)}`, { method: "DELETE" }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: key(buildId) }),
+  });
+}

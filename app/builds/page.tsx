@@ -22,9 +22,11 @@ function BuildList({ builds, empty }: { builds: BuildSummary[]; empty: string })
   return (
     <ul className="divide-y divide-line rounded-lg border border-line bg-white/60">
       {grouped(builds).map((b) => (
-        <li key={b.id} className={`flex flex-wrap items-baseline gap-x-4 gap-y-1 py-3 pr-4 ${b.nested ? "pl-10" : "pl-4"}`}>
-          <Link href={`/builds/${b.id}`} className="font-medium hover:text-ember">{b.title}</Link>
-          {b.nested && <span aria-hidden className="-ml-5 text-ink-soft">↳</span>}
+        <li key={b.id} className={`flex flex-wrap items-baseline gap-x-4 gap-y-1 py-3 pr-4 ${b.nested ? "pl-8" : "pl-4"}`}>
+          <Link href={`/builds/${b.id}`} className="font-medium hover:text-ember">
+            {b.nested && <span aria-hidden className="mr-1.5 text-ink-soft">↳</span>}
+            {b.title}
+          </Link>
           {b.variantNote && <span className="rounded bg-ember-soft px-1.5 text-xs text-ember">variant: {b.variantNote}</span>}
           <span className="text-xs text-ink-soft">revision {b.currentRevision} · {b.ownerName} · {b.visibility}</span>
           <span className="ml-auto flex gap-3 text-sm">

@@ -24,7 +24,7 @@ export function worstVerdict(verdicts: readonly (Verdict | null)[]): Verdict | n
 }
 
 export interface LimitDef {
-  id: "junction" | "driver-board" | "cells-max" | "cells-min" | "touch";
+  id: "junction" | "driver-board" | "charger-board" | "cells-max" | "cells-min" | "touch";
   place: string;
   /** The node whose temperature is compared (for touch: the hottest wall node). */
   node: string;
@@ -48,6 +48,25 @@ const declared = (value: number, what: string, partName: string): Traced => ({
   trace: trace({ element: "limit", formula: what, equation: "T_limit = part rating", inputs: [], result: q("T_limit", what, value, "°C"), source: `${SOURCES.datasheet}: ${partName}` }),
 });
 
+/**
+ * Small Li-ion charger chips fold back their current (thermal regulation) at a junction of
+ * roughly 110–120 °C; keeping the board at or below 100 °C leaves them that room. The part
+ * record has no rating field, so this common-practice figure stands in for one.
+ */
+const CHARGER_BOARD_LIMIT: Traced = {
+  value: 100,
+  unit: "°C",
+  trace: trace({
+    element: "limit",
+    formula: "charger board limit (assumed)",
+    equation: "T_limit = 100 °C",
+    inputs: [],
+    result: q("T_limit", "highest charger board temperature", 100, "°C"),
+    source: SOURCES.trade,
+    notes: ["charger chips throttle the charge current near 110–120 °C junction; a board above 100 °C charges slowly or stops, and heats the cells beside it"],
+  }),
+};
+
 /** The limits that apply in a scenario, from the parts' ratings and the way the light is held. */
 export function limitsFor(build: ResolvedBuild, compiled: CompiledBuild, steady: SteadyResult, charging: boolean, problems: ProblemList): LimitDef[] {
   const out: LimitDef[] = [];
@@ -66,6 +85,11 @@ export function limitsFor(build: ResolvedBuild, compiled: CompiledBuild, steady:
     if (max !== undefined) out.push({ id: "cells-max", place: "cells", node: "cells", kind: "max", limit: declared(max, `highest ${what} temperature`, c.name), field: `pack.cell.${charging ? "chargeTempMaxC" : "dischargeTempMaxC"}` });
     else problems.add(`pack.cell.${charging ? "chargeTempMaxC" : "dischargeTempMaxC"}`, `the cell has no ${what} temperature window: its headroom cannot be checked`, "warning");
     if (min !== undefined) out.push({ id: "cells-min", place: "cells", node: "cells", kind: "min", limit: declared(min, `lowest ${what} temperature`, c.name), field: `pack.cell.${charging ? "chargeTempMinC" : "dischargeTempMinC"}` });
+  }
+  const ch = build.pack.charger;
+  if (charging && compiled.has.charger && ch) {
+    out.push({ id: "charger-board", place: "charger board", node: "charger", kind: "max", limit: CHARGER_BOARD_LIMIT, field: "pack.charger" });
+    problems.add("pack.charger", `the charger part has no temperature rating: its board is held to ${CHARGER_BOARD_LIMIT.value} °C (common practice)`, "info");
   }
   const walls = compiled.network.nodes.filter((n) => n.id.startsWith("wall")).map((n) => n.id);
   const hottest = walls.reduce((a, b) => ((steady.temperaturesC[b] ?? -Infinity) > (steady.temperaturesC[a] ?? -Infinity) ? b : a), walls[0] ?? "wall");

@@ -2,6 +2,8 @@
 
 import type { ReactNode } from "react";
 import type { PartKind } from "@/lib/parts";
+import type { Problem } from "@/lib/retrofit";
+import { FieldProblems } from "./editor-problems";
 import { getPath, type Json, type JsonObject } from "./design-state";
 import { usePartOptions } from "./use-part-options";
 
@@ -11,16 +13,19 @@ export type FieldProps = {
   label: string;
   onChange: (path: string, value: Json | undefined) => void;
   error?: string;
+  /** What the evaluation of the saved revision found about this field. */
+  problems?: readonly Problem[];
   disabled?: boolean;
 };
 
-export function FieldShell({ label, error, children, hint }: { label: string; error?: string; children: ReactNode; hint?: string }) {
+export function FieldShell({ label, error, children, hint, problems }: { label: string; error?: string; children: ReactNode; hint?: string; problems?: readonly Problem[] }) {
   return (
     <label className="block text-sm">
       <span className="mb-1 block font-medium">{label}</span>
       {children}
       {hint && !error && <span className="mt-1 block text-xs text-ink-soft">{hint}</span>}
       {error && <span role="alert" className="mt-1 block text-xs text-over">{error}</span>}
+      <FieldProblems problems={problems} />
     </label>
   );
 }
@@ -35,7 +40,7 @@ export function PartSelect({ kind, ...p }: FieldProps & { kind: PartKind }) {
   const partId = typeof current?.partId === "string" ? current.partId : "";
   const inlineName = current && "inline" in current ? String(current.name ?? `inline ${kind}`) : null;
   return (
-    <FieldShell label={p.label} error={p.error}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems}>
       <select
         aria-label={p.label}
         className={inputClass}
@@ -59,7 +64,7 @@ export function PartSelect({ kind, ...p }: FieldProps & { kind: PartKind }) {
 export function UnitInput({ unitHint, ...p }: FieldProps & { unitHint: string }) {
   const value = getPath(p.design, p.path);
   return (
-    <FieldShell label={p.label} error={p.error} hint={unitHint}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems} hint={unitHint}>
       <input
         aria-label={p.label}
         className={inputClass}
@@ -74,7 +79,7 @@ export function UnitInput({ unitHint, ...p }: FieldProps & { unitHint: string })
 export function IntInput({ min, max, ...p }: FieldProps & { min: number; max: number }) {
   const value = getPath(p.design, p.path);
   return (
-    <FieldShell label={p.label} error={p.error}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems}>
       <input
         aria-label={p.label}
         type="number"
@@ -93,7 +98,7 @@ export function IntInput({ min, max, ...p }: FieldProps & { min: number; max: nu
 export function ChoiceSelect({ choices, ...p }: FieldProps & { choices: readonly (readonly [string, string])[] }) {
   const value = getPath(p.design, p.path);
   return (
-    <FieldShell label={p.label} error={p.error}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems}>
       <select aria-label={p.label} className={inputClass} disabled={p.disabled} value={typeof value === "string" ? value : choices[0]?.[0]} onChange={(e) => p.onChange(p.path, e.target.value)}>
         {choices.map(([v, l]) => (
           <option key={v} value={v}>{l}</option>

@@ -3,11 +3,13 @@
 import { useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { type ReactNode, useState } from "react";
+import { type ReactNode, useMemo, useState } from "react";
+import { useSolve } from "@/components/budget/use-solve";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
+import { placeProblems, ProblemsSummary } from "./editor-problems";
 
 const MATERIAL_CHOICES = materialOptions().map((m) => [m.value, m.label] as const);
 
@@ -32,13 +34,17 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   const [error, setError] = useState<{ path: string; message: string } | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
+  // The checks are of the saved revision: what is on screen may differ until it is saved.
+  const solved = useSolve(buildId, revision);
+  const problems = useMemo(() => solved.data?.evaluation.problems ?? [], [solved.data]);
+  const placed = useMemo(() => placeProblems(problems), [problems]);
 
   const change = (path: string, value: Json | undefined) => {
     setDesign((d) => setPath(d, path, value));
     setSaved(null);
   };
   const errorAt = (path: string) => (error && error.path === `design.${path}` ? error.message.replace(/^[^:]*: /, "") : undefined);
-  const f = (path: string, label: string) => ({ design, path, label, onChange: change, error: errorAt(path), disabled: !canEdit });
+  const f = (path: string, label: string) => ({ design, path, label, onChange: change, error: errorAt(path), problems: placed.byField.get(path), disabled: !canEdit });
   const kindOf = (path: string) => String(getPath(design, `${path}.kind`) ?? "");
 
   async function save() {
@@ -68,6 +74,13 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
           Read-only: this build belongs to someone else. Use <em>Copy to my builds</em> to change it.
         </p>
       )}
+      <ProblemsSummary
+        revision={revision}
+        status={solved.status}
+        problems={placed.unplaced}
+        total={problems.filter((p) => p.severity !== "info").length}
+        errorMessage={solved.error?.message}
+      />
       <Section title="Housing" note="The shell the heat must finally cross. Sealed housings trap their air.">
         <PartSelect kind="housing" {...f("housing", "Housing")} />
         <ChoiceSelect choices={[["box", "Box (lantern)"], ["tube", "Tube (torch, headlamp)"]]} {...f("housingShape.form", "Shape")} />

@@ -27,10 +27,10 @@ export function MembersPanel({ buildId }: { buildId: string }) {
       {members.isSuccess && list.length === 0 && <p className="text-ink-soft">Nobody yet.</p>}
       <ul className="space-y-1">
         {list.map((m) => (
-          <li key={m.userId} className="flex flex-wrap items-center gap-2" data-testid="build-member">
-            <span title={m.email}>{m.displayName}</span>
-            <span className="text-xs text-ink-soft">{m.canEdit ? "can edit" : "views"}</span>
-            <button type="button" onClick={() => remove.mutate(m.userId)} disabled={remove.isPending} className="ml-auto text-xs text-over hover:underline" aria-label={`Stop sharing with ${m.displayName}`}>
+          <li key={m.userId} className="flex items-center gap-2" data-testid="build-member">
+            <span title={m.email} className="min-w-0 flex-1 truncate">{m.displayName}</span>
+            <span className="shrink-0 text-xs text-ink-soft">{m.canEdit ? "can edit" : "views"}</span>
+            <button type="button" onClick={() => remove.mutate(m.userId)} disabled={remove.isPending} className="shrink-0 text-xs text-over hover:underline" aria-label={`Stop sharing with ${m.displayName}`}>
               Remove
             </button>
           </li>

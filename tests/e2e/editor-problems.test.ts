@@ -1,0 +1,57 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { GOOD_PARTS } from "../unit/parts/fixtures";
+import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
+import { BASE_URL, signedIn } from "../support/http";
+
+let session: Awaited<ReturnType<typeof launch>>;
+let buildId = "";
+const tag = Date.now().toString(36);
+
+beforeAll(async () => {
+  // Parts from the fixtures (generic, invented): the driver takes 2.8–4.2 V, the cell is a 3.6 V
+  // li-ion; two in series make 7.2 V nominal, outside the driver's input range.
+  const maker = await signedIn("maker@sinkwise.test");
+  const ids: Record<string, string> = {};
+  for (const [kind, part] of Object.entries(GOOD_PARTS)) {
+    const r = await maker.post("/api/v1/parts", { ...part, name: `${part.name} ${tag}`, visibility: "private" });
+    expect(r.status, JSON.stringify(r.body)).toBe(201);
+    ids[kind] = (r.body.part as { id: string }).id;
+  }
+  const slot = (kind: string) => ({ partId: ids[kind] });
+  const design = {
+    housing: slot("housing"),
+    lightEngine: { emitter: slot("emitter"), count: 1, interface: slot("interface"), heatsink: slot("heatsink") },
+    driver: { part: slot("driver"), cooling: { kind: "floating" } },
+    pack: { cell: slot("cell"), series: 2, parallel: 1 },
+    environment: { ambientC: 25 },
+  };
+  const created = await maker.post("/api/v1/builds", { title: `Two cells on a one-cell driver ${tag}`, design });
+  expect(created.status, JSON.stringify(created.body)).toBe(201);
+  buildId = (created.body.build as { id: string }).id;
+  session = await launch();
+});
+afterAll(async () => {
+  await session?.close();
+});
+
+describe("the Heat path editor shows the evaluation's problems by their fields, in chromium", () => {
+  it("names a pack voltage outside the driver's input range next to the Cell field", async () => {
+    const page = await session.browser.newPage();
+    await signInThroughForm(page, "maker@sinkwise.test");
+    await page.goto(`${BASE_URL}/builds/${buildId}`);
+    await page.getByTestId("heat-path-editor").waitFor();
+    await page.getByTestId("editor-problems").waitFor({ timeout: 30_000 });
+    // The field's <label> holds its select and the problems under it.
+    const cellField = page.locator("label").filter({ has: page.getByRole("combobox", { name: "Cell", exact: true }) });
+    const problem = cellField.getByTestId("field-problem").filter({ hasText: "outside the driver's input range" });
+    await problem.waitFor();
+    expect(await problem.textContent()).toMatch(/2S1P.*2\.8.*4\.2/);
+    expect(await problem.getAttribute("data-severity")).toBe("error");
+    expect(await problem.getAttribute("class")).toContain("text-over");
+    expect(await page.getByTestId("heat-path-editor").textContent()).not.toContain("NaN");
+    // Tall enough for the whole editor, so its sticky save bar rests below the fields, not over them.
+    await page.setViewportSize({ width: 1280, height: 1800 });
+    await page.screenshot({ path: `${ARTEFACTS}/editor-problems.png`, fullPage: true });
+    await page.locator("fieldset", { has: cellField }).screenshot({ path: `${ARTEFACTS}/editor-problems-pack.png` });
+  });
+});

@@ -10,6 +10,13 @@ import { solveSteady, type Network, type SteadyResult } from "@/lib/thermal";
  */
 const MAX_SOLVES = 24;
 
+/**
+ * Each probe only has to place a temperature within the search tolerance (0.02 K), so its
+ * steady solve stops at 1e-4 K instead of the engine's 1e-6 K: one Newton correction
+ * fewer per probe, and the probe moves by ~1e-11 K (Newton converges quadratically).
+ */
+const PROBE = { toleranceK: 1e-4 } as const;
+
 interface Root {
   x: number | null;
   /** -1: f < 0 over the whole range (never reached); +1: f > 0 over it (always exceeded). */
@@ -73,7 +80,7 @@ export function requiredLinkResistance(network: Network, at: SteadyResult, index
   const link = network.links[index]!;
   const f = (r: number) => {
     const links = network.links.map((l, i) => (i === index ? { from: link.from, to: link.to, type: "resistance" as const, kelvinPerWatt: r } : l));
-    return (solveSteady({ ...network, links }).temperaturesC[node] ?? 0) - limitC;
+    return (solveSteady({ ...network, links }, PROBE).temperaturesC[node] ?? 0) - limitC;
   };
   const r0 = at.links[index]?.kelvinPerWatt ?? 1;
   const q = Math.max(Math.abs(at.links[index]?.watts ?? 0), 1e-6);
@@ -110,7 +117,7 @@ export function maxCommonScale(network: Network, at: SteadyResult, limits: reado
   };
   let lastWho = 0;
   const f = (s: number) => {
-    const r = excess(solveSteady({ ...network, sources: network.sources.map((x) => ({ node: x.node, watts: x.watts * s })) }).temperaturesC);
+    const r = excess(solveSteady({ ...network, sources: network.sources.map((x) => ({ node: x.node, watts: x.watts * s })) }, PROBE).temperaturesC);
     lastWho = r.who;
     return r.worst;
   };

@@ -6,20 +6,58 @@ import type { ProblemList } from "./problems";
  * this finds nothing; if it does, the problem list says so instead of a chart breaking.
  */
 export function jsonSafe<T>(value: T, problems: ProblemList, path = "result"): T {
-  return walk(value, problems, path) as T;
+  return walk(value, problems, [path]) as T;
 }
 
-function walk(v: unknown, problems: ProblemList, path: string): unknown {
+/**
+ * The result is mostly warm-up samples, so the walk keeps the path as a stack of segments
+ * and joins it only when a problem is reported: building a path string for every number
+ * cost more than the rest of the walk.
+ */
+function walk(v: unknown, problems: ProblemList, path: (string | number)[]): unknown {
   if (typeof v === "number") {
     if (Number.isFinite(v)) return v;
-    problems.add(path, "a figure could not be worked out (not a finite number) and was left out", "warning");
+    problems.add(formatPath(path), "a figure could not be worked out (not a finite number) and was left out", "warning");
     return null;
   }
-  if (Array.isArray(v)) return v.map((x, i) => walk(x, problems, `${path}[${i}]`));
+  if (Array.isArray(v)) {
+    const out: unknown[] = new Array<unknown>(v.length);
+    for (let i = 0; i < v.length; i++) {
+      const x: unknown = v[i];
+      if (typeof x === "number" && Number.isFinite(x)) {
+        out[i] = x;
+        continue;
+      }
+      path.push(i);
+      out[i] = walk(x, problems, path);
+      path.pop();
+    }
+    return out;
+  }
   if (v !== null && typeof v === "object") {
     const out: Record<string, unknown> = {};
-    for (const [k, x] of Object.entries(v)) if (x !== undefined) out[k] = walk(x, problems, `${path}.${k}`);
+    const src = v as Record<string, unknown>;
+    for (const k of Object.keys(src)) {
+      const x = src[k];
+      if (x === undefined) continue;
+      if (typeof x === "number" && Number.isFinite(x)) {
+        out[k] = x;
+        continue;
+      }
+      path.push(k);
+      out[k] = walk(x, problems, path);
+      path.pop();
+    }
     return out;
   }
   return v;
+}
+
+function formatPath(path: readonly (string | number)[]): string {
+  let s = String(path[0] ?? "");
+  for (let i = 1; i < path.length; i++) {
+    const p = path[i]!;
+    s += typeof p === "number" ? `[${p}]` : `.${p}`;
+  }
+  return s;
 }

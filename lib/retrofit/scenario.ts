@@ -1,4 +1,4 @@
-import { breakdownRise, explainLinks, isThermalInputError, solveTransient, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
+import { AMBIENT_ID, breakdownRise, isThermalInputError, solveTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
 import type { CompiledBuild } from "./compile";
 import type { LinkPlace, NodePlace } from "./compile/builder";
 import { evaluateLimits, worstVerdict, type LimitDef, type LimitResult, type Verdict } from "./limits";
@@ -53,8 +53,15 @@ export interface ThermalResult {
 }
 
 export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, defs: readonly LimitDef[], o: ResolvedOptions): ThermalResult {
-  const traces = explainLinks(compiled.network, steady);
-  const links = compiled.links.map((l, i): LinkResult => ({ ...l, watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: l.trace ?? traces[i]! }));
+  // Only links the compiler left without a trace of its own need the engine's: explaining the
+  // whole network built a trace for every link and threw away those the compiler had given.
+  const net = compiled.network;
+  const at = (id: string) => (id === AMBIENT_ID ? net.ambientC : steady.temperaturesC[id]!);
+  const engineTrace = (i: number): Trace => {
+    const link = net.links[i]!;
+    return traceLink(link, at(link.from), at(link.to));
+  };
+  const links = compiled.links.map((l, i): LinkResult => ({ ...l, watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: l.trace ?? engineTrace(i) }));
   const byPlace = Object.fromEntries(compiled.nodes.map((n) => [n.place, steady.temperaturesC[n.id] ?? 0]));
   const limits = evaluateLimits(defs, steady.temperaturesC, o.marginK);
   let ladder: ThermalResult["ladder"] = null;
@@ -69,6 +76,12 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
 /** Warm-up in quarters: stops after the quarter in which every node came within 1 K of steady ("60 min or until steady"). */
 const WARMUP_CHUNKS = 4;
 const STEADY_BAND_K = 1;
+/**
+ * Newton tolerance within a warm-up step, K. The curves are shown to 0.1 K and the steady
+ * band is 1 K; the engine's default (1e-6 K) costs about one more correction per step for
+ * digits nobody reads (1e-4 K moves no sample by more than a few µK on the demo builds).
+ */
+const WARMUP_SETTINGS = { toleranceK: 1e-4 } as const;
 
 export function warmup(network: Network, steady: SteadyResult, limits: readonly LimitResult[], durationS: number, o: ResolvedOptions, field: string, problems: ProblemList): Warmup | null {
   const maxLimits = limits.filter((l) => l.kind === "max");
@@ -83,7 +96,7 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
   try {
     for (let c = 0; c < WARMUP_CHUNKS && steadyAt === null; c++) {
       const t0 = c * chunkS;
-      const r = solveTransient(network, { durationS: chunkS, stepS, thresholds, ...(initialC ? { initialC } : {}) });
+      const r = solveTransient(network, { durationS: chunkS, stepS, thresholds, ...(initialC ? { initialC } : {}) }, WARMUP_SETTINGS);
       // Each quarter after the first starts where the last ended: skip its repeated first sample.
       for (let k = c === 0 ? 0 : 1; k < r.timesS.length; k++) {
         const t = t0 + r.timesS[k]!;

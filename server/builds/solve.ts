@@ -36,9 +36,52 @@ function cacheKey(records: Map<string, PartRecord>): string {
 /**
  * Seven significant digits are far below what a thermal estimate can claim (0.001 K at
  * 100 °C) and halve the size of a result, most of which is warm-up curves.
+ *
+ * The same value as `Number(v.toPrecision(7))`, worked out without strings: m, the seven
+ * digits, is an exact integer below 10⁷ and 10^k is exact for k ≤ 22, so m / 10^k is the
+ * double nearest the decimal toPrecision writes — which is what parsing that decimal gives.
+ * The product a·10^k is off by ~1e-9 at most, so only a digit that sits on a half (or an
+ * exponent outside the table) can round differently: those take the string path.
  */
-function roundForDisplay(_key: string, value: unknown): unknown {
-  return typeof value === "number" && !Number.isInteger(value) ? Number(value.toPrecision(7)) : value;
+const POW10 = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];
+
+function roundNumber(v: number): number {
+  if (Number.isInteger(v)) return v;
+  const a = Math.abs(v);
+  const k = 6 - Math.floor(Math.log10(a));
+  if (k >= 0 && k <= 22) {
+    const scaled = a * POW10[k]!;
+    const m = Math.round(scaled);
+    if (m >= 1e6 && m < 1e7 && Math.abs(scaled - Math.floor(scaled) - 0.5) > 1e-6) return (v < 0 ? -m : m) / POW10[k]!;
+  }
+  return Number(v.toPrecision(7));
+}
+
+/**
+ * A rounded copy of a result for JSON.stringify: a replacer function takes the serialiser
+ * off its fast path for every key, which cost more than the copy does. The copy (not the
+ * result itself) is rounded because a miss also hands the unrounded evaluation back.
+ */
+function roundedForDisplay(value: unknown): unknown {
+  if (typeof value === "number") return roundNumber(value);
+  if (value === null || typeof value !== "object") return value;
+  const withJson = value as { toJSON?: unknown };
+  if (typeof withJson.toJSON === "function") return roundedForDisplay((withJson.toJSON as () => unknown).call(value));
+  if (Array.isArray(value)) {
+    const out = new Array<unknown>(value.length);
+    for (let i = 0; i < value.length; i++) {
+      const x: unknown = value[i];
+      out[i] = typeof x === "number" ? roundNumber(x) : roundedForDisplay(x);
+    }
+    return out;
+  }
+  const src = value as Record<string, unknown>;
+  const out: Record<string, unknown> = {};
+  for (const k of Object.keys(src)) {
+    const x = src[k];
+    out[k] = typeof x === "number" ? roundNumber(x) : roundedForDisplay(x);
+  }
+  return out;
 }
 
 /**
@@ -55,7 +98,7 @@ async function solveToText({ build, revision }: { build: LoadedBuild; revision: 
   const hit = await getCachedResultText({ revisionId: revision.id, solverVersion: key });
   if (hit !== undefined) return { head: { ...base, cached: true }, evaluationJson: hit };
   const evaluation = evaluateRevision({ design: revision.design, records });
-  const evaluationJson = JSON.stringify(evaluation, roundForDisplay);
+  const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
   await putCachedResult({ revisionId: revision.id, solverVersion: key, resultJson: evaluationJson });
   return { head: { ...base, cached: false }, evaluationJson, evaluation };
 }

@@ -36,24 +36,30 @@ function fromRow(row: readonly number[], tK: number, inTable: boolean): AirPrope
 /** Index into the scratch array `airInto` fills. */
 export const AIR = { k: 0, nu: 1, alpha: 2, pr: 3, beta: 4 } as const;
 
+/** Index of the table row at or below tC (inside the table), so rows lo and lo + 1 bracket it. */
+function rowBelow(tC: number): number {
+  let lo = 0;
+  let hi = AIR_TABLE.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (AIR_TABLE[mid]![0] <= tC) lo = mid;
+    else hi = mid;
+  }
+  return lo;
+}
+
 /**
  * The properties the convection correlations need, written into `out` without allocating
  * (the solvers call this for every link in every iteration). Same interpolation and
- * extrapolation as `airPropertiesAt`, which is built on it.
+ * extrapolation as `airPropertiesAt` (both find the rows with `rowBelow`).
  */
 export function airInto(temperatureK: number, out: Float64Array): boolean {
   const tC = temperatureK - ZERO_CELSIUS_K;
   out[AIR.beta] = 1 / temperatureK;
   if (tC >= FIRST[0] && tC <= LAST[0]) {
-    let lo = 0;
-    let hi = AIR_TABLE.length - 1;
-    while (hi - lo > 1) {
-      const mid = (lo + hi) >> 1;
-      if (AIR_TABLE[mid]![0] <= tC) lo = mid;
-      else hi = mid;
-    }
+    const lo = rowBelow(tC);
     const a = AIR_TABLE[lo]!;
-    const b = AIR_TABLE[hi]!;
+    const b = AIR_TABLE[lo + 1]!;
     const f = (tC - a[0]) / (b[0] - a[0]);
     out[AIR.k] = a[3] + f * (b[3] - a[3]);
     out[AIR.alpha] = a[4] + f * (b[4] - a[4]);
@@ -80,15 +86,9 @@ export function airInto(temperatureK: number, out: Float64Array): boolean {
 export function airPropertiesAt(temperatureK: number): AirProperties {
   const tC = toCelsius(temperatureK);
   if (tC < FIRST[0] || tC > LAST[0]) return extrapolated(tC < FIRST[0] ? FIRST : LAST, temperatureK);
-  let lo = 0;
-  let hi = AIR_TABLE.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (AIR_TABLE[mid]![0] <= tC) lo = mid;
-    else hi = mid;
-  }
+  const lo = rowBelow(tC);
   const a = AIR_TABLE[lo]!;
-  const b = AIR_TABLE[hi]!;
+  const b = AIR_TABLE[lo + 1]!;
   const f = (tC - a[0]) / (b[0] - a[0]);
   const row = a.map((v, i) => v + f * (b[i]! - v));
   return fromRow(row, temperatureK, true);

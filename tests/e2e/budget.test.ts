@@ -1,20 +1,15 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { GOOD_PARTS } from "../unit/parts/fixtures";
 import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
 import { signedIn } from "../support/http";
+import { createParts, type PartIds } from "../support/retrofit";
 
 let session: Awaited<ReturnType<typeof launch>>;
-const ids: Record<string, string> = {};
+let ids: PartIds;
 const tag = Date.now().toString(36);
 
 beforeAll(async () => {
   // Parts the maker composes the retrofit from (generic, invented; see the parts fixtures).
-  const maker = await signedIn("maker@sinkwise.test");
-  for (const [kind, part] of Object.entries(GOOD_PARTS)) {
-    const r = await maker.post("/api/v1/parts", { ...part, name: `${part.name} ${tag}`, visibility: "private" });
-    expect(r.status, JSON.stringify(r.body)).toBe(201);
-    ids[kind] = (r.body.part as { id: string }).id;
-  }
+  ids = await createParts(await signedIn("maker@sinkwise.test"), "private");
   session = await launch();
 });
 afterAll(async () => {

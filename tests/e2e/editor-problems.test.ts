@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { GOOD_PARTS } from "../unit/parts/fixtures";
 import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
 import { BASE_URL, signedIn } from "../support/http";
+import { createParts, type PartIds } from "../support/retrofit";
 
 let session: Awaited<ReturnType<typeof launch>>;
 let buildId = "";
@@ -11,13 +11,8 @@ beforeAll(async () => {
   // Parts from the fixtures (generic, invented): the driver takes 2.8–4.2 V, the cell is a 3.6 V
   // li-ion; two in series make 7.2 V nominal, outside the driver's input range.
   const maker = await signedIn("maker@sinkwise.test");
-  const ids: Record<string, string> = {};
-  for (const [kind, part] of Object.entries(GOOD_PARTS)) {
-    const r = await maker.post("/api/v1/parts", { ...part, name: `${part.name} ${tag}`, visibility: "private" });
-    expect(r.status, JSON.stringify(r.body)).toBe(201);
-    ids[kind] = (r.body.part as { id: string }).id;
-  }
-  const slot = (kind: string) => ({ partId: ids[kind] });
+  const ids = await createParts(maker, "private");
+  const slot = (kind: keyof PartIds) => ({ partId: ids[kind] });
   const design = {
     housing: slot("housing"),
     lightEngine: { emitter: slot("emitter"), count: 1, interface: slot("interface"), heatsink: slot("heatsink") },

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import { GOOD_PARTS } from "../unit/parts/fixtures";
 import { Client, signedIn, uniqueEmail } from "../support/http";
+import { createParts } from "../support/retrofit";
 
 let owner: Client;
 let stranger: Client;
@@ -10,12 +10,7 @@ beforeAll(async () => {
   owner = await signedIn("maker@sinkwise.test");
   stranger = new Client();
   await stranger.post("/api/v1/auth/signup", { email: uniqueEmail("solve-stranger"), password: "long enough pw", displayName: "S" });
-  const ids: Record<string, string> = {};
-  for (const [kind, part] of Object.entries(GOOD_PARTS)) {
-    const r = await owner.post("/api/v1/parts", { ...part, visibility: "private" });
-    expect(r.status).toBe(201);
-    ids[kind] = (r.body.part as { id: string }).id;
-  }
+  const ids = await createParts(owner, "private");
   const design = {
     housing: { partId: ids.housing },
     lightEngine: { emitter: { partId: ids.emitter }, interface: { partId: ids.interface }, heatsink: { partId: ids.heatsink } },

@@ -3,7 +3,8 @@ import type { User } from "lucia";
 import { getPart, type PartRecord, type PartSummary } from "@/db/queries/parts";
 import { ApiError } from "@/lib/http/api-error";
 import { canEditPart, partNotes, PART_SCHEMAS, type PartInput, type PartViewer } from "@/lib/parts";
-import { currentUser } from "./auth/session";
+import { notFound } from "next/navigation";
+import { currentUser, requirePageUser } from "./auth/session";
 
 /** The caller as the visibility rule sees them: signed in (id, role) or anonymous. */
 export async function currentViewer(): Promise<PartViewer> {
@@ -52,6 +53,7 @@ function common(record: PartSummary, viewer: PartViewer) {
 }
 
 export type PartSummaryJson = ReturnType<typeof summaryJson>;
+export type PartJson = ReturnType<typeof partJson>;
 
 export function summaryJson(record: PartSummary, viewer: PartViewer) {
   return common(record, viewer);
@@ -82,4 +84,14 @@ export async function editablePart(id: string, viewer: PartViewer): Promise<Part
 /** Reads the URL's query string with a schema; errors name the parameter. */
 export function queryOf(request: Request): URLSearchParams {
   return new URL(request.url).searchParams;
+}
+
+/** For a part's pages: the signed-in user and the part, or the not-found page (missing or hidden alike). */
+export async function loadPartPage(params: Promise<{ id: string }>) {
+  const user = await requirePageUser();
+  const { id } = await params;
+  const viewer = viewerOf(user);
+  const record = await getPart({ id, viewer });
+  if (!record) notFound();
+  return { user, id, part: partJson(record, viewer) };
 }

@@ -1,27 +1,9 @@
-import type { CsvError, PartKind, Provenance, Visibility } from "@/lib/parts";
+import type { CsvError, PartKind, Provenance } from "@/lib/parts";
+import type { PartJson, PartSummaryJson } from "@/server/parts-api";
 
-/** What the parts API answers (see server/parts-api.ts); dates are ISO strings. */
-export interface PartSummaryDto {
-  id: string;
-  kind: PartKind;
-  name: string;
-  provenance: Provenance;
-  provenanceNote: string | null;
-  visibility: Visibility;
-  costEur: number | null;
-  verified: boolean;
-  specs: Record<string, unknown>;
-  owner: { id: string; displayName: string };
-  canEdit: boolean;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface PartDto extends PartSummaryDto {
-  /** Curve kind → { points, note? } in storage units, as validated by lib/curves. */
-  curves: Record<string, unknown>;
-  notes: { field: string; message: string }[];
-}
+/** What the parts API answers, typed from the functions that build the answers (dates are ISO strings). */
+export type PartSummaryDto = PartSummaryJson;
+export type PartDto = PartJson;
 
 export interface PartPageDto {
   items: PartSummaryDto[];

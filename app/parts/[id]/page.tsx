@@ -1,25 +1,17 @@
 import Link from "next/link";
-import { notFound } from "next/navigation";
 import { AttachmentsPanel } from "@/components/parts/attachments-panel";
 import { CurveChart } from "@/components/parts/curve-chart";
 import { PROVENANCE_LABELS, VISIBILITY_LABELS } from "@/components/parts/labels";
 import { PartActions } from "@/components/parts/part-actions";
 import { PartFields } from "@/components/parts/part-fields";
-import { getPart } from "@/db/queries/parts";
 import type { CurveKind } from "@/lib/curves";
 import { kindDefinition } from "@/lib/parts";
-import { requirePageUser } from "@/server/auth/session";
-import { partJson, viewerOf } from "@/server/parts-api";
+import { loadPartPage } from "@/server/parts-api";
 
 export const metadata = { title: "Part" };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser();
-  const { id } = await params;
-  const viewer = viewerOf(user);
-  const record = await getPart({ id, viewer });
-  if (!record) notFound();
-  const part = partJson(record, viewer);
+  const { user, id, part } = await loadPartPage(params);
   const prefs = { length: user.lengthUnits, temperature: user.temperatureUnit } as const;
   const def = kindDefinition(part.kind);
   const curves = (def.curveKinds as readonly CurveKind[]).flatMap((kind) => {

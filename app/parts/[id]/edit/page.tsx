@@ -1,19 +1,12 @@
 import Link from "next/link";
-import { notFound, redirect } from "next/navigation";
+import { redirect } from "next/navigation";
 import { PartForm } from "@/components/parts/part-form";
-import { getPart } from "@/db/queries/parts";
-import { requirePageUser } from "@/server/auth/session";
-import { partJson, viewerOf } from "@/server/parts-api";
+import { loadPartPage } from "@/server/parts-api";
 
 export const metadata = { title: "Edit part" };
 
 export default async function Page({ params }: { params: Promise<{ id: string }> }) {
-  const user = await requirePageUser();
-  const { id } = await params;
-  const viewer = viewerOf(user);
-  const record = await getPart({ id, viewer });
-  if (!record) notFound();
-  const part = partJson(record, viewer);
+  const { user, id, part } = await loadPartPage(params);
   // Someone else's part: back to its page, where Duplicate makes an editable copy.
   if (!part.canEdit) redirect(`/parts/${id}`);
   return (

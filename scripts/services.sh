@@ -17,14 +17,6 @@ S3_PORT="$(port_of "${S3_ENDPOINT:-http://127.0.0.1:4569}")"
 
 alive() { [ -f "$1" ] && kill -0 "$(cat "$1")" 2>/dev/null; }
 
-wait_http() {
-  for _ in $(seq 1 200); do
-    if node -e "fetch(process.argv[1]).then(r=>process.exit(r.ok?0:1),()=>process.exit(1))" "$1"; then return 0; fi
-    sleep 0.1
-  done
-  echo "[services] $1 did not answer" >&2; return 1
-}
-
 start_mail() {
   local pidf="$RUN/maildev-$TAG.pid"
   if alive "$pidf"; then echo "[services] mail inbox already running on $MAIL_INBOX_URL"; return; fi
@@ -33,17 +25,8 @@ start_mail() {
     --smtp "$SMTP_PORT" --web "$INBOX_PORT" --mail-directory ".data/mail-$TAG" \
     </dev/null >".data/logs/maildev-$TAG.log" 2>&1 &
   echo $! >"$pidf"
-  wait_http "http://127.0.0.1:$INBOX_PORT/api/healthz"
+  wait_for_url "http://127.0.0.1:$INBOX_PORT/api/healthz" "$(cat "$pidf")"
   echo "[services] mail: SMTP 127.0.0.1:$SMTP_PORT, inbox $MAIL_INBOX_URL"
-}
-
-# Any HTTP answer means s3rver is up (an unsigned request gets an S3 error document).
-wait_s3() {
-  for _ in $(seq 1 200); do
-    if node -e "fetch(process.argv[1]).then(r=>process.exit(r.status<500?0:1),()=>process.exit(1))" "$1"; then return 0; fi
-    sleep 0.1
-  done
-  echo "[services] $1 did not answer" >&2; return 1
 }
 
 start_s3() {
@@ -51,7 +34,8 @@ start_s3() {
   if alive "$pidf"; then echo "[services] S3 fake already running on $S3_ENDPOINT"; return; fi
   setsid node scripts/s3-fake.mjs </dev/null >".data/logs/s3rver-$S3_PORT.log" 2>&1 &
   echo $! >"$pidf"
-  wait_s3 "http://127.0.0.1:$S3_PORT/"
+  # Any HTTP answer means s3rver is up (an unsigned request gets an S3 error document).
+  wait_for_url "http://127.0.0.1:$S3_PORT/" "$(cat "$pidf")"
   echo "[services] S3: $S3_ENDPOINT, bucket $S3_BUCKET"
 }
 

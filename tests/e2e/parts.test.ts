@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
 import { BASE_URL } from "../support/http";
+import { minimalPdf } from "../support/pdf";
 
 let session: Awaited<ReturnType<typeof launch>>;
 
@@ -11,20 +12,6 @@ afterAll(async () => {
   await session?.close();
 });
 
-/** A minimal valid one-page PDF, as a datasheet stand-in. */
-function datasheetPdf(): Buffer {
-  const objects = ["<< /Type /Catalog /Pages 2 0 R >>", "<< /Type /Pages /Kids [3 0 R] /Count 1 >>", "<< /Type /Page /Parent 2 0 R /MediaBox [0 0 200 200] >>"];
-  let body = "%PDF-1.4\n";
-  const offsets: number[] = [];
-  objects.forEach((content, i) => {
-    offsets.push(body.length);
-    body += `${i + 1} 0 obj\n${content}\nendobj\n`;
-  });
-  const xref = body.length;
-  body += `xref\n0 ${objects.length + 1}\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, "0")} 00000 n \n`).join("")}`;
-  body += `trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
-  return Buffer.from(body, "latin1");
-}
 
 describe("Parts bin in chromium", () => {
   it("creates a heatsink with a value in inches, attaches a datasheet and finds it through the table's filter", async () => {
@@ -58,7 +45,7 @@ describe("Parts bin in chromium", () => {
     // 0.8 in = 20.32 mm exactly (1 in = 25.4 mm by definition).
     await expect.poll(() => page.locator('[data-field="baseLengthM"]').textContent()).toBe("20.32 mm");
 
-    await page.getByLabel("Datasheet or photo").setInputFiles({ name: "projector-sink datasheet.pdf", mimeType: "application/pdf", buffer: datasheetPdf() });
+    await page.getByLabel("Datasheet or photo").setInputFiles({ name: "projector-sink datasheet.pdf", mimeType: "application/pdf", buffer: Buffer.from(minimalPdf()) });
     await page.getByRole("button", { name: "Upload" }).click();
     await expect.poll(() => page.getByRole("status").textContent()).toContain("Attached projector-sink datasheet.pdf");
     await page.getByRole("link", { name: "projector-sink datasheet.pdf" }).waitFor();

@@ -2,7 +2,6 @@ import "server-only";
 import { createHash } from "node:crypto";
 import { getCachedResultText, putCachedResult, type RevisionRow } from "@/db/queries/builds";
 import type { PartRecord } from "@/db/queries/parts";
-import type { BuildViewer } from "@/lib/builds/access";
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, resolveBuild } from "@/lib/retrofit";
 import { toPartInput } from "@/server/parts-api";
@@ -13,6 +12,9 @@ import { loadDesignParts, type LoadedBuild } from "./load";
  * out: cached results of another version are recomputed.
  */
 export const SOLVER_VERSION = `e${EVALUATION_VERSION}.5`;
+
+/** A build the caller may see and one of its revisions; who is asking does not change the answer. */
+type SolveArgs = { build: LoadedBuild; revision: RevisionRow };
 
 export type RevisionSolve = {
   buildId: string;
@@ -85,10 +87,10 @@ function roundedForDisplay(value: unknown): unknown {
 }
 
 /**
- * Evaluates a revision for a viewer, from the cache when it holds this key. The answer is
+ * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when it holds this key. The answer is
  * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
  */
-async function solveToText({ build, revision }: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation }> {
+async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation }> {
   // Parts are read as the build's owner sees them: whoever may see the build (a reviewer,
   // a class member, a share link) gets the same Budget as its owner, though the owner's
   // private part records themselves stay private (only their effect on the figures shows).
@@ -103,13 +105,13 @@ async function solveToText({ build, revision }: { build: LoadedBuild; revision: 
   return { head: { ...base, cached: false }, evaluationJson, evaluation };
 }
 
-export async function solveRevision(args: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<RevisionSolve> {
+export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
   const r = await solveToText(args);
   return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(r.evaluationJson) as BuildEvaluation) };
 }
 
 /** The solve route's body as JSON text (`RevisionSolve`), built around the cached text. */
-export async function solveRevisionJson(args: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<string> {
+export async function solveRevisionJson(args: SolveArgs): Promise<string> {
   const r = await solveToText(args);
   return `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`;
 }

@@ -37,7 +37,7 @@ export async function compareItems({ items, viewer }: { items: readonly CompareI
     if (!parsed.success) throw new ApiError("unprocessable:design", `The stored design of ${build.title} (revision ${revision.number}) no longer reads: ${parsed.error.issues[0]?.message ?? "invalid"}.`, `items[${i}]`);
     return parsed.data;
   });
-  const solved = await Promise.all(loaded.map(({ build, revision }) => solveRevision({ build, revision, viewer })));
+  const solved = await Promise.all(loaded.map(({ build, revision }) => solveRevision({ build, revision })));
   const names = new Map<string, string>();
   for (const { revision } of loaded) for (const [id, p] of await loadDesignParts({ design: revision.design, viewer })) names.set(id, p.name);
   const evals = solved.map((s) => s.evaluation);

@@ -17,7 +17,7 @@ export async function reviewedSolve({ review }: { review: ReviewView }): Promise
   const build = viewer ? await getBuild({ id: review.buildId, viewer }) : undefined;
   const revision = build ? await getRevision({ buildId: build.id, number: review.revisionNumber }) : undefined;
   if (!build || !revision) throw new ApiError("not_found:revision", `Revision ${review.revisionNumber} of this build is not there any more.`, "revision");
-  return solveRevision({ build, revision, viewer });
+  return solveRevision({ build, revision });
 }
 
 export async function reviewAnchors({ review }: { review: ReviewView }): Promise<HeatPathAnchors> {

@@ -7,8 +7,8 @@ import { solveRevision } from "@/server/builds/solve";
 export const metadata = { title: "Report" };
 
 export default async function ReportPage({ params }: { params: Promise<{ id: string }> }) {
-  const { user, build, revision } = await loadBuildPage(params);
-  const { evaluation } = await solveRevision({ build, revision, viewer: user });
+  const { build, revision } = await loadBuildPage(params);
+  const { evaluation } = await solveRevision({ build, revision });
   return (
     <div className="space-y-4">
       <div className="no-print flex items-center gap-4">

@@ -10,5 +10,5 @@ export const POST = route<{ params: Promise<{ id: string }> }>(async (request, {
   const build = await loadBuild({ id: (await params).id, viewer: user });
   const { revision: number } = await readJson(request, solveBuildSchema, "solve");
   const revision = await loadRevision({ build, number });
-  return new Response(await solveRevisionJson({ build, revision, viewer: user }), { headers: { "content-type": "application/json" } });
+  return new Response(await solveRevisionJson({ build, revision }), { headers: { "content-type": "application/json" } });
 });

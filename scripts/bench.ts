@@ -1,5 +1,6 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
 import { benchBuilds } from "./bench-builds";
+import { benchFit } from "./bench-fit";
 import { benchPages } from "./bench-pages";
 import { benchParts } from "./bench-parts";
 import { benchRetrofit } from "./bench-retrofit";
@@ -10,6 +11,7 @@ async function main(): Promise<void> {
   await benchRetrofit();
   await benchParts();
   await benchBuilds();
+  await benchFit();
   await benchPages();
 }
 

@@ -59,6 +59,7 @@ export const MATRIX: Row[] = [
   // —— stateless engine
   { route: "POST /api/v1/check", path: () => "/api/v1/check", body: () => ({ heatWatts: "7 W", sink: { declaredKPerW: "4 K/W" }, ambientC: "25 °C" }), expect: same(200) },
   { route: "POST /api/v1/solve/steady", path: () => "/api/v1/solve/steady", body: () => NETWORK, expect: same(200) },
+  { route: "POST /api/v1/bench/fit", path: () => "/api/v1/bench/fit", body: () => ({ ambientC: 25, heatW: "7 W", readings: [{ tS: "20 min", tempC: 60 }], massKg: "100 g", material: "aluminium-6063-t5" }), expect: same(200) },
   { route: "POST /api/v1/solve/transient", path: () => "/api/v1/solve/transient", body: () => ({ network: NETWORK, durationS: 600, stepS: 10 }), expect: same(200) },
 
   // —— parts (the owner's are private)

@@ -5,8 +5,8 @@
  */
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, evaluateBuild, resolveBuild } from "@/lib/retrofit";
-import { CATALOGUE, type CatalogueKey } from "@/db/seed/catalogue-data";
-import { demoBuilds } from "@/db/seed/builds";
+import { CATALOGUE, type CatalogueKey } from "./seed/catalogue-data";
+import { demoBuilds } from "./seed/builds";
 
 const ids = Object.fromEntries(Object.keys(CATALOGUE).map((k) => [k, k])) as Record<CatalogueKey, string>;
 const parts = new Map<string, Part>();

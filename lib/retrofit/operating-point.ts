@@ -90,6 +90,9 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
       cellsW: el.cellHeat?.value ?? 0,
       chargerW: 0,
     };
+    // A declared rating's correction needs the sink's rise: start from the junction's heat through the rating (the driver's heat does not pass the sink).
+    const rated = build.lightEngine.heatsink?.specs;
+    if (sinkRise === null && rated?.rating === "declared") sinkRise = Math.max(heat.junctionW * rated.sinkToAirKPerW, 1e-3);
     const compiled = compileBuild(build, heat, { sinkToAirKPerW: sinkR ?? null, sinkRiseK: sinkRise }, problems);
     if (!compiled) return null;
     if (sinkR === null) sinkR = compiled.sinkEstimateKPerW;

@@ -1,18 +1,25 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { CautionsPanel } from "./cautions-panel";
-import { DeratingCharts } from "./derating-charts";
 import { ElectricalPanel } from "./electrical-panel";
 import { type TempUnit, VERDICT_STYLE } from "./format";
 import { HeadroomTable } from "./headroom-table";
 import { HeatPathDiagram } from "./heat-path-diagram";
-import { LadderChart } from "./ladder-chart";
 import { ModesTable } from "./modes-table";
-import { VERDICTS } from "@/lib/retrofit";
+// The leaf module, not the barrel: the barrel would bring the unit parser into the page.
+import { VERDICTS } from "@/lib/retrofit/limits";
 import type { Evaluation, Scenario } from "./types";
-import { WarmupChart } from "./warmup-chart";
 import { WhatItTakes } from "./what-it-takes";
+
+// Charts (Chart.js) load when one is shown, not with the page.
+function ChartLoading() {
+  return <div className="h-72 animate-pulse rounded bg-line/30" aria-busy="true" aria-label="Loading the chart" />;
+}
+const LadderChart = dynamic(() => import("./ladder-chart").then((m) => m.LadderChart), { ssr: false, loading: ChartLoading });
+const WarmupChart = dynamic(() => import("./warmup-chart").then((m) => m.WarmupChart), { ssr: false, loading: ChartLoading });
+const DeratingCharts = dynamic(() => import("./derating-charts").then((m) => m.DeratingCharts), { ssr: false, loading: ChartLoading });
 
 function Panel({ title, children }: { title: string; children: React.ReactNode }) {
   return (

@@ -1,13 +1,17 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { VERDICT_STYLE } from "@/components/budget/format";
 import { ApiClientError } from "@/components/ui/fetch-json";
 import type { FigureRow } from "@/lib/compare";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
-import { OverlaidWarmups, SideBySideLadders } from "./compare-charts";
 import { type CompareAnswer, useCompare, useSaveComparison } from "./use-compare";
+
+// Charts (Chart.js) load when shown, not with the page.
+const OverlaidWarmups = dynamic(() => import("./compare-charts").then((m) => m.OverlaidWarmups), { ssr: false });
+const SideBySideLadders = dynamic(() => import("./compare-charts").then((m) => m.SideBySideLadders), { ssr: false });
 
 const DIGITS: Record<string, number> = { "°C": 1, K: 1, min: 0, h: 1, lm: 0, W: 2, "€": 2, mAh: 0, Wh: 1 };
 const JUDGED = { better: "bg-ok/10 text-ok", worse: "bg-over/10 text-over", same: "text-ink-soft" } as const;

@@ -31,6 +31,8 @@ export const forkBuildSchema = z.strictObject({
 
 export const solveBuildSchema = z.strictObject({
   revision: z.number().int().positive().optional(),
+  /** "chart" (the default): warm-up curves as the Budget's charts draw them; "full": every node and sample. */
+  curves: z.enum(["chart", "full"], { error: "curves is chart or full." }).default("chart"),
 });
 
 export type CreateBuildInput = z.infer<typeof createBuildSchema>;

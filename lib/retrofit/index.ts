@@ -29,6 +29,7 @@ export { resolveBuild, type PartLookup, type ResolveOutcome } from "./resolve";
 export { compileBuild, type CompiledBuild, type ScenarioHeat, type CompileState } from "./compile";
 export { PLACES, type NodePlace, type LinkPlace } from "./compile/builder";
 export { evaluateBuild, EVALUATION_VERSION, type BuildEvaluation, type ModeSummary } from "./evaluate";
+export { CHART_POINTS, forCharts } from "./chart-curves";
 export type { EvaluateOptions } from "./options";
 export type { ScenarioResult, ModeFigures, ChargingFigures, Derating } from "./scenario-mode";
 export type { ThermalResult, LinkResult, LadderStep, Warmup, WhatItTakes } from "./scenario";

@@ -3,7 +3,7 @@ import { createHash } from "node:crypto";
 import { getCachedResultText, putCachedResult, type RevisionRow } from "@/db/queries/builds";
 import type { PartRecord } from "@/db/queries/parts";
 import { partSchema, type Part } from "@/lib/parts";
-import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, resolveBuild } from "@/lib/retrofit";
+import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, forCharts, resolveBuild } from "@/lib/retrofit";
 import { toPartInput } from "@/server/parts/api";
 import { loadDesignParts, type LoadedBuild } from "./load";
 
@@ -13,8 +13,11 @@ import { loadDesignParts, type LoadedBuild } from "./load";
  */
 export const SOLVER_VERSION = `e${EVALUATION_VERSION}.6`;
 
-/** A build the caller may see and one of its revisions; who is asking does not change the answer. */
-type SolveArgs = { build: LoadedBuild; revision: RevisionRow };
+/** Warm-up curves as the charts draw them, or every node and sample. */
+export type Curves = "chart" | "full";
+
+/** A build the caller may see and one of its revisions; who is asking does not change the answer. Curves are in full unless told. */
+type SolveArgs = { build: LoadedBuild; revision: RevisionRow; curves?: Curves };
 
 export type RevisionSolve = {
   buildId: string;
@@ -90,23 +93,33 @@ function roundedForDisplay(value: unknown): unknown {
  * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when it holds this key. The answer is
  * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
  */
-async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation }> {
+async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number }> {
   // Parts are read as the build's owner sees them: whoever may see the build (a reviewer,
   // a class member, a share link) gets the same Budget as its owner, though the owner's
   // private part records themselves stay private (only their effect on the figures shows).
   const records = await loadDesignParts({ design: revision.design, viewer: { id: build.ownerId, role: "maker" } });
   const key = cacheKey(records);
+  const keys: Record<Curves, string> = { full: key, chart: `${key}:chart` };
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
-  const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: key });
+  const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: keys[curves] });
   if (hit !== undefined) return { head: { ...base, cached: true }, evaluationJson: hit };
-  const evaluation = evaluateRevision({ design: revision.design, records });
+  const t0 = performance.now();
+  const full = evaluateRevision({ design: revision.design, records });
+  const evaluateMs = performance.now() - t0;
+  const shapes: Record<Curves, () => BuildEvaluation> = { full: () => full, chart: () => forCharts(full) };
+  const evaluation = shapes[curves]();
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
-  // Written after the answer leaves: a slow or failed cache write costs the next caller a
-  // recomputation, never this caller time or an error.
-  void putCachedResult({ revisionId: revision.id, cacheKey: key, resultJson: evaluationJson }).catch((e: unknown) => {
-    console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
+  // Both shapes are cached after the answer has left: a slow or failed cache write costs the
+  // next caller a recomputation, never this caller time or an error.
+  setImmediate(() => {
+    for (const c of ["chart", "full"] as const) {
+      const text = c === curves ? evaluationJson : JSON.stringify(roundedForDisplay(shapes[c]()));
+      putCachedResult({ revisionId: revision.id, cacheKey: keys[c], resultJson: text }).catch((e: unknown) => {
+        console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
+      });
+    }
   });
-  return { head: { ...base, cached: false }, evaluationJson, evaluation };
+  return { head: { ...base, cached: false }, evaluationJson, evaluation, evaluateMs };
 }
 
 export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
@@ -114,10 +127,13 @@ export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
   return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(r.evaluationJson) as BuildEvaluation) };
 }
 
-/** The solve route's body as JSON text (`RevisionSolve`), built around the cached text. */
-export async function solveRevisionJson(args: SolveArgs): Promise<string> {
+/**
+ * The solve route's body as JSON text (`RevisionSolve`), built around the cached text, and
+ * how long the evaluation itself took when it ran (not on a cache hit).
+ */
+export async function solveRevisionJson(args: SolveArgs): Promise<{ json: string; evaluateMs?: number }> {
   const r = await solveToText(args);
-  return `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`;
+  return { json: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs };
 }
 
 /** Resolves the design against the part records and runs the evaluation (pure from here on). */

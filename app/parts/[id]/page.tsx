@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { AttachmentsPanel } from "@/components/parts/attachments-panel";
-import { CurveChart } from "@/components/parts/curve-chart";
+import { CurveChart } from "@/components/parts/curve-chart-lazy";
 import { PROVENANCE_LABELS, VISIBILITY_LABELS } from "@/components/parts/labels";
 import { PartActions } from "@/components/parts/part-actions";
 import { PartFields } from "@/components/parts/part-fields";

@@ -13,6 +13,7 @@ import { VERDICTS } from "@/lib/retrofit";
 import type { Evaluation, Scenario } from "./types";
 import { WarmupChart } from "./warmup-chart";
 import { WhatItTakes } from "./what-it-takes";
+import { formatMoney } from "@/lib/units/figures";
 
 function Panel({ title, children }: { title: string; children: React.ReactNode }) {
   return (
@@ -82,13 +83,13 @@ export function BudgetReport({ evaluation, ambientC, unit = "C" }: { evaluation:
         <Panel title="Cost">
           <ul className="text-sm">
             {evaluation.costs.lines.map((l) => (
-              <li key={l.slot}>{l.count} × {l.name}: {l.totalEur === null ? "no price" : `€${l.totalEur.toFixed(2)}`}</li>
+              <li key={l.slot}>{l.count} × {l.name}: {l.totalEur === null ? "no price" : formatMoney(l.totalEur)}</li>
             ))}
           </ul>
           <p className="text-sm">
-            Parts: <strong>€{evaluation.costs.totalEur.toFixed(2)}</strong>
-            {evaluation.costs.comparableNewLightEur !== null && ` · a comparable new light: €${evaluation.costs.comparableNewLightEur.toFixed(2)}`}
-            {evaluation.costs.savingEur !== null && ` · ${evaluation.costs.savingEur >= 0 ? "saving" : "extra"} €${Math.abs(evaluation.costs.savingEur).toFixed(2)}`}
+            Parts: <strong>{formatMoney(evaluation.costs.totalEur)}</strong>
+            {evaluation.costs.comparableNewLightEur !== null && ` · a comparable new light: ${formatMoney(evaluation.costs.comparableNewLightEur)}`}
+            {evaluation.costs.savingEur !== null && ` · ${evaluation.costs.savingEur >= 0 ? "saving" : "extra"} ${formatMoney(Math.abs(evaluation.costs.savingEur))}`}
           </p>
         </Panel>
       )}

@@ -1,6 +1,7 @@
 "use client";
 
-import { delta, limitLabel, temp, type TempUnit, VERDICT_STYLE } from "./format";
+import { formatAgainstLimit, formatHeadroom } from "@/lib/units/figures";
+import { limitLabel, type TempUnit, VERDICT_STYLE } from "./format";
 import { Traceable } from "./trace-view";
 import type { Scenario } from "./types";
 
@@ -20,17 +21,20 @@ export function HeadroomTable({ scenario, unit }: { scenario: Scenario; unit: Te
         </tr>
       </thead>
       <tbody>
-        {limits.map((l) => (
+        {limits.map((l) => {
+          const shown = formatAgainstLimit(l.temperatureC, l.limitC, l.kind, "temperature", { temperatureUnit: unit });
+          return (
           <tr key={l.id} className="border-b border-line/60 align-top">
             <td className="py-1.5 pr-3">{limitLabel(l)}</td>
-            <td className="py-1.5 pr-3"><Traceable label={temp(l.temperatureC, unit)} trace={l.trace} /></td>
-            <td className="py-1.5 pr-3"><Traceable label={`${l.kind === "min" ? "≥" : "≤"} ${temp(l.limitC, unit)}`} trace={l.limitTrace} /></td>
-            <td className="py-1.5 pr-3 font-mono">{delta(l.headroomK, unit)}</td>
+            <td className="py-1.5 pr-3"><Traceable label={shown.value} trace={l.trace} /></td>
+            <td className="py-1.5 pr-3"><Traceable label={`${shown.relation} ${shown.limit}`} trace={l.limitTrace} /></td>
+            <td className="py-1.5 pr-3 font-mono">{formatHeadroom(l.headroomK, { temperatureUnit: unit })}</td>
             <td className="py-1.5">
               <span className={`rounded border px-1.5 py-0.5 text-xs ${VERDICT_STYLE[l.verdict] ?? ""}`}>{l.verdict}</span>
             </td>
           </tr>
-        ))}
+          );
+        })}
       </tbody>
     </table>
   );

@@ -1,6 +1,7 @@
 "use client";
 
-import { duration, num, VERDICT_STYLE } from "./format";
+import { formatDuration, formatFigure as fig, formatTraced } from "@/lib/units/figures";
+import { VERDICT_STYLE } from "./format";
 import { Traceable } from "./trace-view";
 import type { Evaluation } from "./types";
 
@@ -23,10 +24,10 @@ export function ModesTable({ evaluation }: { evaluation: Evaluation }) {
         {evaluation.modes.map((m) => (
           <tr key={m.name} className="border-b border-line/60">
             <td className="py-1.5 pr-3 font-medium">{m.name}</td>
-            <td className="py-1.5 pr-3">{m.driveW === null ? "–" : `${num(m.driveW, 1)} W`}</td>
-            <td className="py-1.5 pr-3">{m.totalFluxLm === null ? "–" : `${num(m.totalFluxLm, 0)} lm`}</td>
-            <td className="py-1.5 pr-3">{m.runtime ? <Traceable label={duration((m.runtime.value ?? 0) * (m.runtime.unit === "h" ? 3600 : 1))} trace={m.runtime.trace} /> : "–"}</td>
-            <td className="py-1.5 pr-3">{m.firstLimitS === null ? "none within the warm-up" : `${m.firstLimit ?? "a limit"} after ${duration(m.firstLimitS)}`}</td>
+            <td className="py-1.5 pr-3">{fig(m.driveW, "power")}</td>
+            <td className="py-1.5 pr-3">{fig(m.totalFluxLm, "flux")}</td>
+            <td className="py-1.5 pr-3">{m.runtime ? <Traceable label={formatTraced(m.runtime)} trace={m.runtime.trace} /> : "–"}</td>
+            <td className="py-1.5 pr-3">{m.firstLimitS === null ? "none within the warm-up" : `${m.firstLimit ?? "a limit"} after ${formatDuration(m.firstLimitS)}`}</td>
             <td className="py-1.5">{m.verdict ? <span className={`rounded border px-1.5 py-0.5 text-xs ${VERDICT_STYLE[m.verdict] ?? ""}`}>{m.verdict}</span> : "–"}</td>
           </tr>
         ))}

@@ -4,26 +4,27 @@ import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { VERDICT_STYLE } from "@/components/budget/format";
 import { ApiClientError } from "@/components/ui/fetch-json";
+import { formatInUnit } from "@/lib/units/figures";
 import type { FigureRow } from "@/lib/compare";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import { OverlaidWarmups, SideBySideLadders } from "./compare-charts";
 import { type CompareAnswer, useCompare, useSaveComparison } from "./use-compare";
 
-const DIGITS: Record<string, number> = { "°C": 1, K: 1, min: 0, h: 1, lm: 0, W: 2, "€": 2, mAh: 0, Wh: 1 };
 const JUDGED = { better: "bg-ok/10 text-ok", worse: "bg-over/10 text-over", same: "text-ink-soft" } as const;
 
 function show(row: FigureRow, v: number | string | null): string {
   if (row.kind === "verdict") return typeof v === "string" ? v : "–";
   if (row.kind === "time" && v === null) return "not reached";
   if (typeof v !== "number" || !Number.isFinite(v)) return "–";
-  return row.unit === "€" ? `€${v.toFixed(2)}` : `${v.toFixed(DIGITS[row.unit] ?? 1)} ${row.unit}`;
+  return formatInUnit(v, row.unit);
 }
 
 function signed(row: FigureRow, d: number | null): string {
   if (d === null || !Number.isFinite(d)) return "";
-  const digits = DIGITS[row.unit] ?? 1;
-  if (Math.abs(d) < 0.5 * 10 ** -digits) return "±0";
-  return `${d > 0 ? "+" : "−"}${row.unit === "€" ? "€" : ""}${Math.abs(d).toFixed(digits)}${row.unit === "€" ? "" : ` ${row.unit}`}`;
+  // A difference is shown like the figure itself; one that rounds away to nothing is "±0".
+  const size = formatInUnit(Math.abs(d), row.unit);
+  if (!/[1-9]/.test(size)) return "±0";
+  return `${d > 0 ? "+" : "−"}${size}`;
 }
 
 function Figures({ data }: { data: CompareAnswer }) {

@@ -7,6 +7,7 @@ import { PartFields } from "@/components/parts/part-fields";
 import type { CurveKind } from "@/lib/curves";
 import { kindDefinition } from "@/lib/parts";
 import { loadPartPage } from "@/server/parts-api";
+import { formatMoney } from "@/lib/units/figures";
 
 export const metadata = { title: "Part" };
 
@@ -30,7 +31,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
           <span className="rounded bg-paper-deep px-2 py-0.5">{VISIBILITY_LABELS[part.visibility]}</span>
           {part.verified && <span className="rounded bg-ok/10 px-2 py-0.5 text-ok">Verified</span>}
           <span className="text-ink-soft">by {part.owner.displayName}</span>
-          {part.costEur !== null && <span className="text-ink-soft">· {part.costEur.toFixed(2)} EUR</span>}
+          {part.costEur !== null && <span className="text-ink-soft">· {formatMoney(part.costEur)}</span>}
         </p>
         {part.provenanceNote && <p className="max-w-3xl text-sm text-ink-soft">Source: {part.provenanceNote}</p>}
         <PartActions id={part.id} name={part.name} canEdit={part.canEdit} isAdmin={user.role === "admin"} verified={part.verified} />

@@ -320,3 +320,38 @@ export const comparisons = mysqlTable(
   },
   (t) => [index("comparison_owner_idx").on(t.ownerId, t.createdAt)],
 );
+
+/**
+ * The specs of every part a revision used, as they were when it was saved (or, for a
+ * revision saved before snapshots existed, when it was first solved). The revision's Budget,
+ * reviews and worked examples read these, so editing a part in the bin never moves them.
+ */
+export const revisionPartSnapshots = mysqlTable(
+  "revision_part_snapshot",
+  {
+    revisionId: varchar("revision_id", { length: 40 })
+      .notNull()
+      .references(() => buildRevisions.id, { onDelete: "cascade" }),
+    partId: varchar("part_id", { length: 40 }).notNull(),
+    /** The part record (kind, name, provenance, specs, curves, cost, last change) at snapshot time. */
+    record: json("record").notNull(),
+    takenAt: datetime("taken_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.partId] })],
+);
+
+/** When a newer solver gave a revision other figures than the last one did: what moved. */
+export const revisionSolverChanges = mysqlTable(
+  "revision_solver_change",
+  {
+    revisionId: varchar("revision_id", { length: 40 })
+      .notNull()
+      .references(() => buildRevisions.id, { onDelete: "cascade" }),
+    solverVersion: varchar("solver_version", { length: 40 }).notNull(),
+    previousVersion: varchar("previous_version", { length: 40 }).notNull(),
+    /** The figures that moved, in words ("Mode high, LED junction: 92 °C → 105 °C"); empty when none did. */
+    changes: json("changes").notNull(),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.solverVersion] })],
+);

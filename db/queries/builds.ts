@@ -3,6 +3,7 @@ import { and, desc, eq, ne, or, sql } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
 import { db } from "../client";
 import { buildMembers, buildRevisions, builds, reviews, revisionParts, revisionResults, users } from "../schema";
+import { snapshotPartsInTx } from "./snapshots";
 import { newId } from "./users";
 
 export interface BuildSummary {
@@ -150,6 +151,7 @@ export async function createBuild(input: NewBuild): Promise<{ id: string; revisi
     const revisionId = newId();
     await tx.insert(buildRevisions).values({ id: revisionId, buildId: id, number: 1, design: input.design, note: input.note, createdBy: input.ownerId, createdAt: now });
     if (input.partIds.length) await tx.insert(revisionParts).values(input.partIds.map((partId) => ({ revisionId, partId })));
+    await snapshotPartsInTx(tx, revisionId, input.partIds, now);
   });
   return { id, revision: 1 };
 }
@@ -163,6 +165,7 @@ export async function saveRevision(input: { buildId: string; userId: string; des
     const now = new Date();
     await tx.insert(buildRevisions).values({ id: revisionId, buildId: input.buildId, number: next, design: input.design, note: input.note, createdBy: input.userId, createdAt: now });
     if (input.partIds.length) await tx.insert(revisionParts).values(input.partIds.map((partId) => ({ revisionId, partId })));
+    await snapshotPartsInTx(tx, revisionId, input.partIds, now);
     await tx.update(builds).set({ currentRevision: next, updatedAt: now }).where(eq(builds.id, input.buildId));
     return next;
   });

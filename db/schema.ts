@@ -355,3 +355,21 @@ export const revisionSolverChanges = mysqlTable(
   },
   (t) => [primaryKey({ columns: [t.revisionId, t.solverVersion] })],
 );
+
+/**
+ * Who checked a part's values, when, and against what (a cited datasheet or measurement,
+ * optionally one of the part's attachments). A part is "verified" only with one of these;
+ * editing the part's values removes it (they are no longer what was checked).
+ */
+export const partVerifications = mysqlTable("part_verification", {
+  partId: varchar("part_id", { length: 40 })
+    .primaryKey()
+    .references(() => parts.id, { onDelete: "cascade" }),
+  verifiedBy: varchar("verified_by", { length: 40 })
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  verifiedAt: datetime("verified_at", { fsp: 3 }).notNull(),
+  /** What the values were checked against, as the checker cited it (title, revision, page; or the measurement). */
+  against: varchar("against", { length: 500 }).notNull(),
+  attachmentId: varchar("attachment_id", { length: 40 }).references(() => partAttachments.id, { onDelete: "set null" }),
+});

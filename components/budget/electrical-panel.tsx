@@ -1,6 +1,7 @@
 "use client";
 
 import { formatDuration, formatFigure as fig, formatTraced } from "@/lib/units/figures";
+import { enteredTrace, peakPackCurrentTrace } from "@/lib/retrofit/derivations";
 import { Traceable } from "./trace-view";
 import type { Evaluation } from "./types";
 
@@ -23,10 +24,17 @@ export function ElectricalPanel({ evaluation }: { evaluation: Evaluation }) {
           </>
         )}
         <dt className="text-ink-soft">Peak pack current</dt>
-        <dd>{fig(peakPackCurrentA, "current")}</dd>
+        <dd><Traceable label={fig(peakPackCurrentA, "current")} trace={peakPackCurrentTrace(evaluation.modes)} /></dd>
         <dt className="text-ink-soft">Protection trips at</dt>
         <dd className={protectionTripA !== null && peakPackCurrentA !== null && protectionTripA < peakPackCurrentA ? "text-over" : ""}>
-          {protectionTripA === null ? "no protection in the build" : `${fig(protectionTripA, "current")}${peakPackCurrentA !== null && protectionTripA < peakPackCurrentA ? " — below the peak current: it will cut out" : ""}`}
+          {protectionTripA === null ? (
+            "no protection in the build"
+          ) : (
+            <>
+              <Traceable label={fig(protectionTripA, "current")} trace={enteredTrace("over-current trip", "the protection circuit", protectionTripA, "A")} />
+              {peakPackCurrentA !== null && protectionTripA < peakPackCurrentA ? " — below the peak current: it will cut out" : ""}
+            </>
+          )}
         </dd>
       </dl>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">

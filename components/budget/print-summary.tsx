@@ -1,5 +1,7 @@
 import { formatAgainstLimit, formatDuration, formatFigure as fig, formatHeadroom, formatTraced } from "@/lib/units/figures";
+import { driveTrace, nodeBalanceTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
 import { limitLabel, VERDICT_STYLE } from "./format";
+import { Traceable } from "./trace-view";
 import type { Evaluation } from "./types";
 
 /** The one-page report: every scenario's limits, the modes, the electrical side, the cautions. */
@@ -22,16 +24,19 @@ export function PrintSummary({ evaluation, title, revision, owner }: { evaluatio
             </tr>
           </thead>
           <tbody>
-            {evaluation.modes.map((m) => (
+            {evaluation.modes.map((m) => {
+              const s = evaluation.scenarios.find((x) => x.kind === "mode" && x.modeIndex === m.modeIndex);
+              return (
               <tr key={m.name} className="border-b border-line/50">
                 <td className="pr-2">{m.name}</td>
-                <td className="pr-2">{fig(m.driveW, "power")}</td>
-                <td className="pr-2">{fig(m.totalFluxLm, "flux")}</td>
-                <td className="pr-2">{formatTraced(m.runtime)}</td>
+                <td className="pr-2"><Traceable label={fig(m.driveW, "power")} trace={s?.mode ? driveTrace(s.mode) : null} /></td>
+                <td className="pr-2"><Traceable label={fig(m.totalFluxLm, "flux")} trace={s?.mode ? totalFluxTrace(s.mode) : null} /></td>
+                <td className="pr-2"><Traceable label={formatTraced(m.runtime)} trace={m.runtime?.trace} /></td>
                 <td className="pr-2">{m.firstLimitS === null ? "none in the warm-up" : `${m.firstLimit} after ${formatDuration(m.firstLimitS)}`}</td>
                 <td>{m.verdict ?? "–"}</td>
               </tr>
-            ))}
+              );
+            })}
           </tbody>
         </table>
       </section>
@@ -46,9 +51,9 @@ export function PrintSummary({ evaluation, title, revision, owner }: { evaluatio
                   return (
                     <tr key={l.id} className="border-b border-line/50">
                       <td className="pr-2">{limitLabel(l)}</td>
-                      <td className="pr-2">{shown.value}</td>
-                      <td className="pr-2">{shown.relation} {shown.limit}</td>
-                      <td>{formatHeadroom(l.headroomK)}</td>
+                      <td className="pr-2"><Traceable label={shown.value} trace={s.thermal ? nodeBalanceTrace(s.thermal, l.node, s.network?.ambientC ?? 25) : null} /></td>
+                      <td className="pr-2"><Traceable label={`${shown.relation} ${shown.limit}`} trace={l.limitTrace} /></td>
+                      <td><Traceable label={formatHeadroom(l.headroomK)} trace={l.trace} /></td>
                     </tr>
                   );
                 })}

@@ -1,5 +1,6 @@
 import { deletePart, getPart, partUsage, updatePart } from "@/db/queries/parts";
 import { attachmentKeys } from "@/db/queries/part-attachments";
+import { unverifyPart } from "@/db/queries/part-verifications";
 import { ApiError, fromZodError } from "@/lib/http/api-error";
 import { PART_SCHEMAS, partPatchSchema } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
@@ -30,6 +31,8 @@ export const PATCH = route<Context>(async (request, { params }) => {
   const parsed = PART_SCHEMAS[record.kind].safeParse(stored);
   if (!parsed.success) throw fromZodError(parsed.error, "part");
   await updatePart({ id, part: parsed.data });
+  // A check holds for the values that were checked: new values (or a new provenance) are unchecked.
+  if (record.verified && (patch.specs !== undefined || patch.curves !== undefined || patch.provenance !== undefined)) await unverifyPart({ partId: id });
   const updated = await getPart({ id, viewer });
   if (!updated) throw new ApiError("not_found:part", "No such part.", "id");
   return json({ part: partJson(updated, viewer) });

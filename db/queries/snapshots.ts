@@ -1,7 +1,7 @@
 import "server-only";
 import { and, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { db, type Db } from "../client";
-import { parts, revisionPartSnapshots, revisionResults, revisionSolverChanges, users } from "../schema";
+import { parts, revisionPartSnapshots, solveCache, revisionSolverChanges, users } from "../schema";
 import type { PartRecord } from "./parts";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
@@ -78,17 +78,17 @@ export async function putSnapshotOnce({ revisionId, records }: { revisionId: str
  */
 export async function getPreviousResultText({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<{ solverVersion: string; text: string } | undefined> {
   const keys = await db()
-    .select({ key: revisionResults.solverVersion })
-    .from(revisionResults)
-    .where(and(eq(revisionResults.revisionId, revisionId), ne(revisionResults.solverVersion, solverVersion)))
-    .orderBy(desc(revisionResults.createdAt))
+    .select({ key: solveCache.cacheKey })
+    .from(solveCache)
+    .where(and(eq(solveCache.revisionId, revisionId), ne(solveCache.cacheKey, solverVersion)))
+    .orderBy(desc(solveCache.createdAt))
     .limit(20);
   const key = keys.map((k) => k.key).find((k) => (k.split(":")[0] ?? k) !== solverVersion);
   if (key === undefined) return undefined;
   const rows = await db()
-    .select({ result: sql<string>`${revisionResults.result}` })
-    .from(revisionResults)
-    .where(and(eq(revisionResults.revisionId, revisionId), eq(revisionResults.solverVersion, key)))
+    .select({ result: sql<string>`${solveCache.result}` })
+    .from(solveCache)
+    .where(and(eq(solveCache.revisionId, revisionId), eq(solveCache.cacheKey, key)))
     .limit(1);
   const row = rows[0];
   return row ? { solverVersion: key.split(":")[0] ?? key, text: String(row.result) } : undefined;

@@ -5,7 +5,7 @@ import { getPreviousResultText, getSnapshot, getSolverChange, putSnapshotOnce, p
 import { figureChanges } from "@/lib/builds/solver-change";
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, resolveBuild } from "@/lib/retrofit";
-import { toPartInput } from "@/server/parts-api";
+import { toPartInput } from "@/server/parts/api";
 import { loadDesignParts, type LoadedBuild } from "./load";
 
 /**
@@ -100,7 +100,7 @@ async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit
   // private part records themselves stay private (only their effect on the figures shows).
   const records = await revisionPartRecords({ build, revision });
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
-  const hit = await getCachedResultText({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
+  const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: SOLVER_VERSION });
   if (hit !== undefined) {
     const solverChange = await getSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
     return { head: { ...base, solverChange, cached: true }, evaluationJson: hit };
@@ -108,7 +108,7 @@ async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit
   const evaluation = evaluateRevision({ design: revision.design, records });
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
   const solverChange = await noteSolverChange(revision.id, evaluation);
-  await putCachedResult({ revisionId: revision.id, solverVersion: SOLVER_VERSION, resultJson: evaluationJson });
+  await putCachedResult({ revisionId: revision.id, cacheKey: SOLVER_VERSION, resultJson: evaluationJson });
   return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation };
 }
 

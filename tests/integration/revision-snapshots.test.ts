@@ -19,7 +19,7 @@ const junction = (s: Solve) => s.evaluation.scenarios.find((x) => x.id.startsWit
 
 /** Drops the cached results of a build's revisions, so the next solve works the figures out again. */
 async function dropCachedResults(): Promise<void> {
-  await withTestDb((c) => c.query("DELETE rr FROM revision_result rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ?", [buildId]));
+  await withTestDb((c) => c.query("DELETE rr FROM solve_cache rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ?", [buildId]));
 }
 
 beforeAll(async () => {
@@ -84,13 +84,13 @@ describe("a saved revision never changes", () => {
     expect(s.solverChange).toBeNull();
     // A result kept from an older solver, with a different junction temperature.
     await withTestDb(async (c) => {
-      const [rows] = await c.query("SELECT rr.revision_id, rr.result FROM revision_result rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ? AND r.number = 1", [buildId]);
+      const [rows] = await c.query("SELECT rr.revision_id, rr.result FROM solve_cache rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ? AND r.number = 1", [buildId]);
       const row = (rows as { revision_id: string; result: unknown }[])[0]!;
       // The raw driver may hand the JSON column back parsed or as text.
       const old = (typeof row.result === "string" ? JSON.parse(row.result) : row.result) as Solve["evaluation"];
       for (const sc of old.scenarios) for (const l of sc.thermal?.limits ?? []) if (l.id === "junction") l.temperatureC -= 14;
-      await c.query("DELETE FROM revision_result WHERE revision_id = ?", [row.revision_id]);
-      await c.query("INSERT INTO revision_result (revision_id, solver_version, result, created_at) VALUES (?, 'e0.1', ?, NOW(3))", [row.revision_id, JSON.stringify(old)]);
+      await c.query("DELETE FROM solve_cache WHERE revision_id = ?", [row.revision_id]);
+      await c.query("INSERT INTO solve_cache (revision_id, cache_key, result, created_at) VALUES (?, 'e0.1', ?, NOW(3))", [row.revision_id, JSON.stringify(old)]);
     });
     const again = await solve(1);
     const change = again.solverChange as { previousVersion: string; changes: string[] };

@@ -7,7 +7,7 @@ import { PartFields } from "@/components/parts/part-fields";
 import type { CurveKind } from "@/lib/curves";
 import { kindDefinition } from "@/lib/parts";
 import { getPartVerification } from "@/db/queries/part-verifications";
-import { loadPartPage } from "@/server/parts-api";
+import { loadPartPage } from "@/server/parts/api";
 import { formatMoney } from "@/lib/units/figures";
 
 export const metadata = { title: "Part" };

@@ -3,7 +3,7 @@ import { getPartVerification, isPartAttachment, unverifyPart, verifyPart } from 
 import { ApiError } from "@/lib/http/api-error";
 import { verifySchema } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
-import { partJson, viewerOf, visiblePart } from "@/server/parts-api";
+import { partJson, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, readJson, route } from "@/server/route";
 
 /**

@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { VERDICT_STYLE } from "@/components/budget/format";
+import { Traceable } from "@/components/budget/trace-view";
 import { ApiClientError } from "@/components/ui/fetch-json";
 import { formatInUnit } from "@/lib/units/figures";
 import type { FigureRow } from "@/lib/compare";
@@ -50,7 +51,7 @@ function Figures({ data }: { data: CompareAnswer }) {
                   const j = f.judgements[i];
                   return (
                     <td key={i} className={`py-1 pr-3 ${j && j !== "same" ? JUDGED[j] : ""}`}>
-                      {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : show(f, v)}
+                      {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={show(f, v)} trace={f.traces?.[i]} />}
                       {i > 0 && f.deltas[i] !== null && <span className="ml-1.5 text-xs">{signed(f, f.deltas[i] ?? null)}</span>}
                       {i > 0 && f.kind === "time" && j && j !== "same" && f.deltas[i] === null && <span className="ml-1.5 text-xs">{j}</span>}
                     </td>

@@ -134,7 +134,7 @@ const kpw = (value: number | null, what: string, equation: string, inputs: Trace
   trace: trace({ element: "inverse", formula: what, equation, inputs, result: q("R", what, value ?? 0, "K/W"), source, notes }),
 });
 
-const SEARCH = "lib/retrofit inverse search (Illinois regula falsi on steady solves of lib/thermal)";
+const SEARCH = "the steady heat-path model above, solved repeatedly (secant steps, then the Illinois variant of regula falsi) until the limit is met within 0.02 K; each link cites its own source";
 
 /** "What it takes": required sink resistance and the highest drive power, at frozen sources. */
 export function whatItTakes(compiled: CompiledBuild, steady: SteadyResult, limits: readonly LimitResult[], driveW: number, o: ResolvedOptions, field: string, problems: ProblemList): WhatItTakes | null {
@@ -151,7 +151,7 @@ export function whatItTakes(compiled: CompiledBuild, steady: SteadyResult, limit
       const notes = ["The emitter's heat follows Vf(Tj) during the search (linearised at this operating point); driver and cell heat held; the sink's own link replaced by a plain resistance during the search; searched over 0.001–1000 K/W (null: any sink in that range will do)."];
       const infeasible = (f: boolean) => (f ? [] : ["Even a perfect sink does not do it: the rest of the heat path is too hot."]);
       sinkToAir = {
-        presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/q across the sink's link", [], [], "lib/thermal steady solve (effective resistance at the solution)"),
+        presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/q across the sink's link", [], [], "the steady heat-path model (effective resistance ΔT/q of the sink's link at the solution; the link's own trace cites its source)"),
         forLimitKPerW: kpw(lim.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max", "find R: Tj(R) = T_j,max", inputs, [...notes, ...infeasible(lim.feasible)], SEARCH),
         forBudgetKPerW: kpw(bud.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max − margin", "find R: Tj(R) = T_j,max − margin", inputs, [...notes, ...infeasible(bud.feasible)], SEARCH),
       };

@@ -45,9 +45,9 @@ export function seriesTrace(element: string, parts: Trace[], totalKPerW: number,
 
 /** Sources named once so every trace cites them the same way. */
 export const SOURCES = {
-  trade: "common practice (LED and Li-ion trade figures, see PRODUCT.md)",
+  trade: "common practice (LED and Li-ion trade figures)",
   incropera: 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed.',
   iso13732: "ISO 13732-1:2006, Ergonomics of the thermal environment — hot surfaces, burn thresholds (values from memory of the figures; check against a copy)",
-  ohm: "Joule heating P = I²·R (Ohm's law)",
-  datasheet: "the part record (datasheet, measurement or estimate as its provenance says)",
+  ohm: "Joule's first law, P = I²·R (any physics textbook)",
+  datasheet: "as entered by the part's author (datasheet, measurement or estimate, as the part's provenance says)",
 } as const;

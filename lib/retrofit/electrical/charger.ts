@@ -82,7 +82,7 @@ export function chargePlan(charger: ResolvedPart<"charger">, count: number, pack
         inputs,
         intermediates: [q("t_CC", "CC phase", cc, "h"), q("τ", "CV time constant", tau, "h"), q("t_CV", "CV phase", cv, "h"), q("Q/I", "capacity ÷ current", qC / i / 3600, "h")],
         result: q("t", "time to full (termination)", total, "h"),
-        source: `${SOURCES.trade}; taper model stated in lib/retrofit/electrical/charger.ts`,
+        source: `${SOURCES.trade}; the taper model is stated in the notes`,
         notes: ["Cold or aged cells enter CV earlier and charge slower; the charger's own thermal regulation can stretch the CC phase."],
       }),
     },

@@ -9,7 +9,10 @@ import type { FigureRow } from "./figures";
  * Figures nothing derives (a verdict) have none.
  */
 export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildEvaluation[]): (Trace | null)[] {
-  const [scope, what = ""] = row.key.split("/", 2) as [string, string?];
+  // "mode:high/temperature:driver board": the scenario, then what (a place may hold a "/").
+  const slash = row.key.indexOf("/");
+  const scope = slash < 0 ? row.key : row.key.slice(0, slash);
+  const what = slash < 0 ? "" : row.key.slice(slash + 1);
   return evals.map((e) => {
     if (scope === "build") {
       const el = e.electrical;

@@ -14,9 +14,9 @@ type PartBody = { part: { id: string; verified: boolean; provenance: string; own
 
 describe("honest provenance: verified means checked against a cited source", () => {
   it("does not call the invented catalogue parts verified", async () => {
-    const list = await admin.get("/api/v1/parts?verified=true&pageSize=200");
+    const list = await admin.get("/api/v1/parts?verified=true&pageSize=100");
     expect(list.status).toBe(200);
-    const rows = (list.body as unknown as { parts: { name: string; provenance: string }[] }).parts;
+    const rows = (list.body as unknown as { items: { name: string; provenance: string }[] }).items;
     // Every demo catalogue part is an invented estimate: none may carry the mark.
     expect(rows.filter((p) => p.provenance === "estimate")).toEqual([]);
   });
@@ -32,7 +32,7 @@ describe("honest provenance: verified means checked against a cited source", () 
     const sid = (sheet.body as unknown as PartBody).part.id;
     const empty = await admin.request("PATCH", `/api/v1/parts/${sid}/verify`, { verified: true, against: "  " });
     expect(empty.status).toBe(400);
-    expect(empty.body.error?.message).toMatch(/^Checked against/);
+    expect(empty.body.error?.message).toMatch(/Checked against: name the datasheet/);
     expect(empty.body.error?.message).not.toMatch(/NaN|invalid|expected/i);
     expect(((await admin.get(`/api/v1/parts/${sid}`)).body as unknown as PartBody).part.verified).toBe(false);
   });

@@ -30,6 +30,10 @@ export interface Warmup {
   crossings: { limitId: LimitResult["id"]; node: string; limitC: number; timeS: number | null }[];
   /** First time every node is within 1 K of its steady temperature; null if not within the warm-up. */
   steadyWithinS: number | null;
+  /** Every step converged; Newton corrections over the run; the last step's largest heat imbalance, W. */
+  converged: boolean;
+  iterations: number;
+  residualW: number;
 }
 
 export interface WhatItTakes {
@@ -50,6 +54,8 @@ export interface ThermalResult {
   limits: LimitResult[];
   verdict: Verdict | null;
   ladder: { riseK: number; steps: LadderStep[]; remainderK: number } | null;
+  /** How the steady solve ended: converged, Newton iterations, largest heat imbalance at any node (W). */
+  solver: { converged: boolean; iterations: number; residualW: number };
 }
 
 export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, defs: readonly LimitDef[], o: ResolvedOptions): ThermalResult {
@@ -70,7 +76,8 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
     const r = breakdownRise(compiled.network, steady, top);
     ladder = { riseK: r.riseK, remainderK: r.remainderK, steps: r.steps.map((s) => ({ from: s.from, to: s.to, place: compiled.links[s.link]?.place ?? `${s.from} → ${s.to}`, deltaK: s.deltaK, watts: s.watts, kelvinPerWatt: s.kelvinPerWatt })) };
   }
-  return { nodes: compiled.nodes, links, temperaturesC: steady.temperaturesC, byPlace, energyBalanceW: steady.energyBalanceW, limits, verdict: worstVerdict(limits.map((l) => l.verdict)), ladder };
+  const solver = { converged: steady.converged, iterations: steady.iterations, residualW: steady.residualW };
+  return { nodes: compiled.nodes, links, temperaturesC: steady.temperaturesC, byPlace, energyBalanceW: steady.energyBalanceW, limits, verdict: worstVerdict(limits.map((l) => l.verdict)), ladder, solver };
 }
 
 /** Warm-up in quarters: stops after the quarter in which every node came within 1 K of steady ("60 min or until steady"). */
@@ -93,10 +100,14 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
   const crossings: (number | null)[] = maxLimits.map(() => null);
   let steadyAt: number | null = null;
   let initialC: Record<string, number> | undefined;
+  let iterations = 0;
+  let residualW = 0;
   try {
     for (let c = 0; c < WARMUP_CHUNKS && steadyAt === null; c++) {
       const t0 = c * chunkS;
       const r = solveTransient(network, { durationS: chunkS, stepS, thresholds, ...(initialC ? { initialC } : {}) }, WARMUP_SETTINGS);
+      iterations += r.iterations;
+      residualW = r.residualW;
       // Each quarter after the first starts where the last ended: skip its repeated first sample.
       for (let k = c === 0 ? 0 : 1; k < r.timesS.length; k++) {
         const t = t0 + r.timesS[k]!;
@@ -120,6 +131,9 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
       temperaturesC: temps,
       crossings: maxLimits.map((l, i) => ({ limitId: l.id, node: l.node, limitC: l.limitC, timeS: crossings[i] ?? null })),
       steadyWithinS: steadyAt,
+      converged: true,
+      iterations,
+      residualW,
     };
   } catch (err) {
     if (!isThermalInputError(err)) throw err;
@@ -134,6 +148,7 @@ const kpw = (value: number | null, what: string, equation: string, inputs: Trace
   trace: trace({ element: "inverse", formula: what, equation, inputs, result: q("R", what, value ?? 0, "K/W"), source, notes }),
 });
 
+/** The search is a method, not a source: what it leans on is the steady model, whose links cite their own sources. */
 const SEARCH = "the steady heat-path model above, solved repeatedly (secant steps, then the Illinois variant of regula falsi) until the limit is met within 0.02 K; each link cites its own source";
 
 /** "What it takes": required sink resistance and the highest drive power, at frozen sources. */

@@ -108,7 +108,11 @@ async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit
   const evaluation = evaluateRevision({ design: revision.design, records });
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
   const solverChange = await noteSolverChange(revision.id, evaluation);
-  await putCachedResult({ revisionId: revision.id, cacheKey: SOLVER_VERSION, resultJson: evaluationJson });
+  // Written after the answer leaves: a slow or failed cache write costs the next caller a
+  // recomputation, never this caller time or an error.
+  void putCachedResult({ revisionId: revision.id, cacheKey: SOLVER_VERSION, resultJson: evaluationJson }).catch((e: unknown) => {
+    console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
+  });
   return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation };
 }
 

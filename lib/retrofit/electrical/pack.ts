@@ -57,7 +57,7 @@ export function cellHeat(pack: PackSummary, packCurrentA: number): Traced {
       inputs: [q("I_pack", "pack current", packCurrentA, "A"), q("S·P", "cells", pack.cells, "1"), q("P", "cells in parallel", pack.parallel, "1"), q("R_cell", "internal resistance per cell", pack.internalResistanceOhm, "Ω")],
       intermediates: [q("I_cell", "current per cell", i, "A")],
       result: q("P_cells", "heat in the cells", w, "W"),
-      source: pack.resistanceAssumed ? `${SOURCES.ohm}; R_cell assumed 50 mΩ (from memory, a middling 18650)` : SOURCES.ohm,
+      source: pack.resistanceAssumed ? `${SOURCES.ohm}; R_cell assumed 50 mΩ (from memory of typical 18650 datasheets — check against a copy)` : SOURCES.ohm,
       notes: ["Entropic (reversible) heat is left out; it is small against I²R at lamp currents."],
     }),
   };

@@ -183,22 +183,26 @@ export function formatAgainstLimit(value: number | null | undefined, limit: numb
   const limitText = formatFigure(limit, kind, options);
   if (value === null || value === undefined || limit === null || limit === undefined || !Number.isFinite(value) || !Number.isFinite(limit)) return { value: formatFigure(value, kind, options), limit: limitText, relation: direction === "max" ? "≤" : "≥", fails: false };
   const fails = direction === "max" ? value > limit : value < limit;
-  if (!fails) return { value: formatFigure(value, kind, options), limit: limitText, relation: direction === "max" ? "≤" : "≥", fails };
-  const relation = direction === "max" ? ">" : "<";
-  const unit = RULES[kind].unit(options);
-  const withUnit = (n: string) => (unit === "" ? n : `${n} ${unit}`);
-  const limitNumber = figureNumber(limit, kind, options);
-  for (let extra = 0; extra <= 3; extra++) {
-    const n = figureNumber(value, kind, { ...options, extraDecimals: (options.extraDecimals ?? 0) + extra });
-    if (parseShown(n) !== parseShown(limitNumber)) return { value: withUnit(n), limit: limitText, relation, fails };
-  }
-  // Fails by less than a thousandth of the last digit: one step past the limit.
   const rule = RULES[kind];
-  const shownLimit = rule.scale(limit, options);
-  const decimals = rule.decimals(Math.abs(shownLimit)) + (options.extraDecimals ?? 0) + 3;
-  const step = 10 ** -decimals;
-  const beyond = (rule.scale(value, options) > shownLimit ? 1 : -1) * step + shownLimit;
-  return { value: withUnit(formatDecimal(beyond, decimals)), limit: limitText, relation, fails };
+  const unit = rule.unit(options);
+  const withUnit = (n: string) => (unit === "" ? n : `${n} ${unit}`);
+  const v = rule.scale(value, options);
+  const l = rule.scale(limit, options);
+  // Both at one precision (the finer of the two), so rounding cannot reorder them.
+  const base = Math.max(rule.decimals(Math.abs(v)), rule.decimals(Math.abs(l))) + (options.extraDecimals ?? 0);
+  if (!fails) return { value: withUnit(formatDecimal(v, base)), limit: withUnit(formatDecimal(l, base)), relation: direction === "max" ? "≤" : "≥", fails };
+  const relation = direction === "max" ? ">" : "<";
+  const beyond = (a: number, b: number) => (direction === "max" ? a > b : a < b);
+  for (let extra = 0; extra <= 3; extra++) {
+    const vt = formatDecimal(v, base + extra);
+    const lt = formatDecimal(l, base + extra);
+    if (beyond(parseShown(vt), parseShown(lt))) return { value: withUnit(vt), limit: withUnit(lt), relation, fails };
+  }
+  // Fails by less than the finest digit shown: one step past the limit as shown.
+  const d = base + 3;
+  const lt = formatDecimal(l, d);
+  const step = 10 ** -d;
+  return { value: withUnit(formatDecimal(parseShown(lt) + (direction === "max" ? step : -step), d)), limit: withUnit(lt), relation, fails };
 }
 
 /** Headroom to a limit: negative headroom (a failed limit) never prints as "0 K". */

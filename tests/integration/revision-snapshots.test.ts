@@ -17,8 +17,18 @@ const solve = async (revision: number): Promise<Solve> => {
 };
 const junction = (s: Solve) => s.evaluation.scenarios.find((x) => x.id.startsWith("mode"))?.thermal?.limits.find((l) => l.id === "junction")?.temperatureC;
 
-/** Drops the cached results of a build's revisions, so the next solve works the figures out again. */
-async function dropCachedResults(): Promise<void> {
+/**
+ * Drops the cached results of a build's revisions, so the next solve works the figures out
+ * again. The cache is written after an answer leaves: first wait for the rows of the
+ * revisions just solved, so none lands after the delete.
+ */
+async function dropCachedResults(...solved: number[]): Promise<void> {
+  const count = () =>
+    withTestDb(async (c) => {
+      const [rows] = await c.query("SELECT COUNT(DISTINCT r.number) AS n FROM solve_cache rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ? AND r.number IN (?)", [buildId, solved.length ? solved : [0]]);
+      return Number((rows as { n: number }[])[0]?.n ?? 0);
+    });
+  await expect.poll(count, { timeout: 10_000 }).toBe(solved.length);
   await withTestDb((c) => c.query("DELETE rr FROM solve_cache rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ?", [buildId]));
 }
 
@@ -41,7 +51,7 @@ describe("a saved revision never changes", () => {
     expect(edit.status).toBe(200);
 
     // Worked out again from scratch (no cached result), revision 1 still reads the same.
-    await dropCachedResults();
+    await dropCachedResults(1);
     const after = await solve(1);
     expect(after.cached).toBe(false);
     expect(JSON.stringify(after.evaluation)).toBe(JSON.stringify(before.evaluation));
@@ -66,7 +76,7 @@ describe("a saved revision never changes", () => {
 
   it("takes a snapshot for a revision saved before snapshots were kept, on its first solve", async () => {
     await withTestDb((c) => c.query("DELETE s FROM revision_part_snapshot s JOIN build_revision r ON r.id = s.revision_id WHERE r.build_id = ? AND r.number = 2", [buildId]));
-    await dropCachedResults();
+    await dropCachedResults(1, 2);
     const first = await solve(2);
     const rows = await withTestDb(async (c) => {
       const [r] = await c.query("SELECT COUNT(*) AS n FROM revision_part_snapshot s JOIN build_revision r ON r.id = s.revision_id WHERE r.build_id = ? AND r.number = 2", [buildId]);
@@ -74,7 +84,7 @@ describe("a saved revision never changes", () => {
     });
     expect(rows).toBe(Object.keys(ids).length);
     await owner.patch(`/api/v1/parts/${ids.emitter}`, { specs: { ...GOOD_PARTS.emitter.specs, rthJspKPerW: "1 K/W" } });
-    await dropCachedResults();
+    await dropCachedResults(2);
     expect(JSON.stringify((await solve(2)).evaluation)).toBe(JSON.stringify(first.evaluation));
   });
 
@@ -83,9 +93,15 @@ describe("a saved revision never changes", () => {
     expect(s.solverVersion).toMatch(/^e\d+\.\d+$/);
     expect(s.solverChange).toBeNull();
     // A result kept from an older solver, with a different junction temperature.
+    // The cache is written after the answer leaves: wait until the row is there.
+    const cachedRow = () =>
+      withTestDb(async (c) => {
+        const [rows] = await c.query("SELECT rr.revision_id, rr.result FROM solve_cache rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ? AND r.number = 1", [buildId]);
+        return (rows as { revision_id: string; result: unknown }[])[0];
+      });
+    await expect.poll(cachedRow, { timeout: 10_000 }).toBeDefined();
+    const row = (await cachedRow())!;
     await withTestDb(async (c) => {
-      const [rows] = await c.query("SELECT rr.revision_id, rr.result FROM solve_cache rr JOIN build_revision r ON r.id = rr.revision_id WHERE r.build_id = ? AND r.number = 1", [buildId]);
-      const row = (rows as { revision_id: string; result: unknown }[])[0]!;
       // The raw driver may hand the JSON column back parsed or as text.
       const old = (typeof row.result === "string" ? JSON.parse(row.result) : row.result) as Solve["evaluation"];
       for (const sc of old.scenarios) for (const l of sc.thermal?.limits ?? []) if (l.id === "junction") l.temperatureC -= 14;

@@ -38,8 +38,8 @@ export interface NodeBalance {
   node: string;
   place: string;
   temperature: DerivationQuantity;
-  /** Heat put into the node by the scenario (the sources), W. */
-  sourceW: number;
+  /** Heat put into the node by the scenario (the sources), W; null when it is a hidden value. */
+  sourceW: number | null;
   /** Heat leaving the node along each link (negative when it arrives), W. */
   flows: { link: string; other: string; watts: number }[];
   /** Heat in minus heat out; the solver drives it to round-off. */
@@ -192,13 +192,19 @@ export function hideValues(d: Derivation, hidden: readonly string[]): Derivation
   if (hidden.length === 0) return d;
   const set = new Set(hidden);
   const copy = structuredClone(d);
-  for (const q of quantities(copy)) {
-    if (q.ref && set.has(q.ref)) {
+  const all = quantities(copy);
+  // A hidden value also appears as an input of later steps (the junction temperature in the
+  // forward-voltage trace, a node's temperature in a convection trace): the same number
+  // there is blanked too, or the question would answer itself.
+  const secret = new Set(all.filter((q) => q.ref && set.has(q.ref) && q.value !== null).map((q) => q.value));
+  for (const q of all) {
+    if ((q.ref && set.has(q.ref)) || secret.has(q.value)) {
       q.value = null;
       q.hidden = true;
     }
   }
-  // The node balances list heat flows, not temperatures: they stay.
+  // A node's source is the heat of a step above (the driver's loss): blanked with it.
+  for (const n of copy.network) if (secret.has(n.sourceW)) n.sourceW = null;
   if (copy.limits.some((l) => l.headroom.hidden || l.temperature.hidden)) copy.verdict = { value: null, hidden: true };
   return copy;
 }

@@ -112,3 +112,49 @@ export function DerivationView({ derivation: d, exampleId, hiddenKeys, open = fa
     </div>
   );
 }
+
+function inputsLine(step: DerivationStep): string {
+  return step.inputs.map((q) => `${q.symbol} = ${q.hidden ? "?" : fmtValue(q.value, q.unit)}`).join(", ");
+}
+
+function valueText(q: DerivationQuantity): string {
+  return q.hidden ? "____" : fmtValue(q.value, q.unit);
+}
+
+/** The handout's derivation: the same steps, each in two or three printed lines, blanks for the questions. */
+export function HandoutDerivation({ derivation: d }: { derivation: Derivation }) {
+  const step = (s: DerivationStep) => (
+    <li key={s.key} className="break-inside-avoid">
+      <strong>{s.title}</strong> — {s.formula}: <Tex tex={s.tex} fallback={s.equation} /> → <span className="font-mono">{s.result.symbol} = {valueText(s.result)}</span>
+      {s.inputs.length > 0 && <div className="text-ink-soft">{inputsLine(s)}</div>}
+      <div className="text-[0.9em] italic text-ink-soft">{s.source}</div>
+    </li>
+  );
+  return (
+    <div className="handout-derivation space-y-2 text-xs">
+      <p>Scenario: <strong>{d.scenarioName}</strong>{d.ambientC !== null && <> · surrounding air {fmtValue(d.ambientC, "°C")}</>}</p>
+      <h3 className="font-medium">1. Heat from the electrical side</h3>
+      <ol className="step-list space-y-1">{d.heat.map(step)}</ol>
+      <h3 className="font-medium">2. Each link&apos;s resistance</h3>
+      <ol className="step-list space-y-1">{d.links.map(step)}</ol>
+      <h3 className="font-medium">3. The network solution: each node&apos;s balance (heat in = heat out)</h3>
+      <ul className="step-list space-y-0.5">
+        {d.network.map((n) => (
+          <li key={n.key} className="break-inside-avoid">
+            <strong>{n.place}</strong>: T = <span className="font-mono">{valueText(n.temperature)}</span>; put in {n.sourceW === null ? "____" : fmtValue(n.sourceW, "W")}
+            {n.flows.length > 0 && <>; {n.flows.map((f) => `${f.watts >= 0 ? "to" : "from"} ${f.other} ${fmtValue(Math.abs(f.watts), "W")}`).join(", ")}</>}
+          </li>
+        ))}
+      </ul>
+      <h3 className="font-medium">4. Limits and the verdict</h3>
+      <ul className="space-y-0.5">
+        {d.limits.map((l) => (
+          <li key={l.key}>
+            <strong>{l.place}</strong>{l.kind === "min" ? " (lower limit)" : ""}: {valueText(l.temperature)} against {fmtValue(l.limit.value, "°C")}, headroom {valueText(l.headroom)} <span className="italic text-ink-soft">({l.source})</span>
+          </li>
+        ))}
+      </ul>
+      <p>Verdict: <strong>{d.verdict.hidden ? "____" : (d.verdict.value ?? "–")}</strong> <span className="text-ink-soft">(within budget: ≥ 10 K headroom on every limit; tight: 0–10 K; over budget: a limit exceeded)</span></p>
+    </div>
+  );
+}

@@ -1,6 +1,6 @@
 import "./handout.css";
 import { notFound } from "next/navigation";
-import { DerivationView } from "@/components/classes/derivation-view";
+import { HandoutDerivation } from "@/components/classes/derivation-view";
 import { Markdown } from "@/components/classes/markdown";
 import { PrintButton } from "@/components/ui/print-button";
 import { requirePageUser } from "@/server/auth/session";
@@ -28,7 +28,7 @@ export default async function HandoutPage({ params }: { params: Promise<{ id: st
         <p className="text-xs text-ink-soft">{cls.name}{cls.term ? ` · ${cls.term}` : ""} · revision {view.example.revision} of “{view.example.buildTitle}” · {view.example.authorName}</p>
       </header>
       {view.example.narrative.trim() && <Markdown text={view.example.narrative} />}
-      {view.derivation && <DerivationView derivation={view.derivation} exampleId={null} open />}
+      {view.derivation && <HandoutDerivation derivation={view.derivation} />}
       <p className="text-[10px] text-ink-soft">Estimates from the build&apos;s parts; a thermocouple test of the real build is the final word. Sinkwise.</p>
     </article>
   );

@@ -39,7 +39,10 @@ export function ElectricalPanel({ evaluation }: { evaluation: Evaluation }) {
       </dl>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="text-ink-soft">Charging</dt>
-        <dd>{charge ? `${charge.chargers} × charger, ${fig(charge.currentA, "current")}` : "no charger in the build"}</dd>
+        <dd>
+          {charge ? `${charge.chargers} × charger, ${fig(charge.currentA, "current")}` : "no charger in the build"}
+          {charge?.throttle && <span className="text-tight">{` — held down from ${fig(charge.ratedCurrentA, "current")} by the chips' ${fig(charge.throttle.regulationC, "temperature")} die regulation (full in ${formatDuration(charge.throttle.ratedHours * 3600)} otherwise)`}</span>}
+        </dd>
         {charge && (
           <>
             <dt className="text-ink-soft">Constant-current phase</dt>

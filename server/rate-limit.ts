@@ -32,11 +32,6 @@ function limiters(): Limiters {
   return holder.sinkwiseLimiters;
 }
 
-export function clientAddress(request: Request): string {
-  const forwarded = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return forwarded || request.headers.get("x-real-ip") || "unknown";
-}
-
 function tooMany(res: RateLimiterRes | null): ApiError {
   const minutes = Math.max(1, Math.ceil((res?.msBeforeNext ?? WINDOW_S * 1000) / 60_000));
   return new ApiError(
@@ -45,27 +40,27 @@ function tooMany(res: RateLimiterRes | null): ApiError {
   );
 }
 
-/** Throws 429 when the account or the address has used up its failed attempts. */
-export async function assertSignInAllowed(email: string, address: string): Promise<void> {
+/**
+ * Takes one attempt from the account's and the address's allowance BEFORE the password is
+ * checked: the database counts atomically, so however many guesses arrive at once, at most
+ * the allowance of them is ever checked. Throws 429 when either allowance is used up.
+ */
+export async function consumeSignInAttempt(email: string, address: string): Promise<void> {
   const l = limiters();
-  const [acct, addr] = await Promise.all([l.account.get(email), l.address.get(address)]);
-  if (acct && acct.consumedPoints >= PER_ACCOUNT) throw tooMany(acct);
-  if (addr && addr.consumedPoints >= PER_ADDRESS) throw tooMany(addr);
+  const results = await Promise.allSettled([l.account.consume(email), l.address.consume(address)]);
+  for (const result of results) {
+    if (result.status === "rejected") {
+      if (result.reason instanceof RateLimiterRes) throw tooMany(result.reason);
+      throw result.reason;
+    }
+  }
 }
 
-export async function recordSignInFailure(email: string, address: string): Promise<void> {
+/**
+ * After a right password the attempt is given back. Earlier failures stay counted for their
+ * window: forgetting them here would hand fresh guesses to a burst still in flight.
+ */
+export async function signInSucceeded(email: string, address: string): Promise<void> {
   const l = limiters();
-  await Promise.all([
-    l.account.consume(email).catch((e: unknown) => ignoreLimit(e)),
-    l.address.consume(address).catch((e: unknown) => ignoreLimit(e)),
-  ]);
-}
-
-export async function clearSignInFailures(email: string): Promise<void> {
-  await limiters().account.delete(email);
-}
-
-function ignoreLimit(e: unknown): void {
-  // consume() rejects with a RateLimiterRes once the limit is reached: that is expected.
-  if (!(e instanceof RateLimiterRes)) throw e;
+  await Promise.all([l.account.reward(email, 1), l.address.reward(address, 1)]);
 }

@@ -2,7 +2,7 @@ import { createAttachment, listAttachments } from "@/db/queries/part-attachments
 import { ApiError } from "@/lib/http/api-error";
 import { ATTACHMENT_TYPES, describeRefusedType, MAX_ATTACHMENT_BYTES, sanitiseFilename, sniffAttachmentType } from "@/lib/attachments";
 import { requireUser } from "@/server/auth/session";
-import { attachmentJson, readUpload } from "@/server/attachments";
+import { attachmentJson, readUpload, uploadLimit } from "@/server/attachments";
 import { currentViewer, editablePart, viewerOf, visiblePart } from "@/server/parts-api";
 import { json, route } from "@/server/route";
 import { newObjectKey, putObject } from "@/server/storage";
@@ -40,4 +40,4 @@ export const POST = route<Context>(async (request, { params }) => {
     sizeBytes: bytes.byteLength,
   });
   return json({ attachment: attachmentJson(row) }, 201);
-});
+}, uploadLimit("file"));

@@ -49,9 +49,18 @@ export function attachmentJson(row: AttachmentRecord) {
 
 export type AttachmentJson = ReturnType<typeof attachmentJson>;
 
-/** PDFs and images open in the browser; the name is ASCII-only plus an RFC 6266 UTF-8 form. */
+/**
+ * Every stored file downloads (Content-Disposition: attachment), except an image, which is
+ * shown inline under a sandboxing policy that lets it be nothing but an image.
+ */
 export function contentDisposition(filename: string, contentType: string): string {
-  const inline = contentType === "application/pdf" || contentType.startsWith("image/");
   const ascii = filename.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
-  return `${inline ? "inline" : "attachment"}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(filename)}`;
+  return `${isInlineImage(contentType) ? "inline" : "attachment"}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(filename)}`;
 }
+
+export function isInlineImage(contentType: string): boolean {
+  return contentType === "image/png" || contentType === "image/jpeg" || contentType === "image/webp";
+}
+
+/** The policy a stored file is served under: no scripts, no forms, no plugins, no framing. */
+export const ATTACHMENT_CSP = "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; sandbox; frame-ancestors 'none'";

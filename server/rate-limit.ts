@@ -10,7 +10,12 @@ const WINDOW_S = 15 * 60;
 const PER_ACCOUNT = 5;
 const PER_ADDRESS = 20;
 
-type Limiters = { account: RateLimiterMySQL; address: RateLimiterMySQL };
+// Reset mails: a few per address an hour (a person retrying), more per client address.
+const RESET_WINDOW_S = 60 * 60;
+const RESET_PER_EMAIL = 3;
+const RESET_PER_CLIENT = 20;
+
+type Limiters = { account: RateLimiterMySQL; address: RateLimiterMySQL; resetEmail: RateLimiterMySQL; resetClient: RateLimiterMySQL };
 const holder = globalThis as unknown as { sinkwiseLimiters?: Limiters };
 
 function limiters(): Limiters {
@@ -27,6 +32,8 @@ function limiters(): Limiters {
     holder.sinkwiseLimiters = {
       account: new RateLimiterMySQL({ ...common, keyPrefix: "signin_account", points: PER_ACCOUNT }),
       address: new RateLimiterMySQL({ ...common, keyPrefix: "signin_address", points: PER_ADDRESS }),
+      resetEmail: new RateLimiterMySQL({ ...common, keyPrefix: "reset_email", points: RESET_PER_EMAIL, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
+      resetClient: new RateLimiterMySQL({ ...common, keyPrefix: "reset_client", points: RESET_PER_CLIENT, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
     };
   }
   return holder.sinkwiseLimiters;
@@ -63,4 +70,22 @@ export async function consumeSignInAttempt(email: string, address: string): Prom
 export async function signInSucceeded(email: string, address: string): Promise<void> {
   const l = limiters();
   await Promise.all([l.account.reward(email, 1), l.address.reward(address, 1)]);
+}
+
+/**
+ * Takes one reset request from the address's and the client's hourly allowance. Keyed on
+ * the address as typed, so the answer is the same whether or not an account uses it.
+ */
+export async function consumeResetRequest(email: string, client: string): Promise<void> {
+  const l = limiters();
+  const results = await Promise.allSettled([l.resetEmail.consume(email), l.resetClient.consume(client)]);
+  for (const result of results) {
+    if (result.status === "rejected") {
+      if (result.reason instanceof RateLimiterRes) {
+        const minutes = Math.max(1, Math.ceil(result.reason.msBeforeNext / 60_000));
+        throw new ApiError("rate_limited:reset", `Too many reset requests. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`);
+      }
+      throw result.reason;
+    }
+  }
 }

@@ -171,7 +171,7 @@ export function parsePartsCsv(text: string, kind: PartKind): CsvImport {
     }
     const row: Record<string, string> = {};
     columns.forEach((column, i) => {
-      if (column) row[column.header] = cells[i] ?? "";
+      if (column) row[column.header] = unquoteFormulaCell(cells[i] ?? "");
     });
     rows.push(parsePartRow(row, kind, line, present));
   });
@@ -197,9 +197,21 @@ export function partToCsvRow(part: Part | PartInput): Record<string, string> {
   );
 }
 
-/** Parts of one kind → CSV text with the kind's header. */
+/**
+ * Cells a spreadsheet would run as a formula start with one of these (OWASP, "CSV
+ * Injection"). On export such a cell gets a leading single quote, the usual spreadsheet-safe
+ * form; the import takes that quote off again, so a file round-trips unchanged.
+ */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/** The import's half of the formula guard: "'-40" (as exported) reads as "-40". */
+export function unquoteFormulaCell(cell: string): string {
+  return cell.startsWith("'") && FORMULA_START.test(cell.slice(1)) ? cell.slice(1) : cell;
+}
+
+/** Parts of one kind → CSV text with the kind's header; formula-like cells are neutralised. */
 export function partsToCsv(parts: readonly (Part | PartInput)[], kind: PartKind): string {
   const headers = csvHeaders(kind);
   const rows = parts.filter((p) => p.kind === kind).map((p) => headers.map((h) => partToCsvRow(p)[h] ?? ""));
-  return Papa.unparse({ fields: headers, data: rows });
+  return Papa.unparse({ fields: headers, data: rows }, { escapeFormulae: FORMULA_START });
 }

@@ -1,6 +1,6 @@
 import { createAttachment, listAttachments } from "@/db/queries/part-attachments";
 import { ApiError } from "@/lib/http/api-error";
-import { ATTACHMENT_TYPES, describeRefusedType, MAX_ATTACHMENT_BYTES, sanitiseFilename, sniffAttachmentType } from "@/lib/attachments";
+import { ATTACHMENT_TYPES, inspectAttachment, MAX_ATTACHMENT_BYTES, sanitiseFilename } from "@/lib/attachments";
 import { requireUser } from "@/server/auth/session";
 import { attachmentJson, readUpload, uploadLimit } from "@/server/attachments";
 import { currentViewer, editablePart, viewerOf, visiblePart } from "@/server/parts-api";
@@ -26,8 +26,9 @@ export const POST = route<Context>(async (request, { params }) => {
   if (bytes.byteLength > MAX_ATTACHMENT_BYTES) {
     throw new ApiError("payload_too_large:file", `file: ${file.name || "the file"} is over the 10 MB limit`, "file");
   }
-  const type = sniffAttachmentType(bytes);
-  if (!type) throw new ApiError("bad_request:file", `file: ${describeRefusedType(bytes)}`, "file");
+  const inspection = await inspectAttachment(bytes);
+  if (!inspection.ok) throw new ApiError("bad_request:file", `file: ${inspection.message}`, "file");
+  const { type } = inspection;
   const { contentType } = ATTACHMENT_TYPES[type];
   const key = newObjectKey(id);
   await putObject({ key, body: bytes, contentType });

@@ -1,5 +1,5 @@
 import "server-only";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { PEER_HEADER } from "./front-door";
 
 /** "::ffff:127.0.0.1" (an IPv4 peer of a dual-stack socket) is 127.0.0.1. */

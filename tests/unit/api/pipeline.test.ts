@@ -2,7 +2,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
 import { PEER_HEADER, badPathSegment } from "@/server/http/front-door";
 import { resolveClientAddress } from "@/server/http/client-address";
 
-// The route wrapper reads TRUSTED_PROXY through lib/env, parsed once per module load.
+// The route wrapper reads TRUSTED_PROXY through server/env, parsed once per module load.
 async function loadRoute(trusted: string) {
   vi.resetModules();
   vi.stubEnv("TRUSTED_PROXY", trusted);

@@ -1,7 +1,7 @@
 import { after } from "next/server";
 import { createPasswordResetToken, getUserByEmail } from "@/db/queries/users";
 import { resetRequestSchema } from "@/lib/auth/schemas";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { clientAddress } from "@/server/http/client-address";
 import { sendMail } from "@/server/mail";
 import { consumeResetRequest } from "@/server/rate-limit";

@@ -4,7 +4,7 @@ import { ApiError, fromZodError } from "@/lib/http/api-error";
 import { PART_SCHEMAS, partPatchSchema } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
 import { partUsageFor } from "@/server/builds/load";
-import { currentViewer, editablePart, partJson, toPartInput, viewerOf, visiblePart } from "@/server/parts-api";
+import { currentViewer, editablePart, partJson, toPartInput, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, readJson, route } from "@/server/route";
 import { deleteObject } from "@/server/storage";
 

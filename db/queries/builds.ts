@@ -208,8 +208,7 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
     .from(revisionParts)
     .innerJoin(buildRevisions, eq(buildRevisions.id, revisionParts.revisionId))
     .innerJoin(builds, eq(builds.id, buildRevisions.buildId))
-    .where(eq(revisionParts.partId, partId))
-    .limit(50);
+    .where(eq(revisionParts.partId, partId));
 }
 
 /** The cached result as stored JSON text, so a cache hit is sent without parsing it. */

@@ -91,7 +91,10 @@ export async function getPreviousResultText({ revisionId, solverVersion }: { rev
     .where(and(eq(solveCache.revisionId, revisionId), eq(solveCache.cacheKey, key)))
     .limit(1);
   const row = rows[0];
-  return row ? { solverVersion: key.split(":")[0] ?? key, text: String(row.result) } : undefined;
+  if (!row) return undefined;
+  // The driver may hand a JSON column back parsed (MariaDB reports its type) or as text.
+  const value: unknown = row.result;
+  return { solverVersion: key.split(":")[0] ?? key, text: typeof value === "string" ? value : JSON.stringify(value) };
 }
 
 export interface SolverChange {

@@ -119,7 +119,10 @@ describe("the whole flow", () => {
     // Revealed by the instructor: the student sees the values.
     expect((await instructor.patch(`/api/v1/examples/${exampleId}`, { reveal: true })).status).toBe(200);
     const revealed = body<Derivation>(await student.get(`/api/v1/examples/${exampleId}`), "derivation");
-    expect(revealed.network.find((n) => n.node === "junction")!.temperature.value).toBeCloseTo(truth, 6);
+    // The first answer may be worked out afresh and a later one read from the stored result, which keeps
+    // 7 significant digits: the revealed value is the same figure to that precision.
+    const shown = revealed.network.find((n) => n.node === "junction")!.temperature.value!;
+    expect(Math.abs(shown - truth)).toBeLessThanOrEqual(Math.abs(truth) * 1e-6);
 
     // Fork with one click; Side by side opens with the example and the fork.
     const fork = await student.post(`/api/v1/examples/${exampleId}/fork`);

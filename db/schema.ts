@@ -538,3 +538,20 @@ export const handins = mysqlTable(
   },
   (t) => [index("handin_exercise_student_idx").on(t.exerciseId, t.studentId, t.submittedAt), index("handin_build_idx").on(t.buildId)],
 );
+
+/**
+ * A sign-up waiting for its owner to open the link mailed to the address: the account is made
+ * only then, so the sign-up answer is the same whether or not the address already has one.
+ * Only the token's hash and the password's hash are stored.
+ */
+export const signupRequests = mysqlTable(
+  "signup_request",
+  {
+    tokenHash: varchar("token_hash", { length: 64 }).primaryKey(),
+    email: varchar("email", { length: 254 }).notNull(),
+    displayName: varchar("display_name", { length: 120 }).notNull(),
+    passwordHash: varchar("password_hash", { length: 255 }).notNull(),
+    expiresAt: datetime("expires_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("signup_request_email_idx").on(t.email)],
+);

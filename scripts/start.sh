@@ -43,7 +43,7 @@ cat <<MSG
     student1@sinkwise.test    student in the evening course: hand-in with feedback
     student2@sinkwise.test    student in the evening course: a late hand-in
 
-  E-mail inbox (password reset mails land here): $MAIL_INBOX_URL
+  E-mail inbox (sign-up and password reset mails land here): $MAIL_INBOX_URL
   Press Ctrl-C to stop.
 
 MSG

@@ -15,7 +15,14 @@ const RESET_WINDOW_S = 60 * 60;
 const RESET_PER_EMAIL = 3;
 const RESET_PER_CLIENT = 20;
 
-type Limiters = { account: RateLimiterMySQL; address: RateLimiterMySQL; resetEmail: RateLimiterMySQL; resetClient: RateLimiterMySQL };
+type Limiters = {
+  account: RateLimiterMySQL;
+  address: RateLimiterMySQL;
+  resetEmail: RateLimiterMySQL;
+  resetClient: RateLimiterMySQL;
+  signupEmail: RateLimiterMySQL;
+  signupClient: RateLimiterMySQL;
+};
 const holder = globalThis as unknown as { sinkwiseLimiters?: Limiters };
 
 function limiters(): Limiters {
@@ -34,6 +41,8 @@ function limiters(): Limiters {
       address: new RateLimiterMySQL({ ...common, keyPrefix: "signin_address", points: PER_ADDRESS }),
       resetEmail: new RateLimiterMySQL({ ...common, keyPrefix: "reset_email", points: RESET_PER_EMAIL, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
       resetClient: new RateLimiterMySQL({ ...common, keyPrefix: "reset_client", points: RESET_PER_CLIENT, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
+      signupEmail: new RateLimiterMySQL({ ...common, keyPrefix: "signup_email", points: RESET_PER_EMAIL, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
+      signupClient: new RateLimiterMySQL({ ...common, keyPrefix: "signup_client", points: RESET_PER_CLIENT, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
     };
   }
   return holder.sinkwiseLimiters;
@@ -73,17 +82,20 @@ export async function signInSucceeded(email: string, address: string): Promise<v
 }
 
 /**
- * Takes one reset request from the address's and the client's hourly allowance. Keyed on
- * the address as typed, so the answer is the same whether or not an account uses it.
+ * Takes one mail request (a reset link or a sign-up link) from the address's and the client's
+ * hourly allowance. Keyed on the address as typed, so the answer is the same whether or not an
+ * account uses it.
  */
-export async function consumeResetRequest(email: string, client: string): Promise<void> {
+export async function consumeMailRequest(kind: "reset" | "signup", email: string, client: string): Promise<void> {
   const l = limiters();
-  const results = await Promise.allSettled([l.resetEmail.consume(email), l.resetClient.consume(client)]);
+  const [byEmail, byClient] = kind === "reset" ? [l.resetEmail, l.resetClient] : [l.signupEmail, l.signupClient];
+  const results = await Promise.allSettled([byEmail.consume(email), byClient.consume(client)]);
   for (const result of results) {
     if (result.status === "rejected") {
       if (result.reason instanceof RateLimiterRes) {
         const minutes = Math.max(1, Math.ceil(result.reason.msBeforeNext / 60_000));
-        throw new ApiError("rate_limited:reset", `Too many reset requests. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`);
+        const what = kind === "reset" ? "reset requests" : "sign-up requests";
+        throw new ApiError(`rate_limited:${kind}`, `Too many ${what}. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`);
       }
       throw result.reason;
     }

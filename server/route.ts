@@ -5,7 +5,9 @@ import type { z } from "zod";
 import { isDatabaseDown } from "@/db/client";
 import { ApiError, formatIssuePath, fromZodError } from "@/lib/http/api-error";
 import { isThermalInputError } from "@/lib/thermal";
+import { env } from "@/server/env";
 import { fromTrustedProxy } from "@/server/http/client-address";
+import { withSecurityHeaders } from "@/server/http/security-headers";
 
 /** Every body is at most this unless its route says otherwise (uploads). */
 export const MAX_BODY_BYTES = 1_000_000;
@@ -47,7 +49,8 @@ export function route<C = unknown>(handler: Handler<C>, options: RouteOptions = 
     bytes,
     refuse: custom ? () => new ApiError(`payload_too_large:${custom.field}`, custom.message, custom.field) : () => tooLarge(bytes),
   };
-  return async (request, context) => {
+  return async (request, context) => withSecurityHeaders(await pipeline(request, context), { https: env().APP_URL.startsWith("https://") });
+  async function pipeline(request: Request, context: C): Promise<Response> {
     try {
       if (!options.stateless && !["GET", "HEAD", "OPTIONS"].includes(request.method)) assertSameOrigin(request);
       const declared = Number(request.headers.get("content-length") ?? "");
@@ -57,7 +60,7 @@ export function route<C = unknown>(handler: Handler<C>, options: RouteOptions = 
     } catch (error) {
       return errorResponse(error);
     }
-  };
+  }
 }
 
 export function errorResponse(error: unknown): Response {

@@ -2,7 +2,7 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import { db, mysqlErrorCode } from "../client";
-import { passwordResetTokens, type Role, userSessions, users } from "../schema";
+import { passwordResetTokens, type Role, signupRequests, userSessions, users } from "../schema";
 
 export type UserRow = typeof users.$inferSelect;
 export type PublicUser = Omit<UserRow, "passwordHash">;
@@ -108,5 +108,38 @@ export async function consumePasswordResetToken({
     // Every other link still out for this account stops working: one reset closes them all.
     await tx.delete(passwordResetTokens).where(and(eq(passwordResetTokens.userId, row.userId), isNull(passwordResetTokens.usedAt)));
     return "ok";
+  });
+}
+
+/** Keeps a sign-up until its link is opened (one day); only the token's hash is stored. */
+export async function createSignupRequest(input: { email: string; displayName: string; passwordHash: string }): Promise<string> {
+  const token = randomBytes(32).toString("base64url");
+  await db()
+    .insert(signupRequests)
+    .values({ tokenHash: hashToken(token), ...input, expiresAt: new Date(Date.now() + 24 * 3600_000) });
+  return token;
+}
+
+export type SignupOutcome = { status: "ok"; userId: string } | { status: "unknown" | "expired" | "taken" };
+
+/**
+ * Makes the account of a sign-up link, once: the request is removed with every other one for
+ * the same address. "taken" when the address got an account meanwhile.
+ */
+export async function completeSignupRequest({ token }: { token: string }): Promise<SignupOutcome> {
+  return db().transaction(async (tx) => {
+    const rows = await tx.select().from(signupRequests).where(eq(signupRequests.tokenHash, hashToken(token))).for("update");
+    const row = rows[0];
+    if (!row) return { status: "unknown" };
+    await tx.delete(signupRequests).where(eq(signupRequests.email, row.email));
+    if (row.expiresAt.getTime() <= Date.now()) return { status: "expired" };
+    const id = newId();
+    try {
+      await tx.insert(users).values({ id, email: row.email, displayName: row.displayName, passwordHash: row.passwordHash, role: "maker", createdAt: new Date() });
+    } catch (error) {
+      if (mysqlErrorCode(error) === "ER_DUP_ENTRY") return { status: "taken" };
+      throw error;
+    }
+    return { status: "ok", userId: id };
   });
 }

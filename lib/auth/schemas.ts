@@ -34,6 +34,10 @@ export const resetConfirmSchema = z.object({
   password: newPassword,
 });
 
+export const signupConfirmSchema = z.object({
+  token: z.string({ error: "The sign-up link is missing its token." }).min(10, { error: "The sign-up link is incomplete; open it from the mail again." }).max(200, { error: "The sign-up link is not one we sent." }),
+});
+
 export const roleChangeSchema = z.object({
   role: z.enum(ROLE_NAMES, { error: `Role must be one of ${ROLE_NAMES.join(", ")}.` }),
 });

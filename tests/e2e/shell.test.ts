@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
 import { BASE_URL, Client, uniqueEmail } from "../support/http";
+import { signUp, waitForMail } from "../support/mail";
 
 let session: Awaited<ReturnType<typeof launch>>;
 
@@ -36,7 +37,7 @@ describe("the app shell in chromium", () => {
 
   it("lets the admin change a user's role on the admin page", async () => {
     const email = uniqueEmail("e2e-role");
-    await new Client().post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "Role Candidate" });
+    await signUp(new Client(), { email, password: "long enough pw", displayName: "Role Candidate" });
     const page = await session.browser.newPage();
     await signInThroughForm(page, "admin@sinkwise.test");
     await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Admin" }).click();
@@ -59,6 +60,25 @@ describe("the app shell in chromium", () => {
     await page.getByLabel(/Password/).fill("short");
     await page.getByRole("button", { name: "Create account" }).click();
     await expect.poll(() => page.locator("form [role=alert]").textContent()).toContain("at least 10 characters");
+    await page.close();
+  });
+
+  it("signs up through the mailed link: the form says to check the mail, the link's button makes the account", async () => {
+    const page = await session.browser.newPage();
+    const email = uniqueEmail("form-link");
+    await page.goto(`${BASE_URL}/signup`);
+    await page.getByLabel("Name").fill("Link Maker");
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel(/Password/).fill("long enough pw");
+    await page.getByRole("button", { name: "Create account" }).click();
+    await expect.poll(() => page.getByRole("status").textContent()).toContain(`Check the mail of ${email}`);
+    const mail = await waitForMail(email, "Finish making your Sinkwise account");
+    const link = /http\S+\/signup\/finish\/[A-Za-z0-9_-]+/.exec(mail.text ?? "")?.[0];
+    expect(link).toBeTruthy();
+    await page.goto(link!);
+    await page.getByRole("button", { name: "Make my account" }).click();
+    await page.waitForURL(/\/builds/);
+    await page.screenshot({ path: `${ARTEFACTS}/shell-signup-finished.png`, fullPage: true });
     await page.close();
   });
 });

@@ -1,13 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { BASE_URL, Client, signedIn, uniqueEmail } from "../support/http";
 import { withTestDb } from "../support/db";
-import { waitForMail } from "../support/mail";
+import { waitForMail, signUp } from "../support/mail";
 
 describe("sign-up, sign-in, me, sign-out", () => {
   it("walks the whole session life cycle", async () => {
     const email = uniqueEmail("cycle");
     const client = new Client();
-    const up = await client.post("/api/v1/auth/signup", { email, password: "correct horse 1", displayName: "Tess Ide" });
+    const up = await signUp(client, { email, password: "correct horse 1", displayName: "Tess Ide" });
     expect(up.status).toBe(201);
     expect(up.body.user?.role).toBe("maker");
 
@@ -26,7 +26,7 @@ describe("sign-up, sign-in, me, sign-out", () => {
   it("sets the session cookie HttpOnly, SameSite=Lax, path / and not Secure over http", async () => {
     const email = uniqueEmail("cookie");
     const client = new Client();
-    const r = await client.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "C" });
+    const r = await signUp(client, { email, password: "long enough pw", displayName: "C" });
     const cookie = r.headers.getSetCookie().find((c) => c.startsWith("sinkwise_session="));
     expect(cookie).toBeDefined();
     expect(cookie).toMatch(/HttpOnly/i);
@@ -38,22 +38,62 @@ describe("sign-up, sign-in, me, sign-out", () => {
 
   it("refuses bad sign-ups with a message naming the field, and writes nothing", async () => {
     const client = new Client();
-    const badEmail = await client.post("/api/v1/auth/signup", { email: "not-an-address", password: "long enough pw", displayName: "X" });
+    const badEmail = await signUp(client, { email: "not-an-address", password: "long enough pw", displayName: "X" });
     expect(badEmail.status).toBe(400);
     expect(badEmail.body.error?.path).toBe("email");
     expect(badEmail.body.error?.message).toMatch(/valid e-mail/);
 
     const email = uniqueEmail("short");
-    const short = await client.post("/api/v1/auth/signup", { email, password: "short", displayName: "X" });
+    const short = await signUp(client, { email, password: "short", displayName: "X" });
     expect(short.status).toBe(400);
     expect(short.body.error?.path).toBe("password");
     expect(short.body.error?.message).toMatch(/at least 10 characters/);
     // Nothing was written: the address is still free to sign up with.
-    expect((await new Client().post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "X" })).status).toBe(201);
+    expect((await signUp(new Client(), { email, password: "long enough pw", displayName: "X" })).status).toBe(201);
 
-    const taken = await new Client().post("/api/v1/auth/signup", { email, password: "another long pw", displayName: "Y" });
-    expect(taken.status).toBe(409);
-    expect(taken.body.error?.path).toBe("email");
+  });
+
+  it("answers a sign-up of a taken address exactly as one of a free address, and mails the owner instead", async () => {
+    const taken = uniqueEmail("taken");
+    expect((await signUp(new Client(), { email: taken, password: "long enough pw", displayName: "Owner" })).status).toBe(201);
+    const free = uniqueEmail("free");
+    const again = await new Client().post("/api/v1/auth/signup", { email: taken, password: "another long pw", displayName: "Y" });
+    const fresh = await new Client(BASE_URL, "203.0.113.61").post("/api/v1/auth/signup", { email: free, password: "another long pw", displayName: "Y" });
+    expect(again.status).toBe(202);
+    expect(fresh.status).toBe(202);
+    expect(again.body.message).toBe(String(fresh.body.message).replace(free, taken));
+    expect(Object.keys(again.body).sort()).toEqual(Object.keys(fresh.body).sort());
+    // The owner learns of it; the free address gets its link; no second account for the taken one.
+    const note = await waitForMail(taken, "Someone tried to make a Sinkwise account");
+    expect(note.text).toContain("/reset");
+    await waitForMail(free, "Finish making your Sinkwise account");
+    const accounts = await withTestDb(async (c) => {
+      const [rows] = await c.query("SELECT COUNT(*) AS n FROM user WHERE email = ?", [taken]);
+      return Number((rows as { n: number }[])[0]?.n);
+    });
+    expect(accounts).toBe(1);
+  });
+
+  it("makes the account only when the mailed link is used, once", async () => {
+    const email = uniqueEmail("link-once");
+    const client = new Client();
+    expect((await client.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "Once" })).status).toBe(202);
+    expect((await new Client().post("/api/v1/auth/signin", { email, password: "long enough pw" })).status).toBe(401);
+    const mail = await waitForMail(email, "Finish making your Sinkwise account");
+    const token = /\/signup\/finish\/([A-Za-z0-9_-]+)/.exec(mail.text ?? "")?.[1] ?? "";
+    const stored = await withTestDb(async (c) => {
+      const [rows] = await c.query("SELECT token_hash AS h FROM signup_request WHERE email = ?", [email]);
+      return (rows as { h: string }[]).map((r) => r.h);
+    });
+    expect(stored).toHaveLength(1);
+    expect(stored[0]).not.toContain(token);
+    const made = await client.post("/api/v1/auth/signup-confirm", { token });
+    expect(made.status).toBe(201);
+    expect((await client.get("/api/v1/me")).body.user?.email).toBe(email);
+    const twice = await new Client().post("/api/v1/auth/signup-confirm", { token });
+    expect(twice.status).toBe(400);
+    expect(twice.body.error?.message).toMatch(/already been used/);
+    expect((await new Client().post("/api/v1/auth/signup-confirm", { token: "x".repeat(43) })).status).toBe(400);
   });
 
   it("gives one message for a wrong password and an unknown account", async () => {
@@ -80,7 +120,7 @@ describe("origin check", () => {
     expect(r.status).toBe(403);
     expect(r.body.error?.code).toBe("forbidden:origin");
     const none = new Client(null);
-    expect((await none.post("/api/v1/auth/signup", { email: uniqueEmail("o"), password: "long enough pw", displayName: "O" })).status).toBe(403);
+    expect((await signUp(none, { email: uniqueEmail("o"), password: "long enough pw", displayName: "O" })).status).toBe(403);
   });
 });
 
@@ -100,7 +140,7 @@ describe("roles", () => {
   it("lets an admin change a role, validating the role name", async () => {
     const email = uniqueEmail("promote");
     const user = new Client();
-    const up = await user.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "P" });
+    const up = await signUp(user, { email, password: "long enough pw", displayName: "P" });
     const id = up.body.user?.id ?? "";
     const admin = await signedIn("admin@sinkwise.test");
     const bad = await admin.patch(`/api/v1/admin/users/${id}`, { role: "wizard" });
@@ -116,7 +156,7 @@ describe("roles", () => {
 describe("rate limit", () => {
   it("answers 429 after five failed sign-ins on one account", async () => {
     const email = uniqueEmail("limited");
-    await new Client().post("/api/v1/auth/signup", { email, password: "the right one!", displayName: "L" });
+    await signUp(new Client(), { email, password: "the right one!", displayName: "L" });
     const client = new Client(BASE_URL, "203.0.113.77");
     const statuses: number[] = [];
     for (let i = 0; i < 6; i++) {
@@ -134,7 +174,7 @@ describe("rate limit", () => {
 describe("password reset by e-mail", () => {
   it("mails a single-use link that sets a new password", async () => {
     const email = uniqueEmail("reset");
-    await new Client().post("/api/v1/auth/signup", { email, password: "old password 1", displayName: "R" });
+    await signUp(new Client(), { email, password: "old password 1", displayName: "R" });
     const anon = new Client();
     const asked = await anon.post("/api/v1/auth/reset-request", { email });
     expect(asked.status).toBe(200);
@@ -154,7 +194,7 @@ describe("password reset by e-mail", () => {
 
   it("refuses a link older than an hour", async () => {
     const email = uniqueEmail("expired");
-    await new Client().post("/api/v1/auth/signup", { email, password: "old password 1", displayName: "E" });
+    await signUp(new Client(), { email, password: "old password 1", displayName: "E" });
     await new Client().post("/api/v1/auth/reset-request", { email });
     const mail = await waitForMail(email, "Reset your Sinkwise password");
     const token = /\/reset\/([A-Za-z0-9_-]+)/.exec(mail.text ?? "")?.[1];

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { GOOD_PARTS } from "../unit/parts/fixtures";
 import { Client, signedIn, uniqueEmail } from "../support/http";
+import { signUp } from "../support/mail";
 
 // Sharing a build with named people: the owner decides who views and who edits.
 let owner: Client;
@@ -21,7 +22,7 @@ function design(ambientC = 25) {
 async function newMaker(tag: string): Promise<{ client: Client; email: string; id: string }> {
   const client = new Client();
   const email = uniqueEmail(tag);
-  const r = await client.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: `Maker ${tag}` });
+  const r = await signUp(client, { email, password: "long enough pw", displayName: `Maker ${tag}` });
   expect(r.status, JSON.stringify(r.body)).toBe(201);
   return { client, email, id: r.body.user?.id ?? "" };
 }

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { GOOD_PARTS } from "../unit/parts/fixtures";
 import { Client, signedIn, uniqueEmail } from "../support/http";
+import { signUp } from "../support/mail";
 
 // Builds by role: owner, another maker, a reviewer, an admin, anonymous.
 let owner: Client;
@@ -22,7 +23,7 @@ beforeAll(async () => {
   reviewer = await signedIn("reviewer@sinkwise.test");
   admin = await signedIn("admin@sinkwise.test");
   other = new Client();
-  await other.post("/api/v1/auth/signup", { email: uniqueEmail("other-maker"), password: "long enough pw", displayName: "Other Maker" });
+  await signUp(other, { email: uniqueEmail("other-maker"), password: "long enough pw", displayName: "Other Maker" });
   const created = await owner.post("/api/v1/parts", EMITTER);
   expect(created.status).toBe(201);
   emitterId = (created.body.part as { id: string }).id;

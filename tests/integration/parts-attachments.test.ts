@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { Client, signedIn, uniqueEmail } from "../support/http";
 import { withTestDb } from "../support/db";
 import { minimalPdf, minimalPng } from "../support/pdf";
+import { signUp } from "../support/mail";
 
 let owner: Client;
 let other: Client;
@@ -32,7 +33,7 @@ beforeAll(async () => {
   owner = await signedIn("maker@sinkwise.test");
   admin = await signedIn("admin@sinkwise.test");
   other = new Client();
-  await other.post("/api/v1/auth/signup", { email: uniqueEmail("attach-other"), password: "long enough pw", displayName: "Attach Other" });
+  await signUp(other, { email: uniqueEmail("attach-other"), password: "long enough pw", displayName: "Attach Other" });
   sharedId = ((await owner.post("/api/v1/parts", { ...SPREADER, name: "Strap with datasheet", visibility: "shared" })).body.part as { id: string }).id;
   privateId = ((await owner.post("/api/v1/parts", { ...SPREADER, name: "Private strap with datasheet" })).body.part as { id: string }).id;
 });

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { Client, signedIn, uniqueEmail } from "../support/http";
 import { withTestDb } from "../support/db";
+import { signUp } from "../support/mail";
 
 let owner: Client;
 let other: Client;
@@ -23,7 +24,7 @@ async function countLike(pattern: string): Promise<number> {
 beforeAll(async () => {
   owner = await signedIn("maker@sinkwise.test");
   other = new Client();
-  await other.post("/api/v1/auth/signup", { email: uniqueEmail("import-other"), password: "long enough pw", displayName: "Import Other" });
+  await signUp(other, { email: uniqueEmail("import-other"), password: "long enough pw", displayName: "Import Other" });
 });
 
 describe("CSV import: preview, then all-or-nothing", () => {

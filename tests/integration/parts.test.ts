@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { Client, signedIn, uniqueEmail } from "../support/http";
 import { withTestDb } from "../support/db";
 import { GOOD_PARTS } from "../unit/parts/fixtures";
+import { signUp } from "../support/mail";
 
 // Parts by who asks: the owner, another signed-in maker, an admin, and nobody.
 let owner: Client;
@@ -41,7 +42,7 @@ beforeAll(async () => {
   owner = await signedIn("maker@sinkwise.test");
   admin = await signedIn("admin@sinkwise.test");
   other = new Client();
-  const up = await other.post("/api/v1/auth/signup", { email: uniqueEmail("parts-other"), password: "long enough pw", displayName: "Other Maker" });
+  const up = await signUp(other, { email: uniqueEmail("parts-other"), password: "long enough pw", displayName: "Other Maker" });
   expect(up.status).toBe(201);
 });
 

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { type AppProcess, nearbyPort, startApp } from "../support/app-process";
 import { BASE_URL, Client, signedIn, uniqueEmail } from "../support/http";
 import { createParts, retrofitDesign } from "../support/retrofit";
+import { signUp } from "../support/mail";
 
 let second: AppProcess;
 
@@ -19,7 +20,7 @@ describe("scale-out: two app processes, one database", () => {
   it("a session made on one process works on the other, and signing out on the other ends it on both", async () => {
     const email = uniqueEmail("two-procs");
     const a = new Client();
-    expect((await a.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "Two Procs" })).status).toBe(201);
+    expect((await signUp(a, { email, password: "long enough pw", displayName: "Two Procs" })).status).toBe(201);
     const b = new Client(second.base, undefined, second.base).withCookiesOf(a);
     const me = await b.get("/api/v1/me");
     expect(me.status).toBe(200);
@@ -30,7 +31,7 @@ describe("scale-out: two app processes, one database", () => {
 
   it("counts failed sign-ins across both processes", async () => {
     const email = uniqueEmail("limit-two-procs");
-    await new Client().post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "Limit" });
+    await signUp(new Client(), { email, password: "long enough pw", displayName: "Limit" });
     const a = new Client(BASE_URL, "198.51.100.7");
     const b = new Client(second.base, "198.51.100.7", second.base);
     const statuses: number[] = [];

@@ -2,6 +2,7 @@ import { createHash } from "node:crypto";
 import { describe, expect, it } from "vitest";
 import { withTestDb } from "../support/db";
 import { BASE_URL, Client, uniqueEmail } from "../support/http";
+import { signUp } from "../support/mail";
 
 const INBOX = process.env.MAIL_INBOX_URL ?? "http://127.0.0.1:1081";
 
@@ -31,7 +32,7 @@ describe("session tokens are stored hashed and have an absolute lifetime", () =>
   it("keeps only the SHA-256 of the cookie's secret in the database", async () => {
     const email = uniqueEmail("hashed");
     const client = new Client();
-    const up = await client.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "H" });
+    const up = await signUp(client, { email, password: "long enough pw", displayName: "H" });
     const token = sessionCookie(client, up);
     const [issued, secret] = token.split(".");
     expect(secret).toMatch(/^[A-Za-z0-9_-]{43}$/);
@@ -50,7 +51,7 @@ describe("session tokens are stored hashed and have an absolute lifetime", () =>
   it("ends a session 60 days after sign-in even while it is in use", async () => {
     const email = uniqueEmail("absolute");
     const client = new Client();
-    await client.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: "A" });
+    await signUp(client, { email, password: "long enough pw", displayName: "A" });
     const userId = (await client.get("/api/v1/me")).body.user?.id;
     const plant = async (ageDays: number) => {
       const issued = (Date.now() - ageDays * 86_400_000).toString(36);
@@ -74,7 +75,7 @@ describe("session tokens are stored hashed and have an absolute lifetime", () =>
 describe("password reset", () => {
   it("revokes every other outstanding reset link once one of them is used", async () => {
     const email = uniqueEmail("two-links");
-    await new Client().post("/api/v1/auth/signup", { email, password: "old password 1", displayName: "T" });
+    await signUp(new Client(), { email, password: "old password 1", displayName: "T" });
     expect((await new Client().post("/api/v1/auth/reset-request", { email })).status).toBe(200);
     expect((await new Client().post("/api/v1/auth/reset-request", { email })).status).toBe(200);
     const [first, second] = await resetLinks(email, 2);
@@ -87,7 +88,7 @@ describe("password reset", () => {
 
   it("answers for an unknown address just as for an account, and limits requests per address", async () => {
     const email = uniqueEmail("reset-same");
-    await new Client().post("/api/v1/auth/signup", { email, password: "old password 1", displayName: "R" });
+    await signUp(new Client(), { email, password: "old password 1", displayName: "R" });
     const bodies = new Set<string>();
     const statuses = new Set<number>();
     for (let i = 0; i < 3; i += 1) {

@@ -1,6 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { Client, signedIn, uniqueEmail } from "../support/http";
 import { createParts } from "../support/retrofit";
+import { signUp } from "../support/mail";
 
 let owner: Client;
 let stranger: Client;
@@ -9,7 +10,7 @@ let buildId = "";
 beforeAll(async () => {
   owner = await signedIn("maker@sinkwise.test");
   stranger = new Client();
-  await stranger.post("/api/v1/auth/signup", { email: uniqueEmail("solve-stranger"), password: "long enough pw", displayName: "S" });
+  await signUp(stranger, { email: uniqueEmail("solve-stranger"), password: "long enough pw", displayName: "S" });
   const ids = await createParts(owner, "private");
   const design = {
     housing: { partId: ids.housing },

@@ -2,6 +2,7 @@
 // fixtures' generic parts) and the three ways of cooling the driver as variants.
 import { GOOD_PARTS } from "../unit/parts/fixtures";
 import { Client, uniqueEmail } from "./http";
+import { signUp } from "./mail";
 
 export type PartIds = Record<keyof typeof GOOD_PARTS, string>;
 
@@ -51,7 +52,7 @@ export async function newBuild(client: Client, body: Record<string, unknown>): P
 export async function newUser(admin: Client, role: "maker" | "reviewer", tag: string): Promise<{ client: Client; id: string; email: string }> {
   const client = new Client();
   const email = uniqueEmail(tag);
-  const r = await client.post("/api/v1/auth/signup", { email, password: "long enough pw", displayName: `Test ${tag}` });
+  const r = await signUp(client, { email, password: "long enough pw", displayName: `Test ${tag}` });
   if (r.status !== 201) throw new Error(`signup: ${r.status} ${JSON.stringify(r.body)}`);
   const id = r.body.user!.id;
   if (role !== "maker") {

@@ -1,5 +1,6 @@
 import { AuthCard } from "@/components/auth/auth-card";
 import { AuthForm } from "@/components/auth/auth-form";
+import { LocalInboxNote } from "@/components/auth/local-inbox-note";
 
 export const metadata = { title: "Reset password" };
 
@@ -14,6 +15,7 @@ export default function ResetRequestPage() {
         submitLabel="Send the link"
         fields={[{ name: "email", label: "E-mail", type: "email", autoComplete: "email" }]}
       />
+      <LocalInboxNote />
     </AuthCard>
   );
 }

@@ -43,7 +43,8 @@ const unique = (tag: string) => `${tag}-${Date.now().toString(36)}-${(counter++)
 
 export const MATRIX: Row[] = [
   // —— accounts
-  { route: "POST /api/v1/auth/signup", path: () => "/api/v1/auth/signup", body: () => ({ email: unique("matrix-signup"), password: "long enough pw", displayName: "Matrix" }), ownSession: true, expect: same(201) },
+  { route: "POST /api/v1/auth/signup", path: () => "/api/v1/auth/signup", body: () => ({ email: unique("matrix-signup"), password: "long enough pw", displayName: "Matrix" }), ownSession: true, expect: same(202) },
+  { route: "POST /api/v1/auth/signup-confirm", path: () => "/api/v1/auth/signup-confirm", body: () => ({ token: "not-a-real-token-000000000000000" }), ownSession: true, expect: same(400) },
   { route: "POST /api/v1/auth/signin", path: () => "/api/v1/auth/signin", body: () => ({ email: unique("matrix-nobody"), password: "wrong password" }), expect: same(401) },
   { route: "POST /api/v1/auth/signout", path: () => "/api/v1/auth/signout", body: () => ({}), ownSession: true, expect: same(200) },
   { route: "POST /api/v1/auth/reset-request", path: () => "/api/v1/auth/reset-request", body: () => ({ email: unique("matrix-reset") }), expect: same(200) },

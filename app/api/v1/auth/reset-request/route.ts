@@ -4,7 +4,7 @@ import { resetRequestSchema } from "@/lib/auth/schemas";
 import { env } from "@/server/env";
 import { clientAddress } from "@/server/http/client-address";
 import { sendMail } from "@/server/mail";
-import { consumeResetRequest } from "@/server/rate-limit";
+import { consumeMailRequest } from "@/server/rate-limit";
 import { json, readJson, route } from "@/server/route";
 
 async function mailResetLink(email: string): Promise<void> {
@@ -34,7 +34,7 @@ async function mailResetLink(email: string): Promise<void> {
  */
 export const POST = route(async (request) => {
   const { email } = await readJson(request, resetRequestSchema, "reset");
-  await consumeResetRequest(email, clientAddress(request));
+  await consumeMailRequest("reset", email, clientAddress(request));
   after(() =>
     mailResetLink(email).catch((error: unknown) => {
       console.error("[reset] could not send the reset mail:", error);

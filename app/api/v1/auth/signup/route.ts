@@ -1,20 +1,21 @@
-import { createUser } from "@/db/queries/users";
+import { after } from "next/server";
 import { signUpSchema } from "@/lib/auth/schemas";
-import { ApiError } from "@/lib/http/api-error";
-import { hashPassword } from "@/server/auth/password";
-import { startSession } from "@/server/auth/session";
+import { mailSignupLink, signupAnswer } from "@/server/auth/signup";
+import { clientAddress } from "@/server/http/client-address";
+import { consumeMailRequest } from "@/server/rate-limit";
 import { json, readJson, route } from "@/server/route";
 
+/**
+ * Same answer, in the same time, whether or not the address has an account: the look-up, the
+ * password hash, the pending sign-up and the mail happen after the answer has been sent.
+ */
 export const POST = route(async (request) => {
   const input = await readJson(request, signUpSchema, "signup");
-  const created = await createUser({
-    email: input.email,
-    displayName: input.displayName,
-    passwordHash: await hashPassword(input.password),
-  });
-  if (!created) {
-    throw new ApiError("conflict:email", "An account with this e-mail address already exists. Sign in or reset the password.", "email");
-  }
-  await startSession(created.id);
-  return json({ user: { id: created.id, email: input.email, displayName: input.displayName, role: "maker" } }, 201);
+  await consumeMailRequest("signup", input.email, clientAddress(request));
+  after(() =>
+    mailSignupLink(input).catch((error: unknown) => {
+      console.error("[signup] could not send the sign-up mail:", error);
+    }),
+  );
+  return json({ ok: true, message: signupAnswer(input.email) }, 202);
 });

@@ -555,3 +555,20 @@ export const signupRequests = mysqlTable(
   },
   (t) => [index("signup_request_email_idx").on(t.email)],
 );
+
+/**
+ * A build shared with an address no account uses yet: it becomes a membership when an account
+ * is made with that address. Sharing answers the same either way.
+ */
+export const buildInvitations = mysqlTable(
+  "build_invitation",
+  {
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    email: varchar("email", { length: 254 }).notNull(),
+    canEdit: boolean("can_edit").notNull().default(false),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.buildId, t.email] }), index("build_invitation_email_idx").on(t.email)],
+);

@@ -26,15 +26,21 @@ export function MembersPanel({ buildId }: { buildId: string }) {
       <p className="text-xs text-ink-soft">People you name here see this build even while it is private; with “can edit” they save revisions too. Reviewers only view.</p>
       {members.isSuccess && list.length === 0 && <p className="text-ink-soft">Nobody yet.</p>}
       <ul className="space-y-1">
-        {list.map((m) => (
-          <li key={m.userId} className="flex items-center gap-2" data-testid="build-member">
-            <span title={m.email} className="min-w-0 flex-1 truncate">{m.displayName}</span>
-            <span className="shrink-0 text-xs text-ink-soft">{m.canEdit ? "can edit" : "views"}</span>
-            <button type="button" onClick={() => remove.mutate(m.userId)} disabled={remove.isPending} className="shrink-0 text-xs text-over hover:underline" aria-label={`Stop sharing with ${m.displayName}`}>
-              Remove
-            </button>
-          </li>
-        ))}
+        {list.map((m) => {
+          const { email: address } = m;
+          const who = address ?? m.displayName ?? "";
+          return (
+            <li key={who} className="flex items-center gap-2" data-testid="build-member">
+              <span className="min-w-0 flex-1 truncate">{who}</span>
+              <span className="shrink-0 text-xs text-ink-soft">{m.canEdit ? "can edit" : "views"}</span>
+              {address !== undefined && (
+                <button type="button" onClick={() => remove.mutate(address)} disabled={remove.isPending} className="shrink-0 text-xs text-over hover:underline" aria-label={`Stop sharing with ${address}`}>
+                  Remove
+                </button>
+              )}
+            </li>
+          );
+        })}
       </ul>
       <form onSubmit={onSubmit} noValidate className="space-y-1.5" aria-label="Share with someone">
         <input
@@ -57,6 +63,7 @@ export function MembersPanel({ buildId }: { buildId: string }) {
         </div>
       </form>
       {err && <p role="alert" className="text-over">{err.message}</p>}
+      {add.isSuccess && !add.isPending && <p role="status" className="text-xs text-ok">{add.data.message}</p>}
       {members.isError && <p className="text-over">{members.error.message}</p>}
       {remove.isError && <p role="alert" className="text-over">{remove.error.message}</p>}
     </section>

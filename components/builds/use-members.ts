@@ -3,8 +3,11 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/components/ui/fetch-json";
 
-/** A person a build is shared with; `email` is sent to the owner only. */
-export type BuildMember = { userId: string; email?: string; displayName: string; role: string; canEdit: boolean };
+/**
+ * Whom a build is shared with: the owner gets every address (`email`), whether or not an
+ * account uses it yet; anyone else gets the members' names.
+ */
+export type BuildMember = { email?: string; displayName?: string; role?: string; canEdit: boolean };
 
 const key = (buildId: string) => ["build", buildId, "members"] as const;
 
@@ -15,7 +18,7 @@ export function useMembers(buildId: string) {
 export function useAddMember(buildId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: { email: string; canEdit: boolean }) => fetchJson<{ member: BuildMember }>(`/api/v1/builds/${buildId}/members`, { method: "POST", body }),
+    mutationFn: (body: { email: string; canEdit: boolean }) => fetchJson<{ member: BuildMember; message: string }>(`/api/v1/builds/${buildId}/members`, { method: "POST", body }),
     onSuccess: () => qc.invalidateQueries({ queryKey: key(buildId) }),
   });
 }
@@ -23,7 +26,7 @@ export function useAddMember(buildId: string) {
 export function useRemoveMember(buildId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (userId: string) => fetchJson<{ ok: true }>(`/api/v1/builds/${buildId}/members/${encodeURIComponent(userId)}`, { method: "DELETE" }),
+    mutationFn: (email: string) => fetchJson<{ ok: true }>(`/api/v1/builds/${buildId}/members/${encodeURIComponent(email)}`, { method: "DELETE" }),
     onSuccess: () => qc.invalidateQueries({ queryKey: key(buildId) }),
   });
 }

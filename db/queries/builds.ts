@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq, ne, or, sql } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
 import { db } from "../client";
-import { buildMembers, buildRevisions, builds, reviews, revisionParts, solveCache, users } from "../schema";
+import { buildInvitations, buildMembers, buildRevisions, builds, reviews, revisionParts, solveCache, users } from "../schema";
 import { snapshotPartsInTx } from "./snapshots";
 import { classReaderSql } from "./classwork";
 import { newId } from "./users";
@@ -256,8 +256,30 @@ export async function putBuildMember({ buildId, userId, canEdit }: { buildId: st
   await db().insert(buildMembers).values({ buildId, userId, canEdit }).onDuplicateKeyUpdate({ set: { canEdit } });
 }
 
-/** Removes a member; false when they were not one. */
+/** Shares a build with an address no account uses yet (sharing twice only changes the edit right). */
+export async function putBuildInvitation({ buildId, email, canEdit }: { buildId: string; email: string; canEdit: boolean }): Promise<void> {
+  await db().insert(buildInvitations).values({ buildId, email, canEdit, createdAt: new Date() }).onDuplicateKeyUpdate({ set: { canEdit } });
+}
+
+/** Everyone the build is shared with, by address, whether or not an account uses it yet (the owner's view). */
+export async function listBuildShares({ buildId }: { buildId: string }): Promise<{ email: string; canEdit: boolean }[]> {
+  const [members, invited] = await Promise.all([
+    db().select({ email: users.email, canEdit: buildMembers.canEdit }).from(buildMembers).innerJoin(users, eq(users.id, buildMembers.userId)).where(eq(buildMembers.buildId, buildId)).limit(500),
+    db().select({ email: buildInvitations.email, canEdit: buildInvitations.canEdit }).from(buildInvitations).where(eq(buildInvitations.buildId, buildId)).limit(500),
+  ]);
+  return [...members, ...invited].map((r) => ({ email: r.email, canEdit: Boolean(r.canEdit) })).sort((a, b) => a.email.localeCompare(b.email));
+}
+
+/** Stops sharing with a person, named by account id or by address; false when the build was not shared with them. */
 export async function removeBuildMember({ buildId, userId }: { buildId: string; userId: string }): Promise<boolean> {
+  if (userId.includes("@")) {
+    const email = userId.trim().toLowerCase();
+    const [invited] = await db().delete(buildInvitations).where(and(eq(buildInvitations.buildId, buildId), eq(buildInvitations.email, email)));
+    const [member] = await db()
+      .delete(buildMembers)
+      .where(and(eq(buildMembers.buildId, buildId), sql`${buildMembers.userId} IN (SELECT ${users.id} FROM ${users} WHERE ${users.email} = ${email})`));
+    return invited.affectedRows + member.affectedRows > 0;
+  }
   const [result] = await db().delete(buildMembers).where(and(eq(buildMembers.buildId, buildId), eq(buildMembers.userId, userId)));
   return result.affectedRows > 0;
 }

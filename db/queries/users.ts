@@ -2,7 +2,7 @@ import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import { and, asc, eq, isNull, sql } from "drizzle-orm";
 import { db, mysqlErrorCode } from "../client";
-import { passwordResetTokens, type Role, signupRequests, userSessions, users } from "../schema";
+import { buildInvitations, buildMembers, passwordResetTokens, type Role, signupRequests, userSessions, users } from "../schema";
 
 export type UserRow = typeof users.$inferSelect;
 export type PublicUser = Omit<UserRow, "passwordHash">;
@@ -139,6 +139,12 @@ export async function completeSignupRequest({ token }: { token: string }): Promi
     } catch (error) {
       if (mysqlErrorCode(error) === "ER_DUP_ENTRY") return { status: "taken" };
       throw error;
+    }
+    // Builds shared with this address before it had an account open for it now.
+    const invitations = await tx.select().from(buildInvitations).where(eq(buildInvitations.email, row.email));
+    if (invitations.length) {
+      await tx.insert(buildMembers).values(invitations.map((i) => ({ buildId: i.buildId, userId: id, canEdit: i.canEdit })));
+      await tx.delete(buildInvitations).where(eq(buildInvitations.email, row.email));
     }
     return { status: "ok", userId: id };
   });

@@ -1,9 +1,10 @@
+import { after } from "next/server";
 import { z } from "zod";
-import { listBuildMembers, putBuildMember } from "@/db/queries/builds";
-import { getUserByEmail } from "@/db/queries/users";
+import { listBuildMembers, listBuildShares } from "@/db/queries/builds";
 import { ApiError } from "@/lib/http/api-error";
 import { requireUser } from "@/server/auth/session";
 import { loadBuild } from "@/server/builds/load";
+import { shareBuild, sharedAnswer } from "@/server/builds/share-with";
 import { json, readJson, route } from "@/server/route";
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -18,26 +19,30 @@ const addMemberSchema = z.object({
   canEdit: z.boolean({ error: "canEdit is true or false." }).default(false),
 });
 
-/** Anyone who may see the build sees who it is shared with; only the owner sees their e-mails. */
+/**
+ * The owner sees every address the build is shared with (whether or not an account uses it
+ * yet, so the list does not tell); anyone else who may see the build sees the members' names.
+ */
 export const GET = route<Ctx>(async (_request, { params }) => {
   const user = await requireUser();
   const build = await loadBuild({ id: (await params).id, viewer: user });
+  if (build.access.isOwner) return json({ members: await listBuildShares({ buildId: build.id }) });
   const members = await listBuildMembers({ buildId: build.id });
-  return json({ members: build.access.isOwner ? members : members.map(({ email: _email, ...m }) => m) });
+  return json({ members: members.map(({ email: _email, userId: _id, ...m }) => m) });
 });
 
+/** Shares with an address: the same answer whether or not an account uses it; the mail goes after the answer. */
 export const POST = route<Ctx>(async (request, { params }) => {
   const user = await requireUser();
   const build = await loadBuild({ id: (await params).id, viewer: user });
   if (!build.access.isOwner) throw new ApiError("forbidden:build", "Only the build's owner shares it.");
   const input = await readJson(request, addMemberSchema, "member");
-  const member = await getUserByEmail({ email: input.email });
-  // Said plainly: the owner must know whether the person they meant has an account yet.
-  if (!member) throw new ApiError("bad_request:member", `No Sinkwise account uses ${input.email}.`, "email");
-  if (member.id === build.ownerId) throw new ApiError("bad_request:member", "That is the owner's own address: the owner always edits.", "email");
-  if (input.canEdit && member.role === "reviewer") {
-    throw new ApiError("bad_request:member", "A reviewer never edits someone else's build: share it with them view-only.", "canEdit");
-  }
-  await putBuildMember({ buildId: build.id, userId: member.id, canEdit: input.canEdit });
-  return json({ member: { userId: member.id, email: member.email, displayName: member.displayName, role: member.role, canEdit: input.canEdit } }, 201);
+  if (input.email === user.email) throw new ApiError("bad_request:member", "That is your own address: the owner always edits.", "email");
+  const mail = await shareBuild({ build, owner: user, email: input.email, canEdit: input.canEdit });
+  after(() =>
+    mail().catch((error: unknown) => {
+      console.error("[members] could not send the share mail:", error);
+    }),
+  );
+  return json({ member: { email: input.email, canEdit: input.canEdit }, message: sharedAnswer(input) }, 201);
 });

@@ -43,14 +43,22 @@ const summaryColumns = {
   updatedAt: parts.updatedAt,
 };
 
+/** Every column of a part record, with its owner's name. */
+export const recordColumns = { ...summaryColumns, curves: parts.curves };
+
 // MariaDB keeps JSON as LONGTEXT, so the driver hands back text; MySQL hands back objects.
-function jsonObject(value: unknown): Record<string, unknown> {
+export function jsonObject(value: unknown): Record<string, unknown> {
   const parsed: unknown = typeof value === "string" ? JSON.parse(value) : value;
   return parsed && typeof parsed === "object" && !Array.isArray(parsed) ? (parsed as Record<string, unknown>) : {};
 }
 
 function toSummary(row: Omit<PartSummary, "specs"> & { specs: unknown }): PartSummary {
   return { ...row, verified: Boolean(row.verified), specs: jsonObject(row.specs) };
+}
+
+/** A part record from a row selected with recordColumns. */
+export function toRecord(row: Omit<PartSummary, "specs"> & { specs: unknown; curves: unknown }): PartRecord {
+  return { ...toSummary(row), curves: jsonObject(row.curves) };
 }
 
 /** The visibility rule in SQL (see lib/parts/access.ts): admins see every part. */
@@ -164,12 +172,12 @@ export async function getPart({ id, viewer }: { id: string; viewer: PartViewer }
 export async function getParts({ ids, viewer }: { ids: readonly string[]; viewer: PartViewer }): Promise<PartRecord[]> {
   if (ids.length === 0) return [];
   const rows = await db()
-    .select({ ...summaryColumns, curves: parts.curves })
+    .select(recordColumns)
     .from(parts)
     .innerJoin(users, eq(users.id, parts.ownerId))
     .where(and(inArray(parts.id, [...ids]), visibleTo(viewer)))
     .limit(ids.length);
-  return rows.map((row) => ({ ...toSummary(row), curves: jsonObject(row.curves) }));
+  return rows.map(toRecord);
 }
 
 function columnsOf(part: Part) {

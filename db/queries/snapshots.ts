@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq, inArray, ne, sql } from "drizzle-orm";
 import { db, type Db } from "../client";
 import { parts, revisionPartSnapshots, solveCache, revisionSolverChanges, users } from "../schema";
-import type { PartRecord } from "./parts";
+import { type PartRecord, recordColumns, toRecord } from "./parts";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
@@ -15,22 +15,6 @@ type StoredRecord = Omit<PartRecord, "createdAt" | "updatedAt"> & { createdAt: s
 const toStored = (r: PartRecord): StoredRecord => ({ ...r, createdAt: r.createdAt.toISOString(), updatedAt: r.updatedAt.toISOString() });
 const fromStored = (s: StoredRecord): PartRecord => ({ ...s, createdAt: new Date(s.createdAt), updatedAt: new Date(s.updatedAt) });
 
-const recordColumns = {
-  id: parts.id,
-  ownerId: parts.ownerId,
-  ownerName: users.displayName,
-  kind: parts.kind,
-  name: parts.name,
-  provenance: parts.provenance,
-  provenanceNote: parts.provenanceNote,
-  visibility: parts.visibility,
-  costEur: parts.costEur,
-  verified: parts.verified,
-  specs: parts.specs,
-  curves: parts.curves,
-  createdAt: parts.createdAt,
-  updatedAt: parts.updatedAt,
-};
 
 /**
  * Copies the parts a new revision uses into its snapshot, inside the transaction that saves
@@ -44,7 +28,7 @@ export async function snapshotPartsInTx(tx: Tx, revisionId: string, partIds: rea
     rows.map((r) => ({
       revisionId,
       partId: r.id,
-      record: toStored({ ...r, verified: Boolean(r.verified), specs: parseJson(r.specs) as Record<string, unknown>, curves: parseJson(r.curves) as Record<string, unknown> }),
+      record: toStored(toRecord(r)),
       takenAt: now,
     })),
   );

@@ -72,7 +72,7 @@ export async function readJson<T extends z.ZodType>(
     throw new ApiError(`bad_request:${subject}`, "The request body is not valid JSON.");
   }
   const parsed = schema.safeParse(value);
-  if (!parsed.success) throw fromZodError(parsed.error, subject);
+  if (!parsed.success) throw fromZodError(parsed.error, subject, value);
   return parsed.data;
 }
 

@@ -18,9 +18,9 @@ export type FieldProps = {
   disabled?: boolean;
 };
 
-export function FieldShell({ label, error, children, hint, problems }: { label: string; error?: string; children: ReactNode; hint?: string; problems?: readonly Problem[] }) {
+export function FieldShell({ label, error, children, hint, problems, field }: { label: string; error?: string; children: ReactNode; hint?: string; problems?: readonly Problem[]; field?: string }) {
   return (
-    <label className="block text-sm">
+    <label className="block scroll-mt-24 scroll-mb-32 text-sm" data-field={field} data-field-error={error ? "true" : undefined}>
       <span className="mb-1 block font-medium">{label}</span>
       {children}
       {hint && !error && <span className="mt-1 block text-xs text-ink-soft">{hint}</span>}
@@ -40,7 +40,7 @@ export function PartSelect({ kind, ...p }: FieldProps & { kind: PartKind }) {
   const partId = typeof current?.partId === "string" ? current.partId : "";
   const inlineName = current && "inline" in current ? String(current.name ?? `inline ${kind}`) : null;
   return (
-    <FieldShell label={p.label} error={p.error} problems={p.problems}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems} field={p.path}>
       <select
         aria-label={p.label}
         className={inputClass}
@@ -60,17 +60,19 @@ export function PartSelect({ kind, ...p }: FieldProps & { kind: PartKind }) {
   );
 }
 
-/** A number with a unit, typed as text ("18 mm", "30 °C"); the server parses and checks it. */
-export function UnitInput({ unitHint, ...p }: FieldProps & { unitHint: string }) {
+/** A number with a unit, typed as text ("18 mm", "30 °C"); the server parses and checks it as it is typed. */
+export function UnitInput({ unitHint, placeholder, ...p }: FieldProps & { unitHint: string; placeholder?: string }) {
   const value = getPath(p.design, p.path);
   return (
-    <FieldShell label={p.label} error={p.error} problems={p.problems} hint={unitHint}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems} hint={unitHint} field={p.path}>
       <input
         aria-label={p.label}
         className={inputClass}
         disabled={p.disabled}
-        defaultValue={value === undefined || value === null ? "" : String(value)}
-        onBlur={(e) => p.onChange(p.path, e.target.value.trim() === "" ? undefined : e.target.value.trim())}
+        placeholder={placeholder}
+        aria-invalid={p.error ? true : undefined}
+        value={value === undefined || value === null ? "" : String(value)}
+        onChange={(e) => p.onChange(p.path, e.target.value.trim() === "" ? undefined : e.target.value)}
       />
     </FieldShell>
   );
@@ -79,7 +81,7 @@ export function UnitInput({ unitHint, ...p }: FieldProps & { unitHint: string })
 export function IntInput({ min, max, ...p }: FieldProps & { min: number; max: number }) {
   const value = getPath(p.design, p.path);
   return (
-    <FieldShell label={p.label} error={p.error} problems={p.problems}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems} field={p.path}>
       <input
         aria-label={p.label}
         type="number"
@@ -98,7 +100,7 @@ export function IntInput({ min, max, ...p }: FieldProps & { min: number; max: nu
 export function ChoiceSelect({ choices, ...p }: FieldProps & { choices: readonly (readonly [string, string])[] }) {
   const value = getPath(p.design, p.path);
   return (
-    <FieldShell label={p.label} error={p.error} problems={p.problems}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems} field={p.path}>
       <select aria-label={p.label} className={inputClass} disabled={p.disabled} value={typeof value === "string" ? value : choices[0]?.[0]} onChange={(e) => p.onChange(p.path, e.target.value)}>
         {choices.map(([v, l]) => (
           <option key={v} value={v}>{l}</option>

@@ -35,3 +35,6 @@ export const solveBuildSchema = z.strictObject({
 
 export type CreateBuildInput = z.infer<typeof createBuildSchema>;
 export type UpdateBuildInput = z.infer<typeof updateBuildSchema>;
+
+/** The live editor's draft: any JSON; the preview validates it as a design and reports every issue. */
+export const previewDesignSchema = z.strictObject({ design: z.unknown() });

@@ -1,6 +1,7 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
 import { benchBuilds } from "./bench-builds";
 import { benchParts } from "./bench-parts";
+import { benchPreview } from "./bench-preview";
 import { benchRetrofit } from "./bench-retrofit";
 import { benchThermal } from "./bench-thermal";
 
@@ -9,6 +10,7 @@ async function main(): Promise<void> {
   await benchRetrofit();
   await benchParts();
   await benchBuilds();
+  await benchPreview();
 }
 
 main().catch((e: unknown) => {

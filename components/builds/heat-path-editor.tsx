@@ -63,7 +63,8 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   const [saved, setSaved] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
   const [scrollTick, setScrollTick] = useState(0);
-  const savedJson = useMemo(() => JSON.stringify(initial), [initial]);
+  // What the last saved revision holds, as edited here (the server stores it in SI units).
+  const [savedJson, setSavedJson] = useState(() => JSON.stringify(initial));
   const dirty = JSON.stringify(design) !== savedJson;
   const solved = useSolve(buildId, revision);
   const preview = useDesignPreview(buildId, design, dirty && canEdit);
@@ -119,6 +120,7 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
     try {
       const r = await fetchJson<{ build: { currentRevision: number } }>(`/api/v1/builds/${buildId}`, { method: "PATCH", body: { design, note } });
       setSaved(`Saved as revision ${r.build.currentRevision}.`);
+      setSavedJson(JSON.stringify(design));
       setNote("");
       await queryClient.invalidateQueries({ queryKey: ["build", buildId] });
       router.refresh();

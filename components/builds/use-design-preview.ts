@@ -13,7 +13,7 @@ export type PreviewAnswer =
 export type PreviewState = { status: "idle" | "checking" | "done" | "error"; answer: PreviewAnswer | null; error: string | null };
 
 /** How long the editor waits after the last change before it checks the draft. */
-export const PREVIEW_DEBOUNCE_MS = 250;
+export const PREVIEW_DEBOUNCE_MS = 150;
 
 /**
  * The live check of an unsaved design: after each change (debounced) the draft goes to the

@@ -20,6 +20,8 @@ export const updateBuildSchema = z.strictObject({
   visibility: visibility.optional(),
   design: buildDesignSchema.optional(),
   note: z.string().trim().max(500).default(""),
+  /** Owner only: true takes the build out of the lists (it keeps every revision), false brings it back. */
+  archived: z.boolean({ error: "Archived is yes or no." }).optional(),
 });
 
 export const forkBuildSchema = z.strictObject({

@@ -48,7 +48,7 @@ export function humanize(key: string): string {
 
 const capitalise = (s: string) => (s === "" ? s : s[0]!.toUpperCase() + s.slice(1));
 
-/** A label for any path: the resolver's, else the keys in words ("Links, row 6 › to"). */
+/** A label for any path: the resolver's, else the keys in words ("Link 6 › to"). */
 export function labelFor(path: readonly PathKey[], resolve?: LabelResolver): string {
   const known = resolve?.(path);
   if (known) return known;
@@ -56,8 +56,9 @@ export function labelFor(path: readonly PathKey[], resolve?: LabelResolver): str
   const parts: string[] = [];
   for (const key of path) {
     if (typeof key === "number") {
+      // "links", 2 → "link 3": the list's name in the singular and the item's place, counted from 1.
       const last = parts.pop();
-      parts.push(`${last ?? "Item"}, row ${key + 1}`);
+      parts.push(`${last ? last.replace(/s$/, "") : "item"} ${key + 1}`);
     } else parts.push(humanize(key));
   }
   return capitalise(parts.join(" › "));

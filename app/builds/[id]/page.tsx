@@ -21,7 +21,7 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
         </div>
         {build.variantNote && <p className="text-sm">Variant: <span className="rounded bg-ember-soft px-1.5 text-ember">{build.variantNote}</span></p>}
         <BuildNav buildId={build.id} current="heat-path" />
-        <HeatPathEditor key={`${build.id}:${revision.number}`} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
+        <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
       </div>
       <aside className="space-y-4">
         <BuildActions buildId={build.id} isOwner={build.access.isOwner} />

@@ -1,5 +1,6 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
 import { benchBuilds } from "./bench-builds";
+import { benchFit } from "./bench-fit";
 import { benchParts } from "./bench-parts";
 import { benchPreview } from "./bench-preview";
 import { benchRetrofit } from "./bench-retrofit";
@@ -11,6 +12,7 @@ async function main(): Promise<void> {
   await benchParts();
   await benchBuilds();
   await benchPreview();
+  await benchFit();
 }
 
 main().catch((e: unknown) => {

@@ -1,9 +1,9 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { db } from "../client";
-import { createComparison } from "../queries/comparisons";
-import { addComment, createReview, decideReview } from "../queries/reviews";
-import { builds, comparisons, reviews } from "../schema";
+import { db } from "@/db/client";
+import { createComparison } from "@/db/queries/comparisons";
+import { addComment, createReview, decideReview } from "@/db/queries/reviews";
+import { builds, comparisons, reviews } from "@/db/schema";
 
 /**
  * The demo's review story: the workshop volunteer asks the senior tech which way of cooling

@@ -32,7 +32,7 @@ describe("the starter bin", () => {
   it("the salvaged sinks' gaps between fins fit their base width", () => {
     for (const p of STARTER_PARTS.filter((x) => x.kind === "heatsink")) {
       const s = KIND_DEFINITIONS.heatsink.specsSchema.parse(p.specs) as { rating: string; baseWidthM: number; finCount: number; finThicknessM: number; finSpacingM: number };
-      expect(s.finCount * s.finThicknessM + (s.finCount - 1) * s.finSpacingM).toBeCloseTo(s.baseWidthM, 6);
+      expect(s.finCount * s.finThicknessM + (s.finCount - 1) * s.finSpacingM).toBeCloseTo(s.baseWidthM, 3);
     }
   });
 });

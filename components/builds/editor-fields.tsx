@@ -3,7 +3,9 @@
 import type { ReactNode } from "react";
 import type { PartKind } from "@/lib/parts";
 import type { Problem } from "@/lib/retrofit";
+import { STARTER_PARTS, starterSlot } from "@/lib/starter";
 import { FieldProblems } from "./editor-problems";
+import { InlinePart, type SlotIssue } from "./inline-part";
 import { getPath, type Json, type JsonObject } from "./design-state";
 import { usePartOptions } from "./use-part-options";
 
@@ -32,31 +34,58 @@ export function FieldShell({ label, error, children, hint, problems, field }: { 
 
 const inputClass = "w-full rounded border border-line bg-white px-2 py-1.5 disabled:bg-paper-deep";
 
-/** A slot: pick a part of `kind` from the Parts bin, or leave it empty. */
-export function PartSelect({ kind, ...p }: FieldProps & { kind: PartKind }) {
+/**
+ * A slot: a part from the Parts bin, one from the starter bin (copied in as typed-in values,
+ * marked as estimates), a part typed in right here, or nothing. A typed-in part shows its
+ * fields under the slot; a part from the bin can be copied in to edit.
+ */
+export function PartSelect({ kind, issues = [], ...p }: FieldProps & { kind: PartKind; issues?: readonly SlotIssue[] }) {
   const options = usePartOptions(kind);
   const slot = getPath(p.design, p.path);
   const current = slot && typeof slot === "object" && !Array.isArray(slot) ? slot : undefined;
   const partId = typeof current?.partId === "string" ? current.partId : "";
-  const inlineName = current && "inline" in current ? String(current.name ?? `inline ${kind}`) : null;
+  const isInline = Boolean(current && "inline" in current);
+  const inlineName = isInline ? String(current?.name ?? "") || "no name yet" : null;
+  const starters = STARTER_PARTS.filter((s) => s.kind === kind);
+  const picked = (options.data ?? []).find((o) => o.id === partId);
+  const onSelect = (value: string) => {
+    if (value === "") p.onChange(p.path, undefined);
+    else if (value === "__new") p.onChange(p.path, { name: "", inline: {} });
+    else if (value.startsWith("starter:")) p.onChange(p.path, starterSlot(value.slice(8)) as unknown as Json);
+    else if (value !== "__inline") p.onChange(p.path, { partId: value });
+  };
   return (
-    <FieldShell label={p.label} error={p.error} problems={p.problems} field={p.path}>
-      <select
-        aria-label={p.label}
-        className={inputClass}
-        disabled={p.disabled}
-        value={inlineName ? "__inline" : partId}
-        onChange={(e) => p.onChange(p.path, e.target.value ? { partId: e.target.value } : undefined)}
-      >
-        <option value="">— none —</option>
-        {inlineName && <option value="__inline">{inlineName} (typed in)</option>}
-        {(options.data ?? []).map((o) => (
-          <option key={o.id} value={o.id}>
-            {o.name} · {o.provenance}{o.verified ? " ✓" : ""}
-          </option>
-        ))}
-      </select>
-    </FieldShell>
+    <>
+      <FieldShell label={p.label} error={p.error} problems={p.problems} field={p.path}>
+        <select aria-label={p.label} className={inputClass} disabled={p.disabled} value={isInline ? "__inline" : partId} onChange={(e) => onSelect(e.target.value)}>
+          <option value="">— none —</option>
+          {inlineName !== null && <option value="__inline">{inlineName} (typed in)</option>}
+          <option value="__new">Type one in here…</option>
+          {(options.data ?? []).length > 0 && (
+            <optgroup label="Parts bin">
+              {(options.data ?? []).map((o) => (
+                <option key={o.id} value={o.id}>
+                  {o.name} · {o.provenance}{o.verified ? " ✓" : ""}
+                </option>
+              ))}
+            </optgroup>
+          )}
+          {starters.length > 0 && (
+            <optgroup label="Starter bin (estimates)">
+              {starters.map((s) => (
+                <option key={s.key} value={`starter:${s.key}`}>{s.name}</option>
+              ))}
+            </optgroup>
+          )}
+        </select>
+      </FieldShell>
+      {picked && !p.disabled && (
+        <button type="button" className="self-end justify-self-start pb-2 text-xs text-ink-soft hover:text-ember" onClick={() => p.onChange(p.path, { name: `${picked.name} (edited copy)`, inline: picked.specs as Json })}>
+          Copy “{picked.name}” here to edit it
+        </button>
+      )}
+      {isInline && current && <InlinePart kind={kind} slotPath={p.path} slot={current} onChange={p.onChange} issues={issues} disabled={p.disabled} />}
+    </>
   );
 }
 

@@ -105,8 +105,10 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   };
   const f = (path: DesignField) => {
     fields.push(path);
-    const mine = issues.filter((i) => fieldForIssue(i.path, EDITOR_FIELDS) === path).map((i) => i.message);
-    return { design, path, label: DESIGN_LABELS[path], onChange: change, error: mine.length ? mine.join("; ") : undefined, problems: placed.byField.get(path), disabled: !canEdit };
+    // Issues inside a typed-in part go to its own fields (InlinePart); the rest to this field.
+    const inside = (i: { path: string }) => designPath(i.path).startsWith(`${path}.inline.`) || designPath(i.path) === `${path}.name`;
+    const mine = issues.filter((i) => fieldForIssue(i.path, EDITOR_FIELDS) === path && !inside(i)).map((i) => i.message);
+    return { design, path, label: DESIGN_LABELS[path], onChange: change, error: mine.length ? mine.join("; ") : undefined, problems: placed.byField.get(path), disabled: !canEdit, issues: issues.filter(inside) };
   };
   const kindOf = (path: string) => String(getPath(design, `${path}.kind`) ?? "");
 

@@ -55,6 +55,9 @@ export function InlinePart({ kind, slotPath, slot, onChange, issues, disabled }:
   const queryClient = useQueryClient();
   const [keepState, setKeepState] = useState<{ busy: boolean; message: string | null }>({ busy: false, message: null });
   const inline = (slot.inline && typeof slot.inline === "object" && !Array.isArray(slot.inline) ? slot.inline : {}) as JsonObject;
+  // A part just started is open to type in; a filled one (a starting point's) stays folded until asked.
+  const [open, setOpen] = useState(Object.keys(inline).length === 0);
+  const hasIssues = issues.some((i) => i.path.replace(/^design\./, "").startsWith(`${slotPath}.`));
   const variant = def.discriminator ? String(inline[def.discriminator] ?? "") : undefined;
   const fields = def.fields.filter((f) => f.variant === undefined || f.variant === variant);
   const rel = (p: string) => p.replace(/\[(\d+)\]/g, ".$1");
@@ -82,9 +85,18 @@ export function InlinePart({ kind, slotPath, slot, onChange, issues, disabled }:
   }
 
   return (
-    <div className="col-span-full rounded border border-dashed border-ember/50 bg-white/70 p-3" data-testid={`inline-${slotPath}`}>
-      <p className="mb-2 text-xs text-ink-soft">
-        {def.label} typed in here: it travels with this build. The same checks as the Parts bin apply; what you leave empty stays empty.
+    <details
+      className="col-span-full rounded border border-dashed border-ember/50 bg-white/70 p-3"
+      data-testid={`inline-${slotPath}`}
+      open={open || hasIssues}
+      onToggle={(e) => setOpen((e.currentTarget as HTMLDetailsElement).open)}
+    >
+      <summary className="cursor-pointer text-sm">
+        <span className="font-medium">{String(slot.name ?? "") || `New ${def.label.toLowerCase()}`}</span>
+        <span className="text-ink-soft"> · typed in here{hasIssues ? " · needs attention" : ""}</span>
+      </summary>
+      <p className="my-2 text-xs text-ink-soft">
+        It travels with this build. The same checks as the Parts bin apply; what you leave empty stays empty.
       </p>
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
         <label className="block text-sm" data-field={`${slotPath}.name`}>
@@ -135,6 +147,6 @@ export function InlinePart({ kind, slotPath, slot, onChange, issues, disabled }:
           {keepState.message && <span role="alert" className="text-over">{keepState.message}</span>}
         </div>
       )}
-    </div>
+    </details>
   );
 }

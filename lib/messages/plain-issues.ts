@@ -119,17 +119,20 @@ function meantBranch(branches: readonly (readonly Issue[])[]): readonly Issue[] 
   return sorted[0] ?? null;
 }
 
-/** Flattens unions into the issues of the option meant, with full paths. */
-function flatten(issue: Issue, prefix: readonly PathKey[] = []): { path: PathKey[]; issue: Issue }[] {
+/**
+ * Flattens unions into the issues of the option meant, with full paths. An unknown key is
+ * named by its own label, while the machine path stays at the object that refused it.
+ */
+function flatten(issue: Issue, prefix: readonly PathKey[] = []): { path: PathKey[]; labelPath: PathKey[]; issue: Issue }[] {
   const path = [...prefix, ...(issue.path as PathKey[])];
   if (issue.code === "invalid_union" && isLibraryWording(issue.message) && "errors" in issue && Array.isArray(issue.errors)) {
     const branch = meantBranch(issue.errors as Issue[][]);
     if (branch) return branch.flatMap((inner) => flatten(inner, path));
   }
   if (issue.code === "unrecognized_keys") {
-    return issue.keys.map((key) => ({ path: [...path, key], issue }));
+    return issue.keys.map((key) => ({ path, labelPath: [...path, key], issue }));
   }
-  return [{ path, issue }];
+  return [{ path, labelPath: path, issue }];
 }
 
 /** The problem alone, in plain words, for one issue. */
@@ -164,8 +167,8 @@ export function plainIssues(error: z.ZodError, resolve?: LabelResolver): PlainIs
   const out: PlainIssue[] = [];
   const seen = new Set<string>();
   for (const top of error.issues) {
-    for (const { path, issue } of flatten(top)) {
-      const label = labelFor(path, resolve);
+    for (const { path, labelPath, issue } of flatten(top)) {
+      const label = labelFor(labelPath, resolve);
       const problem = problemWords(issue);
       // Our own full sentences ("Give the build a title.") already say which field they mean.
       const message = /^[A-Z]/.test(problem) && /[.?!]$/.test(problem) ? problem : `${label}: ${problem}`;

@@ -12,7 +12,7 @@ let buildId = "";
 async function rowCounts(): Promise<Record<string, number>> {
   return withTestDb(async (conn) => {
     const out: Record<string, number> = {};
-    for (const table of ["build", "build_revision", "revision_part", "revision_result"]) {
+    for (const table of ["build", "build_revision", "revision_part", "solve_cache"]) {
       const [rows] = await conn.query(`SELECT COUNT(*) AS n FROM ${table}`);
       out[table] = Number((rows as { n: number }[])[0]!.n);
     }

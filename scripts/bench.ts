@@ -1,6 +1,7 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
 import { benchBuilds } from "./bench-builds";
 import { benchFit } from "./bench-fit";
+import { benchPages } from "./bench-pages";
 import { benchParts } from "./bench-parts";
 import { benchPreview } from "./bench-preview";
 import { benchRetrofit } from "./bench-retrofit";
@@ -13,6 +14,7 @@ async function main(): Promise<void> {
   await benchBuilds();
   await benchPreview();
   await benchFit();
+  await benchPages();
 }
 
 main().catch((e: unknown) => {

@@ -1,9 +1,10 @@
 "use client";
 
-import { delta, temp, VERDICT_STYLE } from "@/components/budget/format";
+import { VERDICT_STYLE } from "@/components/budget/format";
 import { HeatPathDiagram } from "@/components/budget/heat-path-diagram";
 import type { Evaluation, Scenario } from "@/components/budget/types";
 import { useMe } from "@/components/shell/use-me";
+import { formatAgainstLimit, formatFigure, formatHeadroom } from "@/lib/units/figures";
 
 function worstLimit(s: Scenario) {
   const limits = s.thermal?.limits ?? [];
@@ -51,14 +52,15 @@ export function LiveCheck({ evaluation, unsaved, revision, checking, ambientC }:
           <tbody>
             {evaluation.scenarios.map((s) => {
               const w = worstLimit(s);
+              const shown = w ? formatAgainstLimit(w.temperatureC, w.limitC, w.kind, "temperature", { temperatureUnit: unit }) : null;
               return (
                 <tr key={s.id} className="border-t border-line">
                   <td className="py-1">{s.kind === "charging" ? "Charging" : `Mode “${s.name}”`}</td>
                   <td className="py-1">
                     <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[s.thermal?.verdict ?? ""] ?? "border-line"}`}>{s.thermal?.verdict ?? "not worked out"}</span>
                   </td>
-                  <td className="py-1 tabular-nums">{w ? delta(w.headroomK, unit) : "–"}</td>
-                  <td className="py-1 text-xs text-ink-soft">{w ? `${w.place}: ${temp(w.temperatureC, unit)} of ${temp(w.limitC, unit)}` : "–"}</td>
+                  <td className="py-1 tabular-nums">{w ? formatHeadroom(w.headroomK, { temperatureUnit: unit }) : "–"}</td>
+                  <td className="py-1 text-xs text-ink-soft">{w && shown ? `${w.place}: ${shown.value} ${shown.relation} ${shown.limit}` : "–"}</td>
                 </tr>
               );
             })}
@@ -71,6 +73,11 @@ export function LiveCheck({ evaluation, unsaved, revision, checking, ambientC }:
             {state}, mode “{first.name}”: each box is a place that holds a temperature, each line a way the heat crosses (thicker: more watts).
           </figcaption>
           <HeatPathDiagram scenario={first} ambientC={ambientC} unit={unit} />
+          <ul className="grid gap-x-4 text-xs text-ink-soft sm:grid-cols-2">
+            {first.thermal.links.filter((l) => Math.abs(l.watts) > 1e-6).map((l) => (
+              <li key={l.index}>{l.place}: {formatFigure(l.watts, "power")}</li>
+            ))}
+          </ul>
         </figure>
       ) : (
         <p className="text-sm text-ink-soft">Pick an emitter and a driver (or cells and a charger) to see the heat path.</p>

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { NETWORK_LIMITS } from "./constants";
+import { SURFACES } from "./correlations";
 import { referenceIssues, transientIssues } from "./validate";
 
 /**
@@ -29,7 +30,7 @@ const linkBase = {
   label: z.string().max(200).optional(),
 };
 
-export const surfaceSchema = z.enum(["vertical-plate", "horizontal-plate-up", "horizontal-plate-down", "horizontal-cylinder"]);
+export const surfaceSchema = z.enum(SURFACES);
 
 const emissivity = z.number().gt(0, "emissivity must be in (0, 1]").max(1, "emissivity must be in (0, 1]");
 const length = positive(1e3, 1e-9);
@@ -72,7 +73,8 @@ export const finnedHeatsinkLinkSchema = z.object({
   finHeightM: length,
   finThicknessM: length,
   conductivityWPerMK: conductivity,
-  emissivity,
+  /** 0: the envelope's radiation is left to a radiation link of its own (to what the sink sees). */
+  emissivity: z.number().min(0, "emissivity must be in [0, 1]").max(1, "emissivity must be in [0, 1]"),
   /** Air speed through the channels from a fan, m/s; absent or 0 means still air. */
   airSpeedMPerS: finite(0, 100).optional(),
   /** Whether the back of the base also faces the air (default false: it is mounted). */

@@ -38,11 +38,12 @@ export const DELETE = route<Ctx>(async (_request, { params }) => {
   const user = await requireUser();
   const build = await loadBuild({ id: (await params).id, viewer: user });
   if (!build.access.isOwner) throw new ApiError("forbidden:build", "Only the owner deletes a build.");
-  // A review points at exactly what was checked: such a build is archived, not destroyed.
+  // A review or a class points at exactly what was checked: such a build is archived, not destroyed.
   const refs = await buildReferences({ id: build.id });
-  if (refs.reviews > 0) {
+  if (refs.reviews > 0 || refs.classwork > 0) {
     await setBuildArchived({ id: build.id, archived: true });
-    return json({ ok: true, deleted: false, archived: true, message: `“${build.title}” was archived, not deleted: ${refs.reviews === 1 ? "a review points" : `${refs.reviews} reviews point`} at its revisions.` });
+    const who = [refs.reviews > 0 ? (refs.reviews === 1 ? "a review" : `${refs.reviews} reviews`) : null, refs.classwork > 0 ? "a class" : null].filter(Boolean).join(" and ");
+    return json({ ok: true, deleted: false, archived: true, message: `“${build.title}” was archived, not deleted: ${who} ${refs.reviews + refs.classwork === 1 ? "points" : "point"} at its revisions.` });
   }
   await deleteBuild({ id: build.id });
   return json({ ok: true, deleted: true, archived: false });

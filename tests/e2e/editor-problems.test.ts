@@ -58,12 +58,12 @@ describe("the Heat path editor shows the evaluation's problems by their fields, 
     await page.getByTestId("live-verdict").waitFor({ timeout: 30_000 });
     expect(await page.getByTestId("live-state").textContent()).toContain("as saved");
     // One cell instead of two: the pack now suits the driver; the draft is checked before saving.
-    await page.getByRole("textbox", { name: "Cells in series", exact: true }).fill("1");
+    await page.getByRole("spinbutton", { name: "Cells in series", exact: true }).fill("1");
     await page.getByTestId("live-state").filter({ hasText: "Unsaved draft" }).waitFor({ timeout: 30_000 });
     const cellField = page.locator("label").filter({ has: page.getByRole("combobox", { name: "Cell", exact: true }) });
     await cellField.getByTestId("field-problem").filter({ hasText: "outside the driver's input range" }).waitFor({ state: "detached", timeout: 30_000 });
     // A fraction where a whole number belongs: the message sits under the field, named by its label.
-    await page.getByRole("textbox", { name: "Chargers in parallel", exact: true }).fill("2.5");
+    await page.getByRole("spinbutton", { name: "Chargers in parallel", exact: true }).fill("2.5");
     const chargers = page.locator("[data-field='pack.chargerCount']");
     await chargers.getByText("Chargers in parallel: must be a whole number").waitFor({ timeout: 30_000 });
     await page.evaluate(() => window.scrollTo(0, 0));

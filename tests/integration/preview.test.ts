@@ -30,7 +30,7 @@ beforeAll(async () => {
 describe("POST /api/v1/builds/[id]/preview", () => {
   it("evaluates the unsaved design (the answer follows the draft) and writes no row", async () => {
     const before = await rowCounts();
-    const cool = await owner.post(`/api/v1/builds/${buildId}/preview`, { design: retrofitDesign(ids, "strapped", 20) });
+    const cool = await owner.post(`/api/v1/builds/${buildId}/preview`, { design: retrofitDesign(ids, "floating", 20) });
     const hot = await owner.post(`/api/v1/builds/${buildId}/preview`, { design: retrofitDesign(ids, "floating", 55) });
     expect(cool.status, JSON.stringify(cool.body)).toBe(200);
     expect(hot.status).toBe(200);
@@ -38,8 +38,10 @@ describe("POST /api/v1/builds/[id]/preview", () => {
     expect(cool.body.valid).toBe(true);
     type Ev = { scenarios: { kind: string; thermal: { temperaturesC: Record<string, number> } | null }[] };
     const junction = (b: typeof cool.body) => (b.evaluation as Ev).scenarios.find((s) => s.kind === "mode")!.thermal!.temperaturesC;
-    // 35 K warmer air and a floating driver: every place of the draft is warmer.
+    // The same draft in 35 K warmer air: every place of it is warmer.
     const [a, b] = [junction(cool.body), junction(hot.body)];
+    expect(Object.keys(b).sort()).toEqual(Object.keys(a).sort());
+    expect(Object.keys(a).length).toBeGreaterThan(2);
     for (const node of Object.keys(a)) expect(b[node]!, node).toBeGreaterThan(a[node]!);
     expect(await rowCounts()).toEqual(before);
     const saved = await owner.get(`/api/v1/builds/${buildId}`);

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { listBuilds, type BuildSummary } from "@/db/queries/builds";
 import { BuildRowActions } from "@/components/builds/build-row-actions";
+import { BuildsNotice } from "@/components/builds/builds-notice";
 import { NewBuildButton } from "@/components/builds/new-build-button";
 import { requirePageUser } from "@/server/auth/session";
 
@@ -59,6 +60,7 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
         <button type="submit" className="rounded border border-line px-3 py-1.5 text-sm">Search</button>
         {q && <Link href="/builds" className="text-sm text-ink-soft hover:text-ember">Show all</Link>}
       </form>
+      <BuildsNotice />
       <section className="space-y-3">
         <h2 className="text-lg font-medium">Mine</h2>
         <BuildList builds={mine} ownerActions empty={q ? `None of your builds is called anything like “${q}”.` : "No builds yet. Start one, or copy a shared build."} />

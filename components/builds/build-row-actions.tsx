@@ -3,12 +3,13 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
+import { announceBuildsNotice } from "./builds-notice";
 
 const quiet = "text-ink-soft hover:text-ember";
 
 /**
  * The owner's actions on a row of the Builds list: rename in place, archive (or bring
- * back), and delete after a confirmation. A build a review points at is archived instead
+ * back), and delete after a confirmation. A build a review or a class points at is archived instead
  * of deleted; the answer says so.
  */
 export function BuildRowActions({ id, title, archived }: { id: string; title: string; archived: boolean }) {
@@ -22,7 +23,8 @@ export function BuildRowActions({ id, title, archived }: { id: string; title: st
     try {
       const text = await fn();
       setMode("idle");
-      if (text) setMessage({ text, bad: false });
+      // The row may move (an archived build leaves "Mine"): the list's notice line says what happened.
+      if (text) announceBuildsNotice(text);
       router.refresh();
     } catch (e) {
       setMessage({ text: e instanceof ApiClientError ? e.message : "The server did not answer; try again.", bad: true });

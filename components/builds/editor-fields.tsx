@@ -3,6 +3,7 @@
 import type { ReactNode } from "react";
 import type { PartKind } from "@/lib/parts";
 import type { Problem } from "@/lib/retrofit";
+import { formatQuantity, METRIC_PREFERENCES, type Quantity } from "@/lib/units";
 import { STARTER_PARTS, starterSlot } from "@/lib/starter";
 import { FieldProblems } from "./editor-problems";
 import { InlinePart, type SlotIssue } from "./inline-part";
@@ -90,8 +91,13 @@ export function PartSelect({ kind, issues = [], ...p }: FieldProps & { kind: Par
 }
 
 /** A number with a unit, typed as text ("18 mm", "30 °C"); the server parses and checks it as it is typed. */
-export function UnitInput({ unitHint, placeholder, ...p }: FieldProps & { unitHint: string; placeholder?: string }) {
-  const value = getPath(p.design, p.path);
+/**
+ * A value with its unit. A value stored as a number (from a starting point or a saved
+ * revision) is shown in the unit a person reads it in ("4 cm²", not "0.0004").
+ */
+export function UnitInput({ unitHint, placeholder, quantity, ...p }: FieldProps & { unitHint: string; placeholder?: string; quantity: Quantity }) {
+  const stored = getPath(p.design, p.path);
+  const value = typeof stored === "number" ? formatQuantity(stored, quantity, METRIC_PREFERENCES, { digits: 6 }) : stored;
   return (
     <FieldShell label={p.label} error={p.error} problems={p.problems} hint={unitHint} field={p.path}>
       <input

@@ -156,14 +156,14 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
           onChange={(_p, v) => change("lightEngine.mount", v === "through-reflector" ? { kind: v, reflector: { material: MATERIAL_CHOICES[0]?.[0] ?? "" } } : { kind: v ?? "in-housing-air" })}
         />
         {mountKind === "pressed-to-wall" && <PartSelect kind="interface" {...f("lightEngine.mount.interface")} />}
-        {mountKind === "pressed-to-wall" && <UnitInput unitHint="e.g. 9 cm^2" {...f("lightEngine.mount.contactAreaM2")} />}
+        {mountKind === "pressed-to-wall" && <UnitInput unitHint="e.g. 9 cm²" quantity="area" {...f("lightEngine.mount.contactAreaM2")} />}
         {mountKind === "through-reflector" && (
           <>
             <ChoiceSelect choices={MATERIAL_CHOICES} {...f("lightEngine.mount.reflector.material")} />
-            <UnitInput unitHint="e.g. 0.5 mm" {...f("lightEngine.mount.reflector.thicknessM")} />
-            <UnitInput unitHint="sink to rim, e.g. 30 mm" {...f("lightEngine.mount.reflector.lengthM")} />
-            <UnitInput unitHint="e.g. 12 cm" {...f("lightEngine.mount.reflector.meanCircumferenceM")} />
-            <UnitInput unitHint="e.g. 4 cm^2" {...f("lightEngine.mount.reflector.rimContactAreaM2")} />
+            <UnitInput unitHint="e.g. 0.5 mm" quantity="length" {...f("lightEngine.mount.reflector.thicknessM")} />
+            <UnitInput unitHint="sink to rim, e.g. 30 mm" quantity="length" {...f("lightEngine.mount.reflector.lengthM")} />
+            <UnitInput unitHint="e.g. 12 cm" quantity="length" {...f("lightEngine.mount.reflector.meanCircumferenceM")} />
+            <UnitInput unitHint="e.g. 4 cm²" quantity="area" {...f("lightEngine.mount.reflector.rimContactAreaM2")} />
             <PartSelect kind="interface" {...f("lightEngine.mount.interface")} />
           </>
         )}
@@ -188,7 +188,7 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         <IntInput min={1} max={16} {...f("pack.chargerCount")} />
       </Section>
       <Section title="Where and how it is used">
-        <UnitInput unitHint="e.g. 25 °C or 77 °F" {...f("environment.ambientC")} />
+        <UnitInput unitHint="e.g. 25 °C or 77 °F" quantity="temperature" {...f("environment.ambientC")} />
         <ChoiceSelect choices={[["upright", "Held upright"], ["lying", "Lying on its side"]]} {...f("environment.orientation")} />
         <ChoiceSelect
           choices={[["still", "Still air"], ["breeze", "A breeze"]]}

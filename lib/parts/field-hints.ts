@@ -27,8 +27,8 @@ export const FIELD_HINTS: Readonly<Record<PartKind, Readonly<Record<string, Fiel
     inputVoltageMinV: { placeholder: "2.8 V", typical: "2.7–3.0 V for one Li-ion cell" },
     inputVoltageMaxV: { placeholder: "4.2 V", typical: "4.2–4.5 V for one Li-ion cell" },
     maxBoardTempC: { placeholder: "100 °C", typical: "85–125 °C" },
-    boardAreaM2: { placeholder: "2.3 cm^2", typical: "17 mm round ≈ 2.3 cm²; 22 mm ≈ 3.8 cm²" },
-    groundPlaneAreaM2: { placeholder: "1.2 cm^2", typical: "about half the board area" },
+    boardAreaM2: { placeholder: "2.3 cm²", typical: "17 mm round ≈ 2.3 cm²; 22 mm ≈ 3.8 cm²" },
+    groundPlaneAreaM2: { placeholder: "1.2 cm²", typical: "about half the board area" },
   },
   heatsink: {
     sinkToAirKPerW: { placeholder: "8 K/W", typical: "2–20 K/W in still air for lamp-sized sinks" },
@@ -45,9 +45,9 @@ export const FIELD_HINTS: Readonly<Record<PartKind, Readonly<Record<string, Fiel
     massKg: { placeholder: "40 g", typical: "10–400 g" },
   },
   interface: {
-    conductivityWPerMK: { placeholder: "2 W/(m K)", typical: "paste 1–5, pad 1–6, adhesive 0.5–2 W/(m·K)" },
-    bondLineM: { placeholder: "50 um", typical: "paste 25–100 µm; pads 0.3–1 mm" },
-    resistancePerAreaKM2PerW: { placeholder: "0.00002 K m^2/W", typical: "10⁻⁵–10⁻⁴ K·m²/W" },
+    conductivityWPerMK: { placeholder: "2 W/(m·K)", typical: "paste 1–5, pad 1–6, adhesive 0.5–2 W/(m·K)" },
+    bondLineM: { placeholder: "50 µm", typical: "paste 25–100 µm; pads 0.3–1 mm" },
+    resistancePerAreaKM2PerW: { placeholder: "0.2 K·cm²/W", typical: "10⁻⁵–10⁻⁴ K·m²/W" },
   },
   spreader: {
     thicknessM: { placeholder: "0.1 mm", typical: "copper tape 0.05–0.1 mm; strip 0.5–2 mm" },
@@ -56,8 +56,8 @@ export const FIELD_HINTS: Readonly<Record<PartKind, Readonly<Record<string, Fiel
   },
   housing: {
     wallThicknessM: { placeholder: "1.5 mm", typical: "about 1–3 mm; sheet-steel lanterns 0.5–1 mm" },
-    outerAreaM2: { placeholder: "100 cm^2", typical: "torch 80–200 cm²; lantern 0.05–0.2 m²" },
-    innerAreaM2: { placeholder: "90 cm^2", typical: "a little below the outer area" },
+    outerAreaM2: { placeholder: "100 cm²", typical: "torch 80–200 cm²; lantern 0.05–0.2 m²" },
+    innerAreaM2: { placeholder: "90 cm²", typical: "a little below the outer area" },
     emissivity: { placeholder: "0.85", typical: "painted or anodised 0.8–0.95; polished metal 0.05–0.1" },
     massKg: { placeholder: "60 g", typical: "torch 40–150 g; lantern 200–800 g" },
   },

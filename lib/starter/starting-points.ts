@@ -8,10 +8,10 @@ export const STARTING_POINTS = ["torch", "lantern", "headlamp", "inspection-lamp
 export type StartingPoint = (typeof STARTING_POINTS)[number];
 
 export const STARTING_POINT_INFO: Record<StartingPoint, { label: string; title: string; description: string }> = {
-  torch: { label: "Torch", title: "My torch", description: "Aluminium torch body, a 3 W emitter on a small chipset sink pressed to the body, one 18650 cell and a 3-mode buck driver." },
-  lantern: { label: "Lantern", title: "My lantern", description: "Square steel lantern, a 3 W emitter on a mid-size finned sink in the housing air, two 18650 cells in parallel, a USB charger board." },
-  headlamp: { label: "Headlamp", title: "My headlamp", description: "Brass lamp body, a 1 W emitter pressed to the shell, one 18650 cell and a linear driver strapped with copper tape." },
-  "inspection-lamp": { label: "Inspection lamp", title: "My inspection lamp", description: "Aluminium body, a 10 W emitter on a mid-size finned sink pressed to the body, one 21700 cell, a buck driver on the wall." },
+  torch: { label: "Torch", title: "My torch", description: "Aluminium torch body, a 3 W emitter on a small chipset sink pressed to the body, a 3-mode buck driver (700 mA on high), one 18650 cell and a half-amp USB charger board." },
+  lantern: { label: "Lantern", title: "My lantern", description: "Square steel lantern, a 3 W emitter on a mid-size finned sink in the housing air, a 3-mode buck driver, two 18650 cells in parallel and a half-amp USB charger board." },
+  headlamp: { label: "Headlamp", title: "My headlamp", description: "Brass lamp body, a 1 W emitter pressed to the shell, a linear driver (350 mA on high) strapped with copper tape, one 18650 cell and a half-amp USB charger board." },
+  "inspection-lamp": { label: "Inspection lamp", title: "My inspection lamp", description: "Aluminium body, a 10 W emitter on a mid-size finned sink pressed to the body, a buck driver (2.8 A on high) on the wall, one 21700 cell and a one-amp USB charger board: a build that needs its heat path worked on." },
 };
 
 const common = { environment: { ambientC: 25, orientation: "upright", air: { kind: "still" }, contact: "hold-1min" } } as const;
@@ -23,9 +23,9 @@ export function startingDesign(point: StartingPoint): Record<string, unknown> {
       return {
         housing: starterSlot("housing-aluminium-torch"),
         housingShape: { form: "tube", characteristicLengthM: "25 mm" },
-        lightEngine: { emitter: starterSlot("emitter-3w"), count: 1, interface: starterSlot("paste"), heatsink: starterSlot("sink-chipset"), mount: { kind: "pressed-to-wall", interface: starterSlot("paste"), contactAreaM2: "4 cm^2" } },
-        driver: { part: starterSlot("driver-buck-3mode"), cooling: { kind: "ground-plane-to-wall", interface: starterSlot("pad") } },
-        pack: { cell: starterSlot("cell-18650-3000"), series: 1, parallel: 1, protection: starterSlot("protection-1cell"), charger: starterSlot("charger-usb-1a") },
+        lightEngine: { emitter: starterSlot("emitter-3w"), count: 1, interface: starterSlot("paste"), heatsink: starterSlot("sink-chipset"), mount: { kind: "pressed-to-wall", interface: starterSlot("paste"), contactAreaM2: "4 cm²" } },
+        driver: { part: starterSlot("driver-buck-3mode-low"), cooling: { kind: "ground-plane-to-wall", interface: starterSlot("pad") } },
+        pack: { cell: starterSlot("cell-18650-3000"), series: 1, parallel: 1, protection: starterSlot("protection-1cell"), charger: starterSlot("charger-usb-05a") },
         ...common,
         costs: { extras: [], comparableNewLightEur: 25 },
       };
@@ -34,8 +34,8 @@ export function startingDesign(point: StartingPoint): Record<string, unknown> {
         housing: starterSlot("housing-steel-lantern"),
         housingShape: { form: "box" },
         lightEngine: { emitter: starterSlot("emitter-3w"), count: 1, interface: starterSlot("paste"), heatsink: starterSlot("sink-finned-mid"), mount: { kind: "in-housing-air" } },
-        driver: { part: starterSlot("driver-buck-3mode"), cooling: { kind: "floating" } },
-        pack: { cell: starterSlot("cell-18650-2600"), series: 1, parallel: 2, protection: starterSlot("protection-1cell-high"), charger: starterSlot("charger-usb-1a") },
+        driver: { part: starterSlot("driver-buck-3mode-low"), cooling: { kind: "floating" } },
+        pack: { cell: starterSlot("cell-18650-2600"), series: 1, parallel: 2, protection: starterSlot("protection-1cell-high"), charger: starterSlot("charger-usb-05a") },
         ...common,
         costs: { extras: [], comparableNewLightEur: 40 },
       };
@@ -44,8 +44,8 @@ export function startingDesign(point: StartingPoint): Record<string, unknown> {
         housing: starterSlot("housing-brass-lamp"),
         housingShape: { form: "tube", characteristicLengthM: "70 mm" },
         lightEngine: { emitter: starterSlot("emitter-1w"), count: 1, interface: starterSlot("paste"), heatsink: starterSlot("sink-chipset"), mount: { kind: "pressed-to-wall", interface: starterSlot("paste") } },
-        driver: { part: starterSlot("driver-linear-3mode"), cooling: { kind: "strapped", spreader: starterSlot("copper-tape"), adhesive: starterSlot("adhesive") } },
-        pack: { cell: starterSlot("cell-18650-2600"), series: 1, parallel: 1, protection: starterSlot("protection-1cell"), charger: starterSlot("charger-usb-1a") },
+        driver: { part: starterSlot("driver-linear-3mode-low"), cooling: { kind: "strapped", spreader: starterSlot("copper-tape"), adhesive: starterSlot("adhesive") } },
+        pack: { cell: starterSlot("cell-18650-2600"), series: 1, parallel: 1, protection: starterSlot("protection-1cell"), charger: starterSlot("charger-usb-05a") },
         ...common,
         environment: { ...common.environment, contact: "hold-8h" },
         costs: { extras: [], comparableNewLightEur: 30 },

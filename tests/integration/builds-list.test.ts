@@ -11,6 +11,7 @@ let reviewer: Client;
 let reviewerEmail = "";
 const tag = Date.now().toString(36);
 const design = { lightEngine: { count: 1 }, environment: { ambientC: 25 } };
+let instructor: Client;
 
 async function rowExists(id: string): Promise<boolean> {
   return withTestDb(async (conn) => {
@@ -25,6 +26,7 @@ const ids = (list: unknown) => (list as Listed[]).map((b) => b.id);
 beforeAll(async () => {
   owner = await signedIn("maker@sinkwise.test");
   admin = await signedIn("admin@sinkwise.test");
+  instructor = await signedIn("instructor@sinkwise.test");
   other = (await newUser(admin, "maker", "list-other")).client;
   const r = await newUser(admin, "reviewer", "list-reviewer");
   reviewer = r.client;
@@ -95,5 +97,19 @@ describe("builds list: rename, archive, delete, search", () => {
     expect(await rowExists(id)).toBe(true);
     expect((await reviewer.get(`/api/v1/builds/${id}/revisions/1`)).status).toBe(200);
     expect(ids((await owner.get("/api/v1/builds")).body.archived)).toContain(id);
+  });
+
+  it("delete of a build a class's worked example points at archives it instead", async () => {
+    const id = await newBuild(instructor, { title: `Class example ${tag}`, design });
+    const cls = await instructor.post("/api/v1/classes", { name: `Archive test ${tag}`, term: "Autumn" });
+    expect(cls.status, JSON.stringify(cls.body)).toBe(201);
+    const example = await instructor.post(`/api/v1/classes/${(cls.body.class as { id: string }).id}/examples`, { title: "Where the heat goes", narrative: "Read it first.", buildId: id });
+    expect(example.status, JSON.stringify(example.body)).toBe(201);
+    const r = await instructor.request("DELETE", `/api/v1/builds/${id}`);
+    expect(r.status).toBe(200);
+    expect(r.body).toMatchObject({ deleted: false, archived: true });
+    expect(String(r.body.message)).toMatch(/archived, not deleted: a class points at its revisions/);
+    expect(await rowExists(id)).toBe(true);
+    expect(ids((await instructor.get("/api/v1/builds")).body.archived)).toContain(id);
   });
 });

@@ -53,4 +53,16 @@ describe("new build from a starting point", () => {
     expect(ev.problems.filter((p) => p.severity === "error").map((p) => p.field)).not.toContain("lightEngine.emitter");
     expect(JSON.stringify(ev)).not.toContain("NaN");
   });
+
+  it.each(STARTING_POINTS)("%s: the driver's highest mode drives the emitter no harder than the current the emitter's figures are stated at", (point) => {
+    const design = buildDesignSchema.parse(startingDesign(point));
+    const resolved = resolveBuild(design, () => undefined);
+    expect(resolved.ok).toBe(true);
+    if (!resolved.ok) return;
+    const emitter = resolved.build.lightEngine.emitter!.specs as { vfRefCurrentA: number };
+    const modes = (resolved.build.driver.part!.specs as { modes: { outputCurrentA?: number }[] }).modes;
+    const highest = Math.max(...modes.map((m) => m.outputCurrentA ?? 0));
+    expect(highest).toBeGreaterThan(0);
+    expect(highest, point).toBeLessThanOrEqual(emitter.vfRefCurrentA * 1.0001);
+  });
 });

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ARTEFACTS, launch, type Page } from "../support/browser";
 import { BASE_URL, uniqueEmail } from "../support/http";
+import { waitForMail } from "../support/mail";
 
 // The new maker's first Budget: sign up, start a torch from a starting point, swap in a
 // typed-in salvaged finned sink (by its geometry) and a linear driver given by what it
@@ -33,11 +34,19 @@ describe("a new maker's first Budget from a starting point, in chromium", () => 
       inputs++;
     };
 
+    const email = uniqueEmail("new-maker");
     await page.goto(`${BASE_URL}/signup`);
     await fill("Name", "New Maker");
-    await fill("E-mail", uniqueEmail("new-maker"));
+    await fill("E-mail", email);
     await fill("Password (at least 10 characters)", "a long enough passphrase");
     await click(page.getByRole("button", { name: "Create account" }));
+    // The account is made from the mailed link (one more page, one more click).
+    await page.getByRole("status").waitFor();
+    const mail = await waitForMail(email, "Finish making your Sinkwise account");
+    const link = /http\S+\/signup\/finish\/[A-Za-z0-9_-]+/.exec(mail.text ?? "")?.[0];
+    expect(link, "the sign-up mail carries its link").toBeTruthy();
+    await page.goto(link ?? BASE_URL);
+    await click(page.getByRole("button", { name: "Make my account" }));
     await page.waitForURL(`${BASE_URL}/builds`);
 
     await click(page.getByRole("button", { name: "New build" }));

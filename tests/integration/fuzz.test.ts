@@ -152,7 +152,9 @@ async function sendAll(client: Client, method: string, payloads: Payload[]): Pro
         status = CLOSED_EARLY;
       }
       statuses.set(status, (statuses.get(status) ?? 0) + 1);
-      if (status >= 200 && status < 300) accepted.push(`${status} ${p.path.slice(0, 80)} ${p.type} ${p.body.slice(0, 300)}`);
+      // The live editor's preview answers 200 with the draft's problems (`valid: false`): a refusal in other words.
+      const refusedInBody = (answer as { valid?: unknown; issues?: unknown } | null)?.valid === false && Array.isArray((answer as { issues?: unknown[] }).issues) && (answer as { issues: unknown[] }).issues.length > 0;
+      if (status >= 200 && status < 300 && !refusedInBody) accepted.push(`${status} ${p.path.slice(0, 80)} ${p.type} ${p.body.slice(0, 300)}`);
       if (status >= 500) fiveXX.push(`${status} ${p.path.slice(0, 80)} ${p.type} ${p.body.slice(0, 120)} → ${JSON.stringify(answer).slice(0, 200)}`);
     }
   };

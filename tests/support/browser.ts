@@ -24,7 +24,22 @@ export async function launch(): Promise<{ browser: BrowserContext; close: () => 
       "--host-resolver-rules=MAP * ~NOTFOUND, EXCLUDE localhost, EXCLUDE 127.0.0.1",
     ],
   });
-  return { browser: context, close: () => context.close() };
+  // Every page is watched for scripts or styles the Content-Security-Policy blocked: a test
+  // whose pages broke the policy fails when its browser closes, naming what was blocked.
+  const blocked: string[] = [];
+  const watch = (page: Page) =>
+    page.on("console", (message) => {
+      if (/Content Security Policy/i.test(message.text())) blocked.push(`${page.url()}: ${message.text().slice(0, 300)}`);
+    });
+  context.pages().forEach(watch);
+  context.on("page", watch);
+  return {
+    browser: context,
+    close: async () => {
+      await context.close();
+      if (blocked.length) throw new Error(`The page's Content-Security-Policy blocked something:\n${blocked.slice(0, 5).join("\n")}`);
+    },
+  };
 }
 
 export async function signInThroughForm(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {

@@ -11,6 +11,8 @@ export interface Candidate {
   ownerName: string;
   currentRevision: number;
   mine: boolean;
+  /** The viewer was asked to review it. */
+  toReview: boolean;
 }
 
 /** Pick two to four of your builds and the ones shared with you, each at a revision. */
@@ -35,6 +37,7 @@ export function ComparePicker({ candidates, selected }: { candidates: Candidate[
                   {c.title}
                   {c.variantNote && <span className="text-ink-soft"> · {c.variantNote}</span>}
                   {!c.mine && <span className="text-ink-soft"> · {c.ownerName}</span>}
+                  {c.toReview && <span className="ml-1 rounded bg-ember-soft px-1 text-xs text-ember">asked to review</span>}
                 </span>
               </label>
               {item && c.currentRevision > 1 && (

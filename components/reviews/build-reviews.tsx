@@ -43,7 +43,7 @@ export async function BuildReviews({ buildId, viewer }: { buildId: string; viewe
       {build.access.isOwner && (
         <>
           <RequestReviewForm buildId={build.id} currentRevision={build.currentRevision} />
-          <SharePanel buildId={build.id} currentRevision={build.currentRevision} />
+          <SharePanel scope={{ kind: "build", buildId: build.id }} currentRevision={build.currentRevision} />
         </>
       )}
     </section>

@@ -1,0 +1,93 @@
+"use client";
+
+import { useState } from "react";
+import { Bar } from "react-chartjs-2";
+import "@/components/budget/chart-setup";
+import { SERIES_COLOURS } from "@/components/budget/chart-setup";
+import { HeatPathDiagram } from "@/components/budget/heat-path-diagram";
+import { compareFormat } from "@/lib/compare";
+import type { CompareAnswer } from "./use-compare";
+
+/**
+ * One scenario, chosen once for every column: each variant's heat path (watts and K/W on
+ * every link), then a temperature ladder for every place that has a limit, the columns side
+ * by side on a shared axis so the same place can be read across.
+ */
+export function ScenarioColumns({ data, ambientC }: { data: CompareAnswer; ambientC: number[] }) {
+  const scenarios = data.sideBySide;
+  // Open on the scenario with the most spread between the columns on any limited place.
+  const [id, setId] = useState(() => {
+    let best = scenarios[0]?.scenarioId ?? "";
+    let spread = -1;
+    for (const s of scenarios) {
+      for (const l of s.ladders) {
+        const t = l.columns.flatMap((c) => (c ? [c.temperatureC] : []));
+        const d = t.length > 1 ? Math.max(...t) - Math.min(...t) : 0;
+        if (d > spread) [best, spread] = [s.scenarioId, d];
+      }
+    }
+    return best;
+  });
+  const s = scenarios.find((x) => x.scenarioId === id) ?? scenarios[0];
+  if (!s) return <p className="text-sm text-ink-soft">No scenario could be worked out.</p>;
+  const cols = data.columns.length;
+  return (
+    <div className="space-y-4">
+      <div role="tablist" aria-label="Scenario for every column" className="flex flex-wrap gap-2">
+        {scenarios.map((x) => (
+          <button key={x.scenarioId} type="button" role="tab" aria-selected={x.scenarioId === s.scenarioId} onClick={() => setId(x.scenarioId)} className={`rounded-full border px-3 py-0.5 text-sm ${x.scenarioId === s.scenarioId ? "border-ember bg-ember text-white" : "border-line bg-white hover:border-ember"}`}>
+            {x.label}
+          </button>
+        ))}
+      </div>
+      <div className="grid gap-3" style={{ gridTemplateColumns: `repeat(${cols}, minmax(0, 1fr))` }} data-testid="compare-heat-paths">
+        {s.heatPaths.map((h, i) => (
+          <figure key={i} className="min-w-0 rounded border border-line bg-white/70 p-2">
+            <figcaption className="mb-1 truncate text-xs font-medium" style={{ color: SERIES_COLOURS[i] }}>{data.columnNames[i]}</figcaption>
+            {h ? <HeatPathDiagram scenario={{ thermal: h }} ambientC={ambientC[i] ?? 25} unit="C" /> : <p className="text-xs text-ink-soft">Not worked out in {s.label}.</p>}
+          </figure>
+        ))}
+      </div>
+      <div className="space-y-3" data-testid="compare-place-ladders">
+        {s.ladders.map((l) => {
+          const max = Math.max(1, ...l.columns.map((c) => c?.riseK ?? 0));
+          return (
+            <section key={l.limitId} aria-label={`Ladder, ${l.place}`}>
+              <h3 className="mb-1 text-sm font-medium">{l.place}: where its rise goes</h3>
+              <div className="grid gap-3" style={{ gridTemplateColumns: `repeat(${cols}, minmax(0, 1fr))` }}>
+                {l.columns.map((c, i) => (
+                  <figure key={i} className="min-w-0 rounded border border-line bg-white/70 p-2">
+                    <figcaption className="mb-1 truncate text-xs" style={{ color: SERIES_COLOURS[i] }}>{data.columnNames[i]}</figcaption>
+                    {c ? (
+                      <>
+                        <div style={{ height: `${Math.max(3, c.steps.length + 1) * 1.6 + 2}rem` }}>
+                          <Bar
+                            data={{
+                              labels: [...c.steps.map((st) => st.place), ...(Math.abs(c.remainderK) > 0.05 ? ["rest"] : [])],
+                              datasets: [{ label: "K", data: [...c.steps.map((st) => st.deltaK), ...(Math.abs(c.remainderK) > 0.05 ? [c.remainderK] : [])], backgroundColor: SERIES_COLOURS[i] }],
+                            }}
+                            options={{
+                              indexAxis: "y",
+                              maintainAspectRatio: false,
+                              scales: { x: { min: 0, max: Math.ceil(max), title: { display: true, text: "K of the rise above ambient" } }, y: { ticks: { font: { size: 10 } } } },
+                              plugins: { legend: { display: false }, tooltip: { callbacks: { label: (ctx) => { const st = c.steps[ctx.dataIndex]; return st ? `${compareFormat.kelvin(st.deltaK)} = ${compareFormat.watts(st.watts)} × ${compareFormat.kelvinPerWatt(st.kelvinPerWatt)}` : compareFormat.kelvin(c.remainderK); } } } },
+                            }}
+                          />
+                        </div>
+                        <p className={`text-xs ${c.headroomK < 0 ? "text-over" : c.headroomK < 10 ? "text-tight" : "text-ink-soft"}`}>
+                          {compareFormat.celsius(c.temperatureC)} of {compareFormat.celsius(c.limitC)} · headroom {compareFormat.kelvin(c.headroomK)}
+                        </p>
+                      </>
+                    ) : (
+                      <p className="text-xs text-ink-soft">No ladder here.</p>
+                    )}
+                  </figure>
+                ))}
+              </div>
+            </section>
+          );
+        })}
+      </div>
+    </div>
+  );
+}

@@ -1,7 +1,7 @@
 import "server-only";
 import { drizzle, type MySql2Database } from "drizzle-orm/mysql2";
 import mysql from "mysql2/promise";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import * as schema from "./schema";
 
 export type Db = MySql2Database<typeof schema>;

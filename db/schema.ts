@@ -202,18 +202,21 @@ export const revisionParts = mysqlTable(
   (t) => [primaryKey({ columns: [t.revisionId, t.partId] }), index("revision_part_part_idx").on(t.partId)],
 );
 
-/** Cached evaluation of a revision; a new solver version makes old rows stale. */
-export const revisionResults = mysqlTable(
-  "revision_result",
+/**
+ * Cached evaluation of a revision, keyed by what the result depends on besides the revision
+ * (the solver version and a fingerprint of the parts as read): another key is a miss.
+ */
+export const solveCache = mysqlTable(
+  "solve_cache",
   {
     revisionId: varchar("revision_id", { length: 40 })
       .notNull()
       .references(() => buildRevisions.id, { onDelete: "cascade" }),
-    solverVersion: varchar("solver_version", { length: 40 }).notNull(),
+    cacheKey: varchar("cache_key", { length: 40 }).notNull(),
     result: json("result").notNull(),
     createdAt: datetime("created_at", { fsp: 3 }).notNull(),
   },
-  (t) => [primaryKey({ columns: [t.revisionId, t.solverVersion] })],
+  (t) => [primaryKey({ columns: [t.revisionId, t.cacheKey] })],
 );
 
 export const REVIEW_STATUSES = ["requested", "approved", "changes_requested", "rejected"] as const;

@@ -7,7 +7,7 @@
 import { randomBytes } from "node:crypto";
 import type mysql from "mysql2/promise";
 import { partSchema, type PartInput } from "../lib/parts";
-import { CATALOGUE } from "../db/seed/catalogue-data";
+import { CATALOGUE } from "./seed/catalogue-data";
 import { BENCH_DB, connectBenchDb, median, prepareBenchDb, quantile, startBenchServer } from "./bench-server";
 
 const PARTS = 5000;

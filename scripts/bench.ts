@@ -1,5 +1,6 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
 import { benchBuilds } from "./bench-builds";
+import { benchFit } from "./bench-fit";
 import { benchParts } from "./bench-parts";
 import { benchRetrofit } from "./bench-retrofit";
 import { benchThermal } from "./bench-thermal";
@@ -9,6 +10,7 @@ async function main(): Promise<void> {
   await benchRetrofit();
   await benchParts();
   await benchBuilds();
+  await benchFit();
 }
 
 main().catch((e: unknown) => {

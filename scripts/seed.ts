@@ -4,10 +4,10 @@ import { loadEnvFile } from "./load-env";
 loadEnvFile();
 
 async function main(): Promise<void> {
-  const { seedAccounts, DEMO_ACCOUNTS } = await import("@/db/seed/accounts");
-  const { seedCatalogue } = await import("@/db/seed/catalogue");
-  const { seedBuilds } = await import("@/db/seed/builds");
-  const { seedReviews } = await import("@/db/seed/reviews");
+  const { seedAccounts, DEMO_ACCOUNTS } = await import("./seed/accounts");
+  const { seedCatalogue } = await import("./seed/catalogue");
+  const { seedBuilds } = await import("./seed/builds");
+  const { seedReviews } = await import("./seed/reviews");
   const { pool } = await import("@/db/client");
   const password = process.env.DEMO_PASSWORD;
   if (!password || password.length < 10) throw new Error("DEMO_PASSWORD (at least 10 characters) is not set; run scripts/env.sh");

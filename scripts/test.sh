@@ -17,6 +17,16 @@ export S3_BUCKET="sinkwise-test"
 export SINKWISE_TEST_URL="$APP_URL"
 mkdir -p .data test-results
 
+# Several checkouts on one machine share its cores: at most two full runs at a time, the
+# others wait their turn (a run squeezed among many times out in its browser tests).
+if command -v flock >/dev/null 2>&1; then
+  waited=0
+  until { exec 8>/tmp/sinkwise-test-slot-1.lock && flock -n 8; } || { exec 8>/tmp/sinkwise-test-slot-2.lock && flock -n 8; }; do
+    [ "$waited" = 0 ] && echo "[test] another test run is using this machine: waiting for its turn"
+    waited=1; sleep 2
+  done
+fi
+
 ensure_chromium() {
   if [ -x /usr/bin/chromium ]; then return; fi
   echo "[test] chromium is missing: installing it from Debian's packages"
@@ -40,16 +50,16 @@ ensure_node_modules || fail_setup "npm ci"
 load_env
 ensure_chromium || fail_setup "chromium install"
 bash scripts/db.sh status >/dev/null 2>&1 && DB_WAS_RUNNING=1
-bash scripts/db.sh start || fail_setup "MariaDB"
+bash scripts/db.sh start 8>&- || fail_setup "MariaDB"
 bash scripts/db.sh drop-db "$DATABASE_NAME" && bash scripts/db.sh create-db "$DATABASE_NAME" || fail_setup "test database"
-bash scripts/services.sh start || fail_setup "local service fakes"
+bash scripts/services.sh start 8>&- || fail_setup "local service fakes"
 node_modules/.bin/tsx --conditions=react-server scripts/migrate.ts || fail_setup "migrations"
 node_modules/.bin/tsx --conditions=react-server scripts/seed.ts || fail_setup "seed"
 
 echo "[test] building"
 node node_modules/next/dist/bin/next build >.data/logs/test-build.log 2>&1 || { tail -n 40 .data/logs/test-build.log; fail_setup "next build"; }
 assert_port_free "$PORT" || fail_setup "port $PORT"
-node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" >.data/logs/test-server.log 2>&1 &
+node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" >.data/logs/test-server.log 2>&1 8>&- &
 SERVER_PID=$!
 wait_for_url "http://127.0.0.1:$PORT/api/v1/health" "$SERVER_PID" || { tail -n 40 .data/logs/test-server.log; fail_setup "server"; }
 

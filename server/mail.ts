@@ -1,6 +1,6 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 
 const holder = globalThis as unknown as { sinkwiseMailer?: Transporter };
 

@@ -1,7 +1,7 @@
 import "server-only";
 import { RateLimiterMySQL, RateLimiterRes } from "rate-limiter-flexible";
 import { pool } from "@/db/client";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { ApiError } from "@/lib/http/api-error";
 
 // Failed sign-ins are counted in MariaDB (table rate_limit, created by our migrations), so

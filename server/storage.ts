@@ -10,7 +10,7 @@ import {
   S3Client,
   S3ServiceException,
 } from "@aws-sdk/client-s3";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { ApiError } from "@/lib/http/api-error";
 
 // One client per process, kept on globalThis so hot reload does not open a new one each time.

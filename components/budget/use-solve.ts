@@ -2,9 +2,10 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { fetchJson } from "@/components/ui/fetch-json";
-import type { Evaluation } from "./types";
+import type { RevisionSolve } from "@/server/builds/solve";
 
-export type SolveAnswer = { buildId: string; revision: number; solverVersion: string; cached: boolean; evaluation: Evaluation };
+/** The solve route's answer, typed from the function that builds it. */
+export type SolveAnswer = RevisionSolve;
 
 /** The Budget's data: POST /api/v1/builds/[id]/solve for one revision (current by default). */
 export function useSolve(buildId: string, revision?: number) {

@@ -1,5 +1,7 @@
-import type { CsvError, PartKind, Provenance } from "@/lib/parts";
-import type { PartJson, PartSummaryJson } from "@/server/parts-api";
+import type { PartKind, Provenance } from "@/lib/parts";
+import type { PartJson, PartSummaryJson } from "@/server/parts/api";
+import type { AttachmentJson } from "@/server/parts/attachments";
+import type { ImportResultJson } from "@/server/parts/import";
 
 /** What the parts API answers, typed from the functions that build the answers (dates are ISO strings). */
 export type PartSummaryDto = PartSummaryJson;
@@ -12,31 +14,10 @@ export interface PartPageDto {
   pageSize: number;
 }
 
-export interface AttachmentDto {
-  id: string;
-  filename: string;
-  contentType: string;
-  sizeBytes: number;
-  createdAt: string;
-  url: string;
-}
+export type AttachmentDto = AttachmentJson;
 
-export interface ImportRowDto {
-  line: number;
-  ok: boolean;
-  name: string | null;
-  errors: CsvError[];
-}
-
-export interface ImportResultDto {
-  mode: "preview" | "commit";
-  kind: PartKind;
-  headerErrors: CsvError[];
-  rows: ImportRowDto[];
-  accepted: number;
-  rejected: number;
-  created?: number;
-}
+export type ImportResultDto = ImportResultJson;
+export type ImportRowDto = ImportResultJson["rows"][number];
 
 /** The Parts bin's filters, sort and page: the same names as the API's query string. */
 export interface PartsQuery {

@@ -2,7 +2,7 @@ import "server-only";
 import { and, desc, eq, ne, or, sql } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
 import { db } from "../client";
-import { buildMembers, buildRevisions, builds, reviews, revisionParts, revisionResults, users } from "../schema";
+import { buildMembers, buildRevisions, builds, reviews, revisionParts, solveCache, users } from "../schema";
 import { newId } from "./users";
 
 export interface BuildSummary {
@@ -207,23 +207,23 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
 }
 
 /** The cached result as stored JSON text, so a cache hit is sent without parsing it. */
-export async function getCachedResultText({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<string | undefined> {
+export async function getCachedResultText({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<string | undefined> {
   // Selected as plain SQL so the JSON column's text is not parsed on the way out.
   const rows = await db()
-    .select({ result: sql<string>`${revisionResults.result}` })
-    .from(revisionResults)
-    .where(and(eq(revisionResults.revisionId, revisionId), eq(revisionResults.solverVersion, solverVersion)))
+    .select({ result: sql<string>`${solveCache.result}` })
+    .from(solveCache)
+    .where(and(eq(solveCache.revisionId, revisionId), eq(solveCache.cacheKey, cacheKey)))
     .limit(1);
   const value: unknown = rows[0]?.result;
   if (value === undefined) return undefined;
   return typeof value === "string" ? value : JSON.stringify(value);
 }
 
-export async function putCachedResult({ revisionId, solverVersion, resultJson }: { revisionId: string; solverVersion: string; resultJson: string }): Promise<void> {
+export async function putCachedResult({ revisionId, cacheKey, resultJson }: { revisionId: string; cacheKey: string; resultJson: string }): Promise<void> {
   await db()
-    .insert(revisionResults)
-    .values({ revisionId, solverVersion, result: sql`${resultJson}`, createdAt: new Date() })
-    .onDuplicateKeyUpdate({ set: { result: sql`VALUES(${revisionResults.result})`, createdAt: new Date() } });
+    .insert(solveCache)
+    .values({ revisionId, cacheKey, result: sql`${resultJson}`, createdAt: new Date() })
+    .onDuplicateKeyUpdate({ set: { result: sql`VALUES(${solveCache.result})`, createdAt: new Date() } });
 }
 
 export interface BuildMemberRow {

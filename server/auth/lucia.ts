@@ -3,7 +3,7 @@ import { Mysql2Adapter } from "@lucia-auth/adapter-mysql";
 import { Lucia, TimeSpan } from "lucia";
 import { pool } from "@/db/client";
 import type { Role } from "@/db/schema";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 
 // Lucia v3 is kept inside this one module (and session.ts) so it can be swapped later.
 function createLucia() {

@@ -4,7 +4,7 @@ import { getCachedResultText, putCachedResult, type RevisionRow } from "@/db/que
 import type { PartRecord } from "@/db/queries/parts";
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, resolveBuild } from "@/lib/retrofit";
-import { toPartInput } from "@/server/parts-api";
+import { toPartInput } from "@/server/parts/api";
 import { loadDesignParts, type LoadedBuild } from "./load";
 
 /**
@@ -97,11 +97,11 @@ async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit
   const records = await loadDesignParts({ design: revision.design, viewer: { id: build.ownerId, role: "maker" } });
   const key = cacheKey(records);
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
-  const hit = await getCachedResultText({ revisionId: revision.id, solverVersion: key });
+  const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: key });
   if (hit !== undefined) return { head: { ...base, cached: true }, evaluationJson: hit };
   const evaluation = evaluateRevision({ design: revision.design, records });
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
-  await putCachedResult({ revisionId: revision.id, solverVersion: key, resultJson: evaluationJson });
+  await putCachedResult({ revisionId: revision.id, cacheKey: key, resultJson: evaluationJson });
   return { head: { ...base, cached: false }, evaluationJson, evaluation };
 }
 

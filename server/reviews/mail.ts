@@ -1,5 +1,5 @@
 import "server-only";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { REVIEW_STATUS_LABELS, type VerdictStatus } from "@/lib/reviews/api-schemas";
 import { sendMail } from "@/server/mail";
 

@@ -7,7 +7,7 @@ import { createParts, newBuild, retrofitDesign } from "../support/retrofit";
 // review; the reviewer pins a comment to the heat path and records a verdict; the maker sees it.
 let maker: Awaited<ReturnType<typeof launch>>;
 let reviewer: Awaited<ReturnType<typeof launch>>;
-// The demo lantern and its two variants (db/seed/builds.ts), or, on a database without the
+// The demo lantern and its two variants (scripts/seed/builds.ts), or, on a database without the
 // demo builds, the same three made through the API.
 const DEMO = { strapped: "Square lantern, 2-cell Li-ion", pressed: "Square lantern — driver pressed to the wall", floating: "Square lantern — driver floating free" };
 const titles = { ...DEMO };

@@ -6,7 +6,7 @@ import { PartActions } from "@/components/parts/part-actions";
 import { PartFields } from "@/components/parts/part-fields";
 import type { CurveKind } from "@/lib/curves";
 import { kindDefinition } from "@/lib/parts";
-import { loadPartPage } from "@/server/parts-api";
+import { loadPartPage } from "@/server/parts/api";
 
 export const metadata = { title: "Part" };
 

@@ -2,7 +2,7 @@ import { createPart, getPart, listParts } from "@/db/queries/parts";
 import { ApiError, fromZodError } from "@/lib/http/api-error";
 import { partListQuerySchema, partSchema, searchParamsObject } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
-import { currentViewer, partJson, queryOf, summaryJson, viewerOf } from "@/server/parts-api";
+import { currentViewer, partJson, queryOf, summaryJson, viewerOf } from "@/server/parts/api";
 import { json, readJson, route } from "@/server/route";
 
 /** The Parts bin: what the viewer may see, filtered, searched, sorted and paged in SQL. */

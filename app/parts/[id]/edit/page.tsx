@@ -1,7 +1,7 @@
 import Link from "next/link";
 import { redirect } from "next/navigation";
 import { PartForm } from "@/components/parts/part-form";
-import { loadPartPage } from "@/server/parts-api";
+import { loadPartPage } from "@/server/parts/api";
 
 export const metadata = { title: "Edit part" };
 

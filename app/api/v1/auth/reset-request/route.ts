@@ -1,6 +1,6 @@
 import { createPasswordResetToken, getUserByEmail } from "@/db/queries/users";
 import { resetRequestSchema } from "@/lib/auth/schemas";
-import { env } from "@/lib/env";
+import { env } from "@/server/env";
 import { sendMail } from "@/server/mail";
 import { json, readJson, route } from "@/server/route";
 

@@ -3,7 +3,7 @@ import { attachmentKeys } from "@/db/queries/part-attachments";
 import { ApiError, fromZodError } from "@/lib/http/api-error";
 import { PART_SCHEMAS, partPatchSchema } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
-import { currentViewer, editablePart, partJson, toPartInput, viewerOf, visiblePart } from "@/server/parts-api";
+import { currentViewer, editablePart, partJson, toPartInput, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, readJson, route } from "@/server/route";
 import { deleteObject } from "@/server/storage";
 

@@ -1,7 +1,7 @@
 import { listPartsForExport } from "@/db/queries/parts";
 import { ApiError, fromZodError } from "@/lib/http/api-error";
 import { MAX_EXPORT_ROWS, partListQuerySchema, partsToCsv, searchParamsObject } from "@/lib/parts";
-import { currentViewer, queryOf, toPartInput } from "@/server/parts-api";
+import { currentViewer, queryOf, toPartInput } from "@/server/parts/api";
 import { route } from "@/server/route";
 
 /** CSV of one kind: every part the Parts bin's filter shows (not only the current page). */

@@ -1,14 +1,9 @@
 import { createParts } from "@/db/queries/parts";
 import { ApiError } from "@/lib/http/api-error";
-import { MAX_IMPORT_ROWS, parsePartsCsv, partImportSchema, type CsvError, type CsvRowResult } from "@/lib/parts";
+import { MAX_IMPORT_ROWS, parsePartsCsv, partImportSchema, type CsvError } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
+import { importSummary, type ImportResultJson } from "@/server/parts/import";
 import { json, readJson, route } from "@/server/route";
-
-type RowJson = { line: number; ok: boolean; name: string | null; errors: CsvError[] };
-
-function rowJson(row: CsvRowResult): RowJson {
-  return row.ok ? { line: row.line, ok: true, name: row.part.name, errors: [] } : { line: row.line, ok: false, name: null, errors: row.errors };
-}
 
 function describe(error: CsvError): string {
   return `line ${error.line}${error.column ? `, ${error.column}` : ""}: ${error.message}`;
@@ -25,11 +20,9 @@ export const POST = route(async (request) => {
   if (result.rows.length > MAX_IMPORT_ROWS) {
     throw new ApiError("payload_too_large:import", `The file has ${result.rows.length} rows; import at most ${MAX_IMPORT_ROWS} at a time.`, "csv");
   }
-  const rows = result.rows.map(rowJson);
-  const accepted = rows.filter((r) => r.ok).length;
-  const rejected = rows.length - accepted;
-  const summary = { kind, headerErrors: result.headerErrors, rows, accepted, rejected };
-  if (mode === "preview") return json({ mode, ...summary });
+  const summary = importSummary(kind, result);
+  const { rows, accepted, rejected } = summary;
+  if (mode === "preview") return json({ mode, ...summary } satisfies ImportResultJson);
 
   const problems = [...result.headerErrors, ...result.rows.flatMap((r) => (r.ok ? [] : r.errors))];
   if (problems.length > 0 || accepted === 0) {
@@ -43,5 +36,5 @@ export const POST = route(async (request) => {
     return json({ ...error.toBody(), ...summary }, error.status);
   }
   const ids = await createParts({ ownerId: user.id, parts: result.rows.flatMap((r) => (r.ok ? [r.part] : [])) });
-  return json({ mode, ...summary, created: ids.length, ids }, 201);
+  return json({ mode, ...summary, created: ids.length, ids } satisfies ImportResultJson, 201);
 });

@@ -2,8 +2,8 @@ import { createAttachment, listAttachments } from "@/db/queries/part-attachments
 import { ApiError } from "@/lib/http/api-error";
 import { ATTACHMENT_TYPES, describeRefusedType, MAX_ATTACHMENT_BYTES, sanitiseFilename, sniffAttachmentType } from "@/lib/attachments";
 import { requireUser } from "@/server/auth/session";
-import { attachmentJson, readUpload } from "@/server/attachments";
-import { currentViewer, editablePart, viewerOf, visiblePart } from "@/server/parts-api";
+import { attachmentJson, readUpload } from "@/server/parts/attachments";
+import { currentViewer, editablePart, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, route } from "@/server/route";
 import { newObjectKey, putObject } from "@/server/storage";
 

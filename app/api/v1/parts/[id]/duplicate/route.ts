@@ -2,7 +2,7 @@ import { createPart, getPart } from "@/db/queries/parts";
 import { ApiError, fromZodError } from "@/lib/http/api-error";
 import { PART_SCHEMAS } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
-import { partJson, toPartInput, viewerOf, visiblePart } from "@/server/parts-api";
+import { partJson, toPartInput, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, route } from "@/server/route";
 
 const NAME_MAX = 120;

@@ -2,7 +2,7 @@ import { getPart, setPartVerified } from "@/db/queries/parts";
 import { ApiError } from "@/lib/http/api-error";
 import { verifySchema } from "@/lib/parts";
 import { requireUser } from "@/server/auth/session";
-import { partJson, viewerOf, visiblePart } from "@/server/parts-api";
+import { partJson, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, readJson, route } from "@/server/route";
 
 /** Admins curate the catalogue: a verified part has been checked against its source. */

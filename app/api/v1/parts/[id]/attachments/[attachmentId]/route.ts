@@ -1,8 +1,8 @@
 import { deleteAttachment, getAttachment } from "@/db/queries/part-attachments";
 import { ApiError } from "@/lib/http/api-error";
 import { requireUser } from "@/server/auth/session";
-import { contentDisposition } from "@/server/attachments";
-import { currentViewer, editablePart, viewerOf, visiblePart } from "@/server/parts-api";
+import { contentDisposition } from "@/server/parts/attachments";
+import { currentViewer, editablePart, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, route } from "@/server/route";
 import { deleteObject, getObjectStream } from "@/server/storage";
 

@@ -4,7 +4,7 @@ import { getPart, type PartRecord, type PartSummary } from "@/db/queries/parts";
 import { ApiError } from "@/lib/http/api-error";
 import { canEditPart, partNotes, PART_SCHEMAS, type PartInput, type PartViewer } from "@/lib/parts";
 import { notFound } from "next/navigation";
-import { currentUser, requirePageUser } from "./auth/session";
+import { currentUser, requirePageUser } from "@/server/auth/session";
 
 /** The caller as the visibility rule sees them: signed in (id, role) or anonymous. */
 export async function currentViewer(): Promise<PartViewer> {

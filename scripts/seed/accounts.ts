@@ -1,9 +1,9 @@
 import "server-only";
 import { eq } from "drizzle-orm";
 import { hashPassword } from "@/server/auth/password";
-import { db } from "../client";
-import { createUser } from "../queries/users";
-import { type Role, users } from "../schema";
+import { db } from "@/db/client";
+import { createUser } from "@/db/queries/users";
+import { type Role, users } from "@/db/schema";
 
 /** The demo workshop's people: one account per role. */
 export const DEMO_ACCOUNTS: readonly { email: string; displayName: string; role: Role; can: string }[] = [

@@ -3,9 +3,9 @@ import { and, eq } from "drizzle-orm";
 import { collectPartIds } from "@/lib/builds/part-ids";
 import type { z } from "zod";
 import { buildDesignSchema, type BuildDesignInput, type driverCoolingSchema } from "@/lib/retrofit";
-import { db } from "../client";
-import { createBuild } from "../queries/builds";
-import { builds } from "../schema";
+import { db } from "@/db/client";
+import { createBuild } from "@/db/queries/builds";
+import { builds } from "@/db/schema";
 import type { CatalogueKey } from "./catalogue";
 
 /**

@@ -2,9 +2,9 @@ import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { partSchema } from "@/lib/parts";
 import { fieldErrors, describeFieldError } from "@/lib/units";
-import { db } from "../client";
-import { newId } from "../queries/users";
-import { parts } from "../schema";
+import { db } from "@/db/client";
+import { newId } from "@/db/queries/users";
+import { parts } from "@/db/schema";
 import { CATALOGUE, type CatalogueKey } from "./catalogue-data";
 
 export { CATALOGUE, type CatalogueKey } from "./catalogue-data";

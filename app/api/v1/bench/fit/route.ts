@@ -1,0 +1,11 @@
+import { fitInputSchema, fitWarmUp } from "@/lib/bench";
+import { json, readJson, route } from "@/server/route";
+
+/** Fits a heatsink's resistance and heat capacity to a warm-up: computes and stores nothing, so like the quick check it needs no account. */
+export const POST = route(
+  async (request) => {
+    const input = await readJson(request, fitInputSchema, "bench");
+    return json(fitWarmUp(input));
+  },
+  { stateless: true },
+);

@@ -1,6 +1,7 @@
 "use client";
 
-import { heatColour, temp, type TempUnit } from "./format";
+import { formatFigure } from "@/lib/units/figures";
+import { heatColour, type TempUnit } from "./format";
 
 /** What the diagram reads of a scenario (a Budget scenario, or one column of Side by side). */
 type DiagramScenario = {
@@ -74,7 +75,7 @@ export function HeatPathDiagram({
         const x = 250 + (i % 8) * 42;
         const id = linkId(l.from, l.to);
         const on = selected === `link:${id}`;
-        const figures = `${l.watts.toFixed(2)} W · ${l.kelvinPerWatt.toFixed(2)} K/W`;
+        const figures = `${formatFigure(l.watts, "power")} · ${formatFigure(l.kelvinPerWatt, "thermalResistance")}`;
         const pinCount = pins?.[`link:${id}`] ?? 0;
         const mx = 55 + 0.75 * x;
         const my = (y1 + y2) / 2;
@@ -92,12 +93,12 @@ export function HeatPathDiagram({
         const c = n.id === "ambient" ? ambientC : (t.temperaturesC[n.id] ?? ambientC);
         const on = selected === `node:${n.id}`;
         const pinCount = pins?.[`node:${n.id}`] ?? 0;
-        const target = n.id === "ambient" ? {} : pickable("node", n.id, `${n.place}, ${temp(c, unit)}`);
+        const target = n.id === "ambient" ? {} : pickable("node", n.id, `${n.place}, ${formatFigure(c, "temperature", { temperatureUnit: unit })}`);
         return (
           <g key={n.id} {...target}>
             <rect x={10} y={y(n.id) - 16} width={210} height={32} rx={5} fill={on ? "#fdebd9" : "white"} stroke={heatColour(c, ambientC, hottest)} strokeWidth={on ? 3 : 2} />
             <text x={20} y={y(n.id) + 4} fontSize={12} fill="#2b2520">{n.place}</text>
-            <text x={212} y={y(n.id) + 4} fontSize={12} textAnchor="end" fill="#6b6158">{temp(c, unit)}</text>
+            <text x={212} y={y(n.id) + 4} fontSize={12} textAnchor="end" fill="#6b6158">{formatFigure(c, "temperature", { temperatureUnit: unit })}</text>
             {pinCount > 0 && <PinMark x={10} y={y(n.id) - 16} n={pinCount} />}
           </g>
         );

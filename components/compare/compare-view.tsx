@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { VERDICT_STYLE } from "@/components/budget/format";
+import { Traceable } from "@/components/budget/trace-view";
 import { ApiClientError } from "@/components/ui/fetch-json";
 import { compareFormat, SIGNIFICANCE, type FigureRow } from "@/lib/compare";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
@@ -19,7 +20,7 @@ function show(row: FigureRow, v: number | string | null): string {
   return typeof v === "number" ? compareFormat.inUnit(v, row.unit) : compareFormat.DASH;
 }
 
-function FigureRowView({ f }: { f: FigureRow }) {
+function FigureRowView({ f }: { f: CompareAnswer["figures"][number] }) {
   return (
     <tr className="border-t border-line" data-figure={f.key} data-matters={f.matters || undefined}>
       <td className="py-1 pr-3 text-ink-soft">{f.label}</td>
@@ -28,7 +29,7 @@ function FigureRowView({ f }: { f: FigureRow }) {
         const limit = f.limits?.[i] ?? null;
         return (
           <td key={i} className={`py-1 pr-3 ${j ? JUDGED[j] : ""}`} data-judgement={j ?? undefined}>
-            {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : show(f, v)}
+            {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={show(f, v)} trace={f.traces?.[i]} />}
             {limit !== null && <span className="ml-1 text-xs text-ink-soft">(limit {compareFormat.inUnit(limit, "°C")})</span>}
             {i > 0 && f.deltas[i] !== null && <span className="ml-1.5 text-xs">{compareFormat.signedInUnit(f.deltas[i] ?? null, f.unit)}</span>}
             {i > 0 && f.kind === "time" && j && j !== "same" && f.deltas[i] === null && <span className="ml-1.5 text-xs">{j}</span>}

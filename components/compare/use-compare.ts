@@ -3,6 +3,7 @@
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { fetchJson } from "@/components/ui/fetch-json";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
+import type { Trace } from "@/lib/thermal";
 import { itemsParam } from "@/lib/reviews/api-schemas";
 import type { Comparison } from "@/server/compare/load";
 

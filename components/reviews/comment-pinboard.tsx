@@ -2,7 +2,9 @@
 
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
-import { type TempUnit, delta, limitLabel, temp } from "@/components/budget/format";
+import { type TempUnit, limitLabel } from "@/components/budget/format";
+import { Traceable } from "@/components/budget/trace-view";
+import { formatAgainstLimit, formatHeadroom } from "@/lib/units/figures";
 import { type DiagramTarget, HeatPathDiagram } from "@/components/budget/heat-path-diagram";
 import type { Evaluation } from "@/components/budget/types";
 import { ApiClientError } from "@/components/ui/fetch-json";
@@ -89,15 +91,16 @@ export function CommentPinboard({
                       const key = `${scenario.id}/headroom/${l.id}`;
                       const on = anchor?.kind === "figure" && anchor.key === key;
                       const n = figureCount(key);
+                      const shown = formatAgainstLimit(l.temperatureC, l.limitC, l.kind, "temperature", { temperatureUnit: unit });
                       return (
                         <tr key={l.id} onClick={() => setAnchor({ kind: "figure", key })} data-pin-target={`figure:${key}`} className={`cursor-pointer border-t border-line ${on ? "bg-ember-soft" : "hover:bg-paper-deep"}`}>
                           <td className="py-1 pr-3">
                             <button type="button" className="text-left" onClick={(e) => { e.stopPropagation(); setAnchor({ kind: "figure", key }); }}>{limitLabel(l)}</button>
                             {n > 0 && <span className="ml-1 rounded bg-ember px-1 text-[10px] text-white">📌 {n}</span>}
                           </td>
-                          <td className="py-1 pr-3">{temp(l.temperatureC, unit)}</td>
-                          <td className="py-1 pr-3">{temp(l.limitC, unit)}</td>
-                          <td className={`py-1 pr-3 ${l.headroomK < 0 ? "text-over" : l.headroomK < 10 ? "text-tight" : ""}`}>{delta(l.headroomK, unit)}</td>
+                          <td className="py-1 pr-3">{shown.value}</td>
+                          <td className="py-1 pr-3">{shown.limit}</td>
+                          <td className={`py-1 pr-3 ${l.headroomK < 0 ? "text-over" : l.headroomK < 10 ? "text-tight" : ""}`}><Traceable label={formatHeadroom(l.headroomK, { temperatureUnit: unit })} trace={l.trace} /></td>
                         </tr>
                       );
                     })}

@@ -2,7 +2,7 @@ import "server-only";
 import type { RevisionRow } from "@/db/queries/builds";
 import { getComparison } from "@/db/queries/comparisons";
 import type { BuildViewer } from "@/lib/builds/access";
-import { columnNamesFor, designDiff, figureRows, ladders, sideBySide, summarise, warmupSeries } from "@/lib/compare";
+import { columnNamesFor, designDiff, figureRows, ladders, sideBySide, summarise, warmupSeries, withTraces } from "@/lib/compare";
 import { ApiError } from "@/lib/http/api-error";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import { buildDesignSchema, type BuildDesign } from "@/lib/retrofit";
@@ -78,7 +78,7 @@ export async function compareItems({ items, viewer }: { items: readonly CompareI
     differences,
     sideBySide: sideBySide(evals),
     ambientC: designs.map((d) => d.environment.ambientC),
-    figures: figureRows(evals),
+    figures: withTraces(figureRows(evals), evals),
     warmups: warmupSeries(evals),
     ladders: scenarioIds.map((id) => ({ scenarioId: id, scenarioName: evals.flatMap((e) => e.scenarios).find((s) => s.id === id)?.name ?? id, columns: ladders(evals, id) })),
   };

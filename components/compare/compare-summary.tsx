@@ -42,7 +42,7 @@ export function CompareSummary({ data }: { data: CompareAnswer }) {
                           {c.verdict && <span className={`ml-1.5 rounded border px-1 text-[11px] ${VERDICT_STYLE[c.verdict] ?? ""}`}>{c.verdict}</span>}
                         </div>
                         <div className="text-xs text-ink-soft">
-                          {compareFormat.celsius(c.deciding.temperatureC)} of {compareFormat.celsius(c.deciding.limitC)}
+                          {compareFormat.celsiusAgainst(c.deciding.temperatureC, c.deciding.limitC, c.deciding.kind).value} of {compareFormat.celsiusAgainst(c.deciding.temperatureC, c.deciding.limitC, c.deciding.kind).limit}
                           {c.fluxLm !== null && ` · ${compareFormat.lumens(c.fluxLm)}`}
                           {c.runtimeH !== null && ` · ${compareFormat.runtime(c.runtimeH)}`}
                         </div>

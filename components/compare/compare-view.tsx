@@ -27,10 +27,12 @@ function FigureRowView({ f }: { f: CompareAnswer["figures"][number] }) {
       {f.values.map((v, i) => {
         const j = f.judgements[i];
         const limit = f.limits?.[i] ?? null;
+        // A temperature beside its limit: both at one precision, so a failing value never reads equal to it.
+        const against = limit !== null && typeof v === "number" ? compareFormat.celsiusAgainst(v, limit, "max") : null;
         return (
           <td key={i} className={`py-1 pr-3 ${j ? JUDGED[j] : ""}`} data-judgement={j ?? undefined}>
-            {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={show(f, v)} trace={f.traces?.[i]} />}
-            {limit !== null && <span className="ml-1 text-xs text-ink-soft">(limit {compareFormat.inUnit(limit, "°C")})</span>}
+            {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={against ? against.value : show(f, v)} trace={f.traces?.[i]} />}
+            {against && <span className="ml-1 text-xs text-ink-soft">(limit {against.limit})</span>}
             {i > 0 && f.deltas[i] !== null && <span className="ml-1.5 text-xs">{compareFormat.signedInUnit(f.deltas[i] ?? null, f.unit)}</span>}
             {i > 0 && f.kind === "time" && j && j !== "same" && f.deltas[i] === null && <span className="ml-1.5 text-xs">{j}</span>}
           </td>

@@ -75,7 +75,7 @@ export function ScenarioColumns({ data, ambientC }: { data: CompareAnswer; ambie
                           />
                         </div>
                         <p className={`text-xs ${c.headroomK < 0 ? "text-over" : c.headroomK < 10 ? "text-tight" : "text-ink-soft"}`}>
-                          {compareFormat.celsius(c.temperatureC)} of {compareFormat.celsius(c.limitC)} · headroom {compareFormat.kelvin(c.headroomK)}
+                          {compareFormat.celsiusAgainst(c.temperatureC, c.limitC, "max").value} of {compareFormat.celsiusAgainst(c.temperatureC, c.limitC, "max").limit} · headroom {compareFormat.kelvin(c.headroomK)}
                         </p>
                       </>
                     ) : (

@@ -1,4 +1,4 @@
-import { DASH, formatFigure, formatHeadroom, formatInUnit, formatMoney } from "@/lib/units/figures";
+import { DASH, formatAgainstLimit, formatFigure, formatHeadroom, formatInUnit, formatMoney } from "@/lib/units/figures";
 
 /**
  * Side by side's names for the shared figure formatter (lib/units/figures): sentences, tables
@@ -10,6 +10,12 @@ export { DASH };
 export const kelvin = (k: number | null | undefined): string => formatHeadroom(k);
 
 export const celsius = (c: number | null | undefined): string => formatFigure(c, "temperature");
+
+/** A temperature and its limit at one precision: a failing value never reads equal to its limit. */
+export function celsiusAgainst(c: number, limitC: number, kind: "max" | "min"): { value: string; limit: string } {
+  const shown = formatAgainstLimit(c, limitC, kind, "temperature");
+  return { value: shown.value, limit: shown.limit };
+}
 
 export const euros = (eur: number | null | undefined): string => formatMoney(eur);
 

@@ -1,5 +1,5 @@
 import type { LimitResult, Verdict } from "@/lib/retrofit";
-import { celsius, euros, kelvin, lumens, runtime } from "./format";
+import { celsiusAgainst, euros, kelvin, lumens, runtime } from "./format";
 import { SIGNIFICANCE, significantlyDifferent } from "./significance";
 
 /**
@@ -109,7 +109,10 @@ export function listWords(xs: readonly string[]): string {
 
 const capital = (s: string): string => (s ? s[0]!.toUpperCase() + s.slice(1) : s);
 
-const against = (l: DecidingLimit): string => `${celsius(l.temperatureC)} against ${l.kind === "max" ? "a limit of" : "a lowest"} ${celsius(l.limitC)}`;
+const against = (l: DecidingLimit): string => {
+  const shown = celsiusAgainst(l.temperatureC, l.limitC, l.kind);
+  return `${shown.value} against ${l.kind === "max" ? "a limit of" : "a lowest"} ${shown.limit}`;
+};
 
 const reached = (l: DecidingLimit): string => (l.reachedAfterMin !== null ? `, reached after ${Math.max(1, Math.round(l.reachedAfterMin))} min` : "");
 

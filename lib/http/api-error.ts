@@ -48,6 +48,9 @@ export function formatIssuePath(path: readonly PropertyKey[]): string {
 export function fromZodError(error: z.ZodError, subject: string): ApiError {
   const issue = error.issues[0];
   const path = issue ? formatIssuePath(issue.path) : "";
-  const message = issue ? `${path ? `${path}: ` : ""}${issue.message}` : "Invalid input";
+  // A message that already names its field by its label on screen ("Summary: …") is kept as it
+  // is; otherwise the field's path says which one.
+  const labelled = issue ? /^[A-Z][A-Za-z' ]{0,40}: /.test(issue.message) : false;
+  const message = issue ? `${path && !labelled ? `${path}: ` : ""}${issue.message}` : "Invalid input";
   return new ApiError(`bad_request:${subject}`, message, path);
 }

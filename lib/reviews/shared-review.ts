@@ -12,7 +12,7 @@ export interface SharedReviewResults {
   scenarios: {
     label: string;
     verdict: string | null;
-    limits: { place: string; temperatureC: number; limitC: number | null; headroomK: number | null; verdict: string }[];
+    limits: { place: string; kind: "max" | "min"; temperatureC: number; limitC: number | null; headroomK: number | null; verdict: string }[];
   }[];
 }
 
@@ -36,7 +36,7 @@ export function sharedReviewResults(evaluation: Pick<BuildEvaluation, "verdict" 
         const slot = LIMIT_SLOT[l.id] ?? null;
         const open = slot === null || publicSlots.has(slot);
         const place = l.id === "cells-max" || l.id === "cells-min" ? `${l.place} (${l.kind === "max" ? "upper" : "lower"} limit)` : l.place;
-        return { place, temperatureC: l.temperatureC, limitC: open ? l.limitC : null, headroomK: open ? l.headroomK : null, verdict: l.verdict };
+        return { place, kind: l.kind, temperatureC: l.temperatureC, limitC: open ? l.limitC : null, headroomK: open ? l.headroomK : null, verdict: l.verdict };
       }),
     })),
   };

@@ -129,7 +129,7 @@ describe("Side by side and the Review desk in chromium", () => {
     await page.getByRole("region", { name: "Waiting for your verdict" }).getByRole("link", { name: titles.strapped, exact: true }).first().click();
     await page.waitForURL(/\/reviews\/[^/]+$/);
     // The notification list closed when the page changed.
-    expect(await page.getByRole("dialog", { name: "Notifications" }).count()).toBe(0);
+    await expect.poll(() => page.getByRole("dialog", { name: "Notifications" }).count()).toBe(0);
     await page.getByTestId("heat-path-diagram").first().locator('[data-pin-target="node:driver"]').click();
     await expect.poll(() => page.getByTestId("pin-target").textContent()).toMatch(/Pinned to: driver board, \w+ mode/);
     await page.getByLabel("Comment", { exact: true }).fill("Strapped, the driver board keeps its headroom on high; floating free it does not.");

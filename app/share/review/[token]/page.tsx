@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { VERDICT_STYLE } from "@/components/budget/format";
-import { compareFormat } from "@/lib/compare";
 import { ApiError } from "@/lib/http/api-error";
+import { DASH, formatAgainstLimit, formatFigure, formatHeadroom } from "@/lib/units/figures";
 import { openReviewShare } from "@/server/reviews/review-share";
 
 export const metadata: Metadata = { title: "Shared review", robots: { index: false, follow: false } };
@@ -59,15 +59,19 @@ export default async function SharedReviewPage({ params }: { params: Promise<{ t
               <table className="w-full text-left">
                 <thead className="text-xs text-ink-soft"><tr><th className="py-0.5 pr-3 font-medium">Place</th><th className="py-0.5 pr-3 font-medium">Temperature</th><th className="py-0.5 pr-3 font-medium">Limit</th><th className="py-0.5 pr-3 font-medium">Headroom</th><th className="py-0.5 font-medium">Verdict</th></tr></thead>
                 <tbody>
-                  {s.limits.map((l) => (
-                    <tr key={l.place} className="border-t border-line">
-                      <td className="py-0.5 pr-3">{l.place}</td>
-                      <td className="py-0.5 pr-3">{compareFormat.celsius(l.temperatureC)}</td>
-                      <td className="py-0.5 pr-3">{l.limitC === null ? "the owner's part" : compareFormat.celsius(l.limitC)}</td>
-                      <td className="py-0.5 pr-3">{l.headroomK === null ? compareFormat.DASH : compareFormat.kelvin(l.headroomK)}</td>
-                      <td className="py-0.5">{l.verdict}</td>
-                    </tr>
-                  ))}
+                  {s.limits.map((l) => {
+                    // A failing value and its limit at one precision, so rounding never shows them equal.
+                    const shown = l.limitC === null ? null : formatAgainstLimit(l.temperatureC, l.limitC, l.kind, "temperature");
+                    return (
+                      <tr key={l.place} className="border-t border-line">
+                        <td className="py-0.5 pr-3">{l.place}</td>
+                        <td className="py-0.5 pr-3">{shown ? shown.value : formatFigure(l.temperatureC, "temperature")}</td>
+                        <td className="py-0.5 pr-3">{shown ? shown.limit : "the owner's part"}</td>
+                        <td className="py-0.5 pr-3">{l.headroomK === null ? DASH : formatHeadroom(l.headroomK)}</td>
+                        <td className="py-0.5">{l.verdict}</td>
+                      </tr>
+                    );
+                  })}
                 </tbody>
               </table>
             </div>

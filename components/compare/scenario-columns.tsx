@@ -8,6 +8,23 @@ import { HeatPathDiagram } from "@/components/budget/heat-path-diagram";
 import { compareFormat } from "@/lib/compare";
 import type { CompareAnswer } from "./use-compare";
 
+/** A ladder's label in lines of at most `width` characters (Chart.js draws an array as lines). */
+function wrapLabel(text: string, width = 26): string[] {
+  const lines: string[] = [];
+  let line = "";
+  for (const word of text.split(" ")) {
+    if (line && line.length + 1 + word.length > width) {
+      lines.push(line);
+      line = word;
+    } else line = line ? `${line} ${word}` : word;
+  }
+  if (line) lines.push(line);
+  return lines;
+}
+
+type LadderColumn = NonNullable<CompareAnswer["sideBySide"][number]["ladders"][number]["columns"][number]>;
+const ladderLines = (c: LadderColumn): number => c.steps.reduce((n, st) => n + wrapLabel(`00 K · ${st.place}`).length + 0.6, 0) + (Math.abs(c.remainderK) > 0.05 ? 1.6 : 0);
+
 /**
  * One scenario, chosen once for every column: each variant's heat path (watts and K/W on
  * every link), then a temperature ladder for every place that has a limit, the columns side
@@ -40,11 +57,12 @@ export function ScenarioColumns({ data, ambientC }: { data: CompareAnswer; ambie
           </button>
         ))}
       </div>
-      <div className="grid gap-3" style={{ gridTemplateColumns: `repeat(${cols}, minmax(0, 1fr))` }} data-testid="compare-heat-paths">
+      <p className="text-xs text-ink-soft">Each link is labelled with the heat it carries and its resistance; click a diagram&apos;s link or place on the review page to pin a comment to it.</p>
+      <div className="grid gap-3 overflow-x-auto" style={{ gridTemplateColumns: `repeat(${cols}, minmax(320px, 1fr))` }} data-testid="compare-heat-paths">
         {s.heatPaths.map((h, i) => (
           <figure key={i} className="min-w-0 rounded border border-line bg-white/70 p-2">
             <figcaption className="mb-1 truncate text-xs font-medium" style={{ color: SERIES_COLOURS[i] }}>{data.columnNames[i]}</figcaption>
-            {h ? <HeatPathDiagram scenario={{ thermal: h }} ambientC={ambientC[i] ?? 25} unit="C" /> : <p className="text-xs text-ink-soft">Not worked out in {s.label}.</p>}
+            {h ? <HeatPathDiagram scenario={{ thermal: h }} ambientC={ambientC[i] ?? 25} unit="C" compact /> : <p className="text-xs text-ink-soft">Not worked out in {s.label}.</p>}
           </figure>
         ))}
       </div>
@@ -60,16 +78,16 @@ export function ScenarioColumns({ data, ambientC }: { data: CompareAnswer; ambie
                     <figcaption className="mb-1 truncate text-xs" style={{ color: SERIES_COLOURS[i] }}>{data.columnNames[i]}</figcaption>
                     {c ? (
                       <>
-                        <div style={{ height: `${Math.max(3, c.steps.length + 1) * 1.6 + 2}rem` }}>
+                        <div style={{ height: `${Math.max(3, ladderLines(c)) * 0.75 + 3.5}rem` }}>
                           <Bar
                             data={{
-                              labels: [...c.steps.map((st) => st.place), ...(Math.abs(c.remainderK) > 0.05 ? ["rest"] : [])],
+                              labels: [...c.steps.map((st) => wrapLabel(`${compareFormat.kelvinRise(st.deltaK)} · ${st.place}`)), ...(Math.abs(c.remainderK) > 0.05 ? [wrapLabel(`${compareFormat.kelvinRise(c.remainderK)} · rest`)] : [])],
                               datasets: [{ label: "K", data: [...c.steps.map((st) => st.deltaK), ...(Math.abs(c.remainderK) > 0.05 ? [c.remainderK] : [])], backgroundColor: SERIES_COLOURS[i] }],
                             }}
                             options={{
                               indexAxis: "y",
                               maintainAspectRatio: false,
-                              scales: { x: { min: 0, max: Math.ceil(max), title: { display: true, text: "K of the rise above ambient" } }, y: { ticks: { font: { size: 10 } } } },
+                              scales: { x: { min: 0, max: Math.ceil(max), title: { display: true, text: "K of the rise above ambient" } }, y: { ticks: { font: { size: 10 }, autoSkip: false } } },
                               plugins: { legend: { display: false }, tooltip: { callbacks: { label: (ctx) => { const st = c.steps[ctx.dataIndex]; return st ? `${compareFormat.kelvin(st.deltaK)} = ${compareFormat.watts(st.watts)} × ${compareFormat.kelvinPerWatt(st.kelvinPerWatt)}` : compareFormat.kelvin(c.remainderK); } } } },
                             }}
                           />

@@ -9,6 +9,9 @@ export { DASH };
 /** A temperature difference or a headroom (a negative headroom never prints as "0 K"). */
 export const kelvin = (k: number | null | undefined): string => formatHeadroom(k);
 
+/** A temperature rise or step (a difference of temperatures), e.g. "12 K", "3.4 K". */
+export const kelvinRise = (k: number | null | undefined): string => formatFigure(k, "temperatureDifference");
+
 export const celsius = (c: number | null | undefined): string => formatFigure(c, "temperature");
 
 /** A temperature and its limit at one precision: a failing value never reads equal to its limit. */

@@ -116,8 +116,15 @@ const against = (l: DecidingLimit): string => {
 
 const reached = (l: DecidingLimit): string => (l.reachedAfterMin !== null ? `, reached after ${Math.max(1, Math.round(l.reachedAfterMin))} min` : "");
 
+/** The significance in words ("1 K"), as a person states it (not a measured figure). */
+const SIGNIFICANT = `${SIGNIFICANCE.kelvin} K`;
+
+/** A housing surface over its limit is past the burn threshold for the way it is held (ISO 13732-1). */
+const isTouch = (l: Pick<DecidingLimit, "id">): boolean => l.id === "touch";
+
 /** Why a column loses: "is over budget on the driver board (…)", "has 12 K headroom on …". */
 function loserPhrase(l: DecidingLimit): string {
+  if (l.verdict === "over budget" && isTouch(l)) return `makes the ${l.place} too hot to touch safely (${against(l)}${reached(l)})`;
   if (l.verdict === "over budget") return `is over budget on the ${l.place} (${against(l)}${reached(l)})`;
   if (l.verdict === "tight") return `is tight on the ${l.place} (${kelvin(l.headroomK)} headroom, ${against(l)})`;
   return `has ${kelvin(l.headroomK)} headroom on the ${l.place} (${against(l)})`;
@@ -125,7 +132,8 @@ function loserPhrase(l: DecidingLimit): string {
 
 /** Why a column wins: its deciding limit, even when that is over budget too. */
 function winnerPhrase(l: DecidingLimit): string {
-  if (l.headroomK < 0) return `the ${l.place} is over its limit by ${kelvin(-l.headroomK)} (${against(l)}${reached(l)}), the least of them`;
+  if (l.headroomK < 0 && isTouch(l)) return `the ${l.place} is too hot to touch safely, over its limit by ${kelvin(-l.headroomK)} (${against(l)}${reached(l)})`;
+  if (l.headroomK < 0) return `the ${l.place} is over its limit by ${kelvin(-l.headroomK)} (${against(l)}${reached(l)})`;
   return `${kelvin(l.headroomK)} headroom on the ${l.place} (${against(l)})`;
 }
 
@@ -206,7 +214,7 @@ function summariseScenario(input: SummaryInput, id: string): ScenarioSummary {
   if (best === null) {
     parts.push(`${capital(label)}: no variant could be worked out, so nothing is compared.`);
   } else if (differing.size === 0 || winners.length === ranked.length) {
-    const what = differing.size === 0 ? `the variants differ by less than ${kelvin(SIGNIFICANCE.kelvin)} on every limit` : `the variants tie within ${kelvin(SIGNIFICANCE.kelvin)}`;
+    const what = differing.size === 0 ? `the variants differ by less than ${SIGNIFICANT} on every limit` : `the variants tie within ${SIGNIFICANT}`;
     const d = cells[ranked[0]!]!.deciding!;
     const decides = sharedIds.has(d.id) ? "" : d.headroomK < 0 ? `; the ${d.place} decides, over its limit by ${kelvin(-d.headroomK)}` : `; the ${d.place} decides, with ${kelvin(d.headroomK)} headroom`;
     parts.push(`${capital(label)}: no variant wins — ${what}${decides}.`);
@@ -215,8 +223,10 @@ function summariseScenario(input: SummaryInput, id: string): ScenarioSummary {
     const d = cells[winners[0]!]!.deciding!;
     const rest = ranked.filter((i) => !winners.includes(i));
     const runnerUp = rest[0]!;
-    const head = winners.length === 1 ? `${capital(w[0]!)} wins ${where(label)}` : `${capital(listWords(w))} tie ${where(label)} (within ${kelvin(SIGNIFICANCE.kelvin)})`;
-    const why = `${winnerPhrase(d)}, ${kelvin(leadK)} more than ${name(runnerUp)}`;
+    // When even the best is over a limit, it is the least over budget, not a winner.
+    const over = d.headroomK < 0;
+    const head = winners.length === 1 ? (over ? `${capital(w[0]!)} is the least over budget ${where(label)}` : `${capital(w[0]!)} wins ${where(label)}`) : `${capital(listWords(w))} tie ${where(label)} (within ${SIGNIFICANT})`;
+    const why = over ? `${winnerPhrase(d)}, ${kelvin(leadK)} less over than ${name(runnerUp)}` : `${winnerPhrase(d)}, ${kelvin(leadK)} more than ${name(runnerUp)}`;
     const losers = rest.map((i) => `${name(i)} ${loserPhrase(cells[i]!.deciding!)}`);
     parts.push(`${head}: ${why}; ${listWords(losers)}.`);
   }
@@ -250,13 +260,21 @@ export function summarise(input: SummaryInput): ComparisonSummary {
   // Who wins where, in one line.
   const decided = scenarios.filter((s) => s.winners.length === 1 && s.leadK !== null);
   if (decided.length > 0) {
-    const byWinner = new Map<number, string[]>();
-    for (const s of decided) byWinner.set(s.winners[0]!, [...(byWinner.get(s.winners[0]!) ?? []), s.label]);
-    const wins = [...byWinner].map(([i, labels]) => `${name(i)} wins ${whereList(labels)}`);
+    // A winner over budget there is "the least over budget", said after the real wins.
+    const leastOver = (s: ScenarioSummary) => (s.cells[s.winners[0]!]?.deciding?.headroomK ?? 0) < 0;
+    const group = (list: readonly ScenarioSummary[]) => {
+      const byWinner = new Map<number, string[]>();
+      for (const s of list) byWinner.set(s.winners[0]!, [...(byWinner.get(s.winners[0]!) ?? []), s.label]);
+      return [...byWinner];
+    };
+    const wins = [
+      ...group(decided.filter((s) => !leastOver(s))).map(([i, labels]) => `${name(i)} wins ${whereList(labels)}`),
+      ...group(decided.filter(leastOver)).map(([i, labels]) => `${name(i)} is the least over budget ${whereList(labels)}`),
+    ];
     const undecided = scenarios.filter((s) => !decided.includes(s)).map((s) => s.label);
     lines.push(`${capital(listWords(wins))}${undecided.length > 0 ? `; no single winner ${whereList(undecided)}` : ""}.`);
   } else if (scenarios.length > 0) {
-    lines.push(`No variant wins any scenario by ${kelvin(SIGNIFICANCE.kelvin)} or more of headroom.`);
+    lines.push(`No variant wins any scenario by ${SIGNIFICANT} or more of headroom.`);
   }
   for (const s of scenarios) lines.push(s.sentence);
 
@@ -279,6 +297,14 @@ export function summarise(input: SummaryInput): ComparisonSummary {
     const amount = g.verdict === "over budget" ? ` (over by ${range(-g.best, -g.worst)})` : ` (${range(g.worst, g.best)} headroom)`;
     const because = input.differsIn.length === 0 ? "" : g.alike ? `: it is the same in every variant, so the ${what} is not what limits it` : `: the ${what} moves it, but none of them clears it`;
     lines.push(`${capital(allOf(n))} are ${g.verdict} on the ${g.place} ${whereList(g.labels)}${amount}${because}.`);
+  }
+
+  // The hot-surface caution wherever a variant takes the housing past its burn threshold.
+  const hot = scenarios.flatMap((s) => s.cells.map((c, i) => ({ s, c, i }))).filter(({ c }) => c.deciding !== null && isTouch(c.deciding) && c.deciding.headroomK < 0);
+  if (hot.length > 0) {
+    const who = [...new Set(hot.map(({ i }) => i))].map(name);
+    const when = [...new Set(hot.map(({ s }) => s.label))];
+    lines.push(`Caution, hot surface: ${listWords(who)} ${who.length === 1 ? "takes" : "take"} the housing past the burn threshold for the way it is held ${whereList(when)}; add a warning, a handle or a time limit on that mode.`);
   }
 
   const costsEur = input.evaluations.map((e) => e.costs.totalEur);

@@ -68,7 +68,10 @@ describe("the comparison summary", () => {
     const high = s.scenarios[0]!;
     expect(high.cells.map((c) => c.deciding?.id)).toEqual(["driver-board", "touch", "driver-board"]);
     expect(high.winners).toEqual([1]);
-    expect(s.lines[1]).toMatch(/^Pressed to the wall wins in high mode: the housing surface is over its limit by 6\.0 K \(54 °C against a limit of 48 °C, reached after 10 min\), the least of them, 34 K more than copper strap;/);
+    // Even the best is over a limit there: it is the least over budget, not a winner, and a housing past its burn threshold is said in those words.
+    expect(s.lines[0]).toBe("Pressed to the wall is the least over budget in high mode.");
+    expect(s.lines[1]).toMatch(/^Pressed to the wall is the least over budget in high mode: the housing surface is too hot to touch safely, over its limit by 6\.0 K \(54 °C against a limit of 48 °C, reached after 10 min\), 34 K less over than copper strap;/);
+    expect(s.lines.find((l) => l.startsWith("Caution, hot surface:"))).toBe("Caution, hot surface: pressed to the wall takes the housing past the burn threshold for the way it is held in high mode; add a warning, a handle or a time limit on that mode.");
     expect(s.lines[1]).toContain("copper strap is over budget on the driver board (140 °C against a limit of 100 °C)");
     expect(s.lines).toContain("All three are over budget on the LED junction in high mode (over by 47–58 K): the driver cooling moves it, but none of them clears it.");
   });
@@ -77,8 +80,8 @@ describe("the comparison summary", () => {
     const s = summarise({ names: NAMES, differsIn: ["Driver cooling"], evaluations: [evaluation([mode("Low", [driver(50.4)])]), evaluation([mode("Low", [driver(50)])]), evaluation([mode("Low", [driver(20)])])] });
     expect(s.scenarios[0]!.winners).toEqual([0, 1]);
     expect(s.scenarios[0]!.leadK).toBeCloseTo(30, 9);
-    expect(s.lines[1]).toMatch(/^Copper strap and pressed to the wall tie in low mode \(within 1\.0 K\)/);
-    expect(s.lines[0]).toBe("No variant wins any scenario by 1.0 K or more of headroom.");
+    expect(s.lines[1]).toMatch(/^Copper strap and pressed to the wall tie in low mode \(within 1 K\)/);
+    expect(s.lines[0]).toBe("No variant wins any scenario by 1 K or more of headroom.");
   });
 
   it("lets a variant win one mode and lose another", () => {
@@ -113,9 +116,15 @@ describe("the comparison summary", () => {
         { scenarios: [{ ...mode("High", []), thermal: null }], costs: { totalEur: 20 } },
       ],
     });
-    expect(s.lines[1]).toContain("strap is over budget on the housing surface (54 °C against a limit of 48 °C, reached after 10 min)");
+    expect(s.lines[1]).toContain("strap makes the housing surface too hot to touch safely (54 °C against a limit of 48 °C, reached after 10 min)");
     expect(s.lines[1]).toContain("Free could not be worked out in high mode.");
     expect(s.scenarios[0]!.cells[2]!.deciding).toBeNull();
+  });
+
+  it("never shows a failing temperature equal to its limit", () => {
+    // 0.3 K over a 100 °C limit would round to "100 °C against a limit of 100 °C" at whole degrees.
+    const s = summarise({ names: ["a", "b"], differsIn: ["Driver cooling"], evaluations: [evaluation([mode("High", [driver(-0.3)])]), evaluation([mode("High", [driver(20)])])] });
+    expect(s.lines[1]).toContain("a is over budget on the driver board (100.3 °C against a limit of 100.0 °C)");
   });
 
   it("never prints NaN, Infinity or a negative zero", () => {

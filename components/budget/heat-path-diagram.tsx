@@ -52,7 +52,10 @@ export function HeatPathDiagram({
   // and K/W in a column of labels beyond the loops (pushed apart so none overlaps another).
   const L = compact
     ? { rowH: 34, boxW: 196, boxH: 26, nodeFont: 11, loopFrom: 226, loopStep: 15, labelX: 346, labelFont: 10, labelGap: 12, width: 470 }
-    : { rowH: 44, boxW: 210, boxH: 32, nodeFont: 12, loopFrom: 250, loopStep: 26, labelX: 480, labelFont: 10, labelGap: 13, width: 720 };
+    : { rowH: 44, boxW: 250, boxH: 32, nodeFont: 12, loopFrom: 290, loopStep: 26, labelX: 520, labelFont: 10, labelGap: 13, width: 720 };
+  // Room for a place's name beside its temperature; a longer name is drawn narrower to fit.
+  const nameRoom = L.boxW - 8 - 6.2 * L.nodeFont * 0.55 - 10;
+  const fits = (name: string) => name.length * L.nodeFont * 0.55 <= nameRoom;
   const y = (id: string) => all.findIndex((n) => n.id === id) * L.rowH + L.rowH / 2;
   const edge = L.boxW + 10;
   const links = t.links.filter((l) => Math.abs(l.watts) > 1e-6);
@@ -111,7 +114,7 @@ export function HeatPathDiagram({
         return (
           <g key={n.id} {...target}>
             <rect x={10} y={y(n.id) - L.boxH / 2} width={L.boxW} height={L.boxH} rx={5} fill={on ? "#fdebd9" : "white"} stroke={heatColour(c, ambientC, hottest)} strokeWidth={on ? 3 : 2} />
-            <text x={18} y={y(n.id) + 4} fontSize={L.nodeFont} fill="#2b2520">{n.place}</text>
+            <text x={18} y={y(n.id) + 4} fontSize={L.nodeFont} fill="#2b2520" {...(fits(n.place) ? {} : { textLength: nameRoom, lengthAdjust: "spacingAndGlyphs" })}>{n.place}</text>
             <text x={L.boxW + 2} y={y(n.id) + 4} fontSize={L.nodeFont} textAnchor="end" fill="#6b6158">{shown}</text>
             {pinCount > 0 && <PinMark x={10} y={y(n.id) - L.boxH / 2} n={pinCount} />}
           </g>

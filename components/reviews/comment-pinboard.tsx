@@ -39,7 +39,11 @@ export function CommentPinboard({
   const router = useRouter();
   const add = useComment(reviewId);
   const scenarios = evaluation?.scenarios.filter((s) => s.thermal) ?? [];
-  const [scenarioId, setScenarioId] = useState(scenarios[0]?.id ?? "");
+  // Open on the scenario closest to (or furthest past) a limit: where a reviewer looks first.
+  const [scenarioId, setScenarioId] = useState(() => {
+    const least = (s: (typeof scenarios)[number]) => Math.min(Infinity, ...(s.thermal?.limits ?? []).map((l) => l.headroomK));
+    return [...scenarios].sort((a, b) => least(a) - least(b))[0]?.id ?? "";
+  });
   const scenario = scenarios.find((s) => s.id === scenarioId) ?? scenarios[0];
   const [anchor, setAnchor] = useState<Picked | null>(null);
   const [body, setBody] = useState("");

@@ -10,6 +10,7 @@ import type { Evaluation } from "@/components/budget/types";
 import { ApiClientError } from "@/components/ui/fetch-json";
 import { anchorLabel, inScenario, scenarioWords, type AnchorKind } from "@/lib/reviews/anchors";
 import type { Anchors, CommentItem } from "./types";
+import { PinIcon } from "./pin-icon";
 import { useComment } from "./use-reviews";
 
 type Picked = { kind: AnchorKind; key: string };
@@ -100,7 +101,7 @@ export function CommentPinboard({
                         <tr key={l.id} onClick={() => setAnchor({ kind: "figure", key })} data-pin-target={`figure:${key}`} className={`cursor-pointer border-t border-line ${on ? "bg-ember-soft" : "hover:bg-paper-deep"}`}>
                           <td className="py-1 pr-3">
                             <button type="button" className="text-left" onClick={(e) => { e.stopPropagation(); setAnchor({ kind: "figure", key }); }}>{limitLabel(l)}</button>
-                            {n > 0 && <span className="ml-1 rounded bg-ember px-1 text-[10px] text-white">📌 {n}</span>}
+                            {n > 0 && <span className="ml-1 rounded bg-ember px-1 text-[10px] text-white"><PinIcon /> {n}</span>}
                           </td>
                           <td className="py-1 pr-3">{shown.value}</td>
                           <td className="py-1 pr-3">{shown.limit}</td>
@@ -157,7 +158,7 @@ export function CommentPinboard({
             {comments.map((c) => (
               <li key={c.id} data-testid="review-comment" className="rounded border border-line bg-white/70 p-2 text-sm">
                 <div className="mb-0.5 flex flex-wrap items-center gap-2 text-xs text-ink-soft">
-                  <span className="rounded bg-paper-deep px-1.5">📌 {c.target}</span>
+                  <span className="rounded bg-paper-deep px-1.5"><PinIcon /> {c.target}</span>
                   <span className="ml-auto">{c.authorName} · {new Date(c.createdAt).toLocaleString()}</span>
                 </div>
                 <p className="whitespace-pre-wrap">{c.body}</p>

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import { VERDICT_STYLE } from "@/components/budget/format";
+import { PinIcon } from "@/components/reviews/pin-icon";
 import { ApiError } from "@/lib/http/api-error";
 import { DASH, formatAgainstLimit, formatFigure, formatHeadroom } from "@/lib/units/figures";
 import { openReviewShare } from "@/server/reviews/review-share";
@@ -43,7 +44,7 @@ export default async function SharedReviewPage({ params }: { params: Promise<{ t
         <ol className="space-y-2">
           {shared.comments.map((c, i) => (
             <li key={i} className="rounded border border-line bg-white/70 p-2" data-testid="shared-comment">
-              <div className="mb-0.5 flex flex-wrap gap-2 text-xs text-ink-soft"><span className="rounded bg-paper-deep px-1.5">📌 {c.target}</span><span className="ml-auto">{c.authorName} · {new Date(c.createdAt).toLocaleDateString()}</span></div>
+              <div className="mb-0.5 flex flex-wrap gap-2 text-xs text-ink-soft"><span className="rounded bg-paper-deep px-1.5"><PinIcon /> {c.target}</span><span className="ml-auto">{c.authorName} · {new Date(c.createdAt).toLocaleDateString()}</span></div>
               <p className="whitespace-pre-wrap">{c.body}</p>
             </li>
           ))}

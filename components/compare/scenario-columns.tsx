@@ -23,7 +23,12 @@ function wrapLabel(text: string, width = 26): string[] {
 }
 
 type LadderColumn = NonNullable<CompareAnswer["sideBySide"][number]["ladders"][number]["columns"][number]>;
-const ladderLines = (c: LadderColumn): number => c.steps.reduce((n, st) => n + wrapLabel(`00 K · ${st.place}`).length + 0.6, 0) + (Math.abs(c.remainderK) > 0.05 ? 1.6 : 0);
+/** Chart height in px: Chart.js gives every bar the same band, so the band fits the longest label. */
+function ladderHeight(c: LadderColumn): number {
+  const bars = c.steps.length + (Math.abs(c.remainderK) > 0.05 ? 1 : 0);
+  const lines = Math.max(1, ...c.steps.map((st) => wrapLabel(`000 K · ${st.place}`).length));
+  return Math.max(3, bars) * (lines * 12 + 10) + 70;
+}
 
 /**
  * One scenario, chosen once for every column: each variant's heat path (watts and K/W on
@@ -78,7 +83,7 @@ export function ScenarioColumns({ data, ambientC }: { data: CompareAnswer; ambie
                     <figcaption className="mb-1 truncate text-xs" style={{ color: SERIES_COLOURS[i] }}>{data.columnNames[i]}</figcaption>
                     {c ? (
                       <>
-                        <div style={{ height: `${Math.max(3, ladderLines(c)) * 0.75 + 3.5}rem` }}>
+                        <div style={{ height: `${ladderHeight(c)}px` }}>
                           <Bar
                             data={{
                               labels: [...c.steps.map((st) => wrapLabel(`${compareFormat.kelvinRise(st.deltaK)} · ${st.place}`)), ...(Math.abs(c.remainderK) > 0.05 ? [wrapLabel(`${compareFormat.kelvinRise(c.remainderK)} · rest`)] : [])],

@@ -7,6 +7,7 @@ import { type ReactNode, useMemo, useState } from "react";
 import { useSolve } from "@/components/budget/use-solve";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
+import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-schema";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
 import { placeProblems, ProblemsSummary } from "./editor-problems";
@@ -91,6 +92,12 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         <ChoiceSelect choices={[["series", "In series"], ["parallel", "In parallel"]]} {...f("lightEngine.wiring", "Wiring")} />
         <PartSelect kind="interface" {...f("lightEngine.interface", "Board → heatsink interface")} />
         <PartSelect kind="heatsink" {...f("lightEngine.heatsink", "Heatsink")} />
+        <ChoiceSelect
+          choices={FIN_DIRECTION_CHOICES}
+          emptyLabel="Along the lamp (vertical upright, level lying)"
+          hint="How the fins stand when the lamp is in use. Air rises through vertical channels; level fins and fins hanging down trap warm air."
+          {...f("lightEngine.finDirection", "Fin direction")}
+        />
         <ChoiceSelect
           choices={[["in-housing-air", "Heatsink in the housing's air"], ["pressed-to-wall", "Heatsink pressed to the housing wall"], ["through-reflector", "Heat through the reflector to the rim"]]}
           {...f("lightEngine.mount.kind", "Mounting")}

@@ -8,10 +8,11 @@ import { TraceView } from "@/components/budget/trace-view";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { FINISHES, materialOptions } from "@/lib/parts";
 import type { QuickCheckResult } from "@/lib/retrofit";
+import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-schema";
 
 const MATERIALS = materialOptions();
 
-type Field = { name: string; label: string; placeholder: string; hint?: string };
+type Field = { name: string; label: string; placeholder: string; hint?: string; /** Starts empty (an optional field); otherwise the placeholder is filled in. */ empty?: boolean };
 
 const GEOMETRY: Field[] = [
   { name: "baseLengthM", label: "Base length (along the fins)", placeholder: "60 mm" },
@@ -27,7 +28,7 @@ function Input({ f, error }: { f: Field; error?: string }) {
   return (
     <label className="block text-sm">
       <span className="mb-1 block font-medium">{f.label}</span>
-      <input name={f.name} placeholder={f.placeholder} defaultValue={f.placeholder} aria-label={f.label} className="w-full rounded border border-line bg-white px-2 py-1.5" />
+      <input name={f.name} placeholder={f.placeholder} defaultValue={f.empty ? "" : f.placeholder} aria-label={f.label} className="w-full rounded border border-line bg-white px-2 py-1.5" />
       {f.hint && !error && <span className="mt-0.5 block text-xs text-ink-soft">{f.hint}</span>}
       {error && <span role="alert" className="mt-0.5 block text-xs text-over">{error}</span>}
     </label>
@@ -48,8 +49,9 @@ export function QuickCheckForm() {
     const opt = (k: string) => (s(k) === "" ? undefined : s(k));
     const sink =
       mode === "declared"
-        ? { declaredKPerW: s("declaredKPerW") }
+        ? { declaredKPerW: s("declaredKPerW"), ratedDeltaK: opt("ratedDeltaK") }
         : {
+            finDirection: s("finDirection"),
             geometry: {
               rating: "geometry",
               ...Object.fromEntries(GEOMETRY.map((g) => [g.name, g.name === "finCount" ? Number(s(g.name)) : s(g.name)])),
@@ -85,7 +87,10 @@ export function QuickCheckForm() {
             <label><input type="radio" name="mode" checked={mode === "geometry"} onChange={() => setMode("geometry")} /> Measured geometry</label>
           </div>
           {mode === "declared" ? (
-            <Input f={{ name: "declaredKPerW", label: "Sink-to-air resistance", placeholder: "4 K/W", hint: "Check that the figure is for still air: sellers often quote it with a fan." }} error={errorFor("sink.declaredKPerW")} />
+            <div className="grid gap-3 sm:grid-cols-2">
+              <Input f={{ name: "declaredKPerW", label: "Sink-to-air resistance", placeholder: "4 K/W", hint: "Check that the figure is for still air: sellers often quote it with a fan." }} error={errorFor("sink.declaredKPerW")} />
+              <Input f={{ name: "ratedDeltaK", label: "Rated at temperature rise", placeholder: "75 K", empty: true, hint: "The sink-to-air rise the rating holds at; empty: 75 K, a common catalogue basis (from memory). The figure is corrected to the rise your sink reaches." }} error={errorFor("sink.ratedDeltaK")} />
+            </div>
           ) : (
             <div className="grid gap-3 sm:grid-cols-2">
               {GEOMETRY.map((g) => <Input key={g.name} f={g} error={errorFor(`sink.geometry.${g.name}`)} />)}
@@ -100,6 +105,14 @@ export function QuickCheckForm() {
                 <select name="finish" aria-label="Finish" className="w-full rounded border border-line bg-white px-2 py-1.5" defaultValue="as-supplied">
                   {FINISHES.map((f) => <option key={f} value={f}>{f}</option>)}
                 </select>
+              </label>
+              <label className="block text-sm">
+                <span className="mb-1 block font-medium">Fin direction</span>
+                <select name="finDirection" aria-label="Fin direction" className="w-full rounded border border-line bg-white px-2 py-1.5" defaultValue="vertical">
+                  {FIN_DIRECTION_CHOICES.map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+                </select>
+                <span className="mt-0.5 block text-xs text-ink-soft">How the fins stand in use: air rises through vertical channels; level fins and fins hanging down trap warm air.</span>
+                {errorFor("sink.finDirection") && <span role="alert" className="mt-0.5 block text-xs text-over">{errorFor("sink.finDirection")}</span>}
               </label>
             </div>
           )}

@@ -1,4 +1,4 @@
-import type { DriverMode } from "@/lib/parts";
+import { modeDrive, type DriverMode } from "@/lib/parts";
 import { isThermalInputError, networkSchema, solveSteady, type SteadyResult } from "@/lib/thermal";
 import { compileBuild, sinkLinks, type CompiledBuild, type ScenarioHeat } from "./compile";
 import { declaredRise } from "./compile/heatsink";
@@ -30,11 +30,26 @@ export interface OperatingPoint {
   heat: ScenarioHeat;
 }
 
+/**
+ * Power the driver delivers to the emitters for a mode given on the battery side: η·P_battery,
+ * with P_battery = I·V at the pack's nominal voltage for a current; null without a pack to
+ * give that voltage. For a mode given on the output side: null.
+ */
+export function batterySideOutputW(mode: DriverMode, pack: PackSummary | null): number | null {
+  const drive = modeDrive(mode);
+  if (drive.side !== "battery") return null;
+  const v = pack?.nominalVoltage.value ?? null;
+  const inputW = drive.quantity === "power" ? drive.value : v !== null ? drive.value * v : null;
+  return inputW === null ? null : inputW * mode.efficiency;
+}
+
 /** Electrical state of a mode at a junction temperature. */
 export function modeElectrical(build: ResolvedBuild, e: ResolvedPart<"emitter">, d: ResolvedPart<"driver">, mode: DriverMode, pack: PackSummary | null, tjC: number): ModeElectrical {
   const n = build.lightEngine.count;
   const parallel = build.lightEngine.wiring === "parallel";
-  const perEmitter = mode.outputCurrentA !== undefined ? (parallel ? mode.outputCurrentA / n : mode.outputCurrentA) : currentForPower(e, n, mode.outputPowerW ?? 0, tjC);
+  // A mode drawn from the battery holds a power into the emitters (η·P_battery), like a regulated output power.
+  const outW = mode.outputPowerW ?? batterySideOutputW(mode, pack) ?? 0;
+  const perEmitter = mode.outputCurrentA !== undefined ? (parallel ? mode.outputCurrentA / n : mode.outputCurrentA) : currentForPower(e, n, outW, tjC);
   const ep = emitterAt(e, perEmitter, tjC);
   // A regulated power holds the heat steady as Vf moves; a regulated current lets it fall.
   if (mode.outputCurrentA === undefined) ep.heatPerKelvin = 0;

@@ -14,8 +14,10 @@ export function ExampleEditForm(props: { exampleId: string; backHref: string; ti
     e.preventDefault();
     patch.mutate({ title, narrative }, { onSuccess: () => { router.push(props.backHref); router.refresh(); } });
   }
-  const titleError = fieldError(patch.error, "title");
-  const narrativeError = fieldError(patch.error, "narrative");
+  // The API's message starts with the field's machine name; the field's own label is beside it on screen.
+  const plain = (m: string | null) => m?.replace(/^[^:]*: /, "") ?? null;
+  const titleError = plain(fieldError(patch.error, "title"));
+  const narrativeError = plain(fieldError(patch.error, "narrative"));
   return (
     <form onSubmit={onSave} noValidate className="space-y-3 text-sm" data-testid="example-edit-form">
       <label className="block">

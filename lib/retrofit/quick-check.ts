@@ -12,6 +12,7 @@ import { joint } from "./compile/joints";
 import { requiredLinkResistance } from "./inverse";
 import { verdictFor, type Verdict } from "./limits";
 import { ProblemList, type Problem } from "./problems";
+import { checkFinFit, derivedFinGap, fillFinGap } from "./quick-check-fins";
 import { q, trace } from "./trace";
 
 /** Junction limit used when the caller gives none: 125 °C, a common rating of white LEDs (common practice; many allow 150 °C). */
@@ -22,6 +23,20 @@ export const QUICK_CHECK_DEFAULT_MAX_TJ_C = 125;
  * declared K/W or its geometry (the heatsink part's fields); an interface and Rth(j-sp)
  * are optional.
  */
+/** A sink by its geometry; `gapWorkedOut` is set when the gap between fins was left empty (see quick-check-fins.ts). */
+const geometrySinkSchema = z.preprocess(
+  fillFinGap,
+  z
+    .strictObject({
+      geometry: KIND_DEFINITIONS.heatsink.specsSchema,
+      gapWorkedOut: z.boolean().optional(),
+      finDirection: z.enum(FIN_DIRECTIONS, { error: "choose how the fins stand: vertical, level, pointing up or hanging down" }).default("vertical"),
+    })
+    .superRefine((s, ctx) => {
+      if (s.geometry.rating === "geometry") checkFinFit(s.geometry, s.gapWorkedOut !== true, ctx, ["geometry"]);
+    }),
+);
+
 export const quickCheckInputSchema = z.strictObject({
   heatWatts: unitField("power", { gt: 0, max: 500 }),
   sink: z.union([
@@ -31,10 +46,7 @@ export const quickCheckInputSchema = z.strictObject({
       ratedDeltaK: unitField("temperatureDifference", { gt: 0, max: 200, required: false }),
       ratedAirflow: z.enum(["natural", "forced"], { error: "must be natural or forced" }).default("natural"),
     }),
-    z.strictObject({
-      geometry: KIND_DEFINITIONS.heatsink.specsSchema,
-      finDirection: z.enum(FIN_DIRECTIONS, { error: "choose how the fins stand: vertical, level, pointing up or hanging down" }).default("vertical"),
-    }),
+    geometrySinkSchema,
   ]),
   interface: z.strictObject({ areaM2: unitField("area", { gt: 0, max: 0.1 }), specs: KIND_DEFINITIONS.interface.specsSchema }).optional(),
   rthJspKPerW: unitField("thermalResistance", { gt: 0, max: 1000, required: false }),
@@ -58,9 +70,32 @@ export interface QuickCheckResult {
   network: Network | null;
   traces: Trace[];
   problems: Problem[];
+  /** The gap between fins the model used (from width, count and thickness), m; null without fins or for a declared sink. */
+  finGapM: number | null;
+  /** True when the gap was left empty and worked out; false when it was given (and checked against the width). */
+  finGapWorkedOut: boolean;
 }
 
 const MARGIN_K = 10;
+
+/** The gap between fins as the model uses it; a given gap far from it is reported, never silently dropped. */
+function finGapOf(input: QuickCheckInput, problems: ProblemList): { finGapM: number | null; finGapWorkedOut: boolean } {
+  if (!("geometry" in input.sink) || input.sink.geometry.rating !== "geometry") return { finGapM: null, finGapWorkedOut: false };
+  const g = input.sink.geometry;
+  const workedOut = input.sink.gapWorkedOut === true;
+  const used = derivedFinGap(g.baseWidthM, g.finCount, g.finThicknessM ?? 0);
+  if (used === null) return { finGapM: null, finGapWorkedOut: workedOut };
+  const given = g.finSpacingM;
+  if (!workedOut && given !== undefined && Math.abs(given - used) > Math.max(0.1 * used, 0.0003)) {
+    const mm = (m: number) => `${Number((m * 1000).toPrecision(3))} mm`;
+    problems.add(
+      "sink.geometry.finSpacingM",
+      `you gave ${mm(given)}, but ${g.finCount} fins ${mm(g.finThicknessM ?? 0)} thick across ${mm(g.baseWidthM)} leave gaps of ${mm(used)}; the check uses ${mm(used)} — measure the width or the gap again`,
+      "warning",
+    );
+  }
+  return { finGapM: used, finGapWorkedOut: workedOut };
+}
 
 /** The check's network at a sink rise (the rise matters only to a declared rating's correction). */
 function compileCheck(input: QuickCheckInput, sinkSpecs: HeatsinkSpecs, riseK: number | null, problems: ProblemList) {
@@ -77,7 +112,8 @@ function compileCheck(input: QuickCheckInput, sinkSpecs: HeatsinkSpecs, riseK: n
   b.resistance("solder", "sink", rif, "interface → heatsink", "interface", jt?.trace ?? trace({ element: "interface", formula: "No interface given", equation: "R = 0", inputs: [], result: q("R", "resistance", 0, "K/W"), source: "as entered by the person running the check (no interface given)" }));
   const declared = "declaredKPerW" in input.sink;
   const out = compileSinkToAir(b, sinkSpecs, "ambient", declared ? "sink" : "sink.geometry", input.ambientC, { riseK, finDirection: "finDirection" in input.sink ? input.sink.finDirection : "vertical" });
-  return out ? { b, out, network: b.network([{ node: "junction", watts: input.heatWatts }]) } : null;
+  const gap = finGapOf(input, problems);
+  return { gap, built: out ? { b, out, network: b.network([{ node: "junction", watts: input.heatWatts }]) } : null };
 }
 
 export function quickCheck(input: QuickCheckInput): QuickCheckResult {
@@ -90,14 +126,14 @@ export function quickCheck(input: QuickCheckInput): QuickCheckResult {
     "declaredKPerW" in input.sink
       ? { rating: "declared", sinkToAirKPerW: input.sink.declaredKPerW, ratedAirflow: input.sink.ratedAirflow, ...(input.sink.ratedDeltaK === undefined ? {} : { ratedDeltaK: input.sink.ratedDeltaK }) }
       : input.sink.geometry;
-  const empty: QuickCheckResult = { tjC: null, solderPointC: null, sinkC: null, maxTjC: maxTj, headroomK: null, verdict: null, sinkKPerW: null, requiredForLimitKPerW: null, requiredForBudgetKPerW: null, network: null, traces: [], problems: [] };
+  const empty: QuickCheckResult = { tjC: null, solderPointC: null, sinkC: null, maxTjC: maxTj, headroomK: null, verdict: null, sinkKPerW: null, requiredForLimitKPerW: null, requiredForBudgetKPerW: null, network: null, traces: [], problems: [], finGapM: null, finGapWorkedOut: false };
   // A declared rating holds at its rated rise: the same fixed point on the sink's rise as the Budget's.
   let rise = declaredRise.start(sinkSpecs, input.heatWatts);
   for (let k = 1; ; k++) {
     const problems = note(new ProblemList());
-    const c = compileCheck(input, sinkSpecs, rise, problems);
-    if (!c) return { ...empty, problems: problems.list };
-    const { b, out: sinkOut, network } = c;
+    const { gap, built } = compileCheck(input, sinkSpecs, rise, problems);
+    if (!built) return { ...empty, ...gap, problems: problems.list };
+    const { b, out: sinkOut, network } = built;
     try {
       const s = solveSteady(network);
       if (rise !== null) {
@@ -129,11 +165,12 @@ export function quickCheck(input: QuickCheckInput): QuickCheckResult {
         network,
         traces,
         problems: problems.list,
+        ...gap,
       };
     } catch (err) {
       if (!isThermalInputError(err)) throw err;
       problems.add("sink", `no steady state: ${err.message}`);
-      return { ...empty, network, problems: problems.list };
+      return { ...empty, ...gap, network, problems: problems.list };
     }
   }
 }

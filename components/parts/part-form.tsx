@@ -128,6 +128,13 @@ export function PartForm({ kind, part, prefs }: { kind: PartKind; part?: PartDto
           <legend className="px-1 text-sm font-semibold">Modes</legend>
           <p className="text-xs text-ink-soft">Each mode’s figure is what the driver delivers to the emitters, a current (“2.8 A”, “350 mA”) or a power (“3 W”), or what it draws from the battery, as kits are often sold (“9 W from the battery”, “1.2 A from the battery”). Efficiency is output ÷ input power.</p>
           {errorAt(errors, "specs.modes") && <p role="alert" className="text-xs text-over">{errorAt(errors, "specs.modes")}</p>}
+          {modes.fields.length > 0 && (
+            <div className="flex gap-2 text-xs text-ink-soft" aria-hidden>
+              <span className="w-32">Name</span>
+              <span className="w-32">Output</span>
+              <span className="w-28">Efficiency</span>
+            </div>
+          )}
           {modes.fields.map((row, index) => {
             const outputError = (["outputCurrentA", "outputPowerW", "inputCurrentA", "inputPowerW"] as const).map((k) => errorAt(errors, `specs.modes.${index}.${k}`)).find(Boolean);
             const rowErrors = [errorAt(errors, `specs.modes.${index}.name`), outputError, errorAt(errors, `specs.modes.${index}.efficiency`)].filter(Boolean);

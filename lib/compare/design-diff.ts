@@ -1,4 +1,5 @@
 import type { BuildDesign } from "@/lib/retrofit";
+import { FIN_DIRECTION_CHOICES, finDirectionOf } from "@/lib/retrofit/design-schema";
 import { formatDecimal } from "@/lib/units/figures";
 
 /**
@@ -75,6 +76,7 @@ const ROWS: { slot: string; label: string; text: (d: BuildDesign, n: PartNames) 
   { slot: "lightEngine.board", label: "Emitter board", text: (d) => (d.lightEngine.board ? `${d.lightEngine.board.material}, ${fmt(d.lightEngine.board.thicknessM * 1000, 2)} mm` : "none") },
   { slot: "lightEngine.interface", label: "Interface under the emitter", text: (d, n) => slotText(d.lightEngine.interface, n, "none") },
   { slot: "lightEngine.heatsink", label: "Heatsink", text: (d, n) => slotText(d.lightEngine.heatsink, n, "none") },
+  { slot: "lightEngine.finDirection", label: "Fin direction", text: (d) => FIN_DIRECTION_CHOICES.find(([v]) => v === finDirectionOf(d.lightEngine, d.environment))![1] },
   { slot: "housing", label: "Housing", text: (d, n) => `${slotText(d.housing, n)} (${d.housingShape.form})` },
   { slot: "pack.cell", label: "Cells", text: (d, n) => (d.pack.cell ? `${slotText(d.pack.cell, n)}, ${d.pack.series}S${d.pack.parallel}P` : "none") },
   { slot: "pack.protection", label: "Protection", text: (d, n) => slotText(d.pack.protection, n, "none") },

@@ -2,6 +2,7 @@
 
 import dynamic from "next/dynamic";
 import { useState } from "react";
+import { problemLabel } from "@/lib/messages";
 import { CautionsPanel } from "./cautions-panel";
 import { ElectricalPanel } from "./electrical-panel";
 import { type TempUnit, VERDICT_STYLE } from "./format";
@@ -53,7 +54,7 @@ export function BudgetReport({ evaluation, ambientC, unit = "C" }: { evaluation:
           <h2 className="mb-1 font-medium">What Sinkwise could not settle</h2>
           <ul className="list-disc space-y-0.5 pl-5">
             {errors.map((p, i) => (
-              <li key={i}><span className="font-mono text-xs">{p.field}</span>: {p.message}</li>
+              <li key={i}><span className="font-medium">{problemLabel(p.field)}</span>: {p.message}</li>
             ))}
           </ul>
         </section>

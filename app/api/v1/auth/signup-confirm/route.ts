@@ -1,3 +1,4 @@
+import { acceptInvitationsForEmail } from "@/db/queries/classes";
 import { completeSignupRequest, getUserById } from "@/db/queries/users";
 import { signupConfirmSchema } from "@/lib/auth/schemas";
 import { ApiError } from "@/lib/http/api-error";
@@ -17,5 +18,7 @@ export const POST = route(async (request) => {
   if (outcome.status !== "ok") throw new ApiError(`bad_request:signup`, REFUSED[outcome.status], "token");
   await startSession(outcome.userId);
   const user = await getUserById({ id: outcome.userId });
-  return json({ user: { id: outcome.userId, email: user?.email, displayName: user?.displayName, role: user?.role ?? "maker" } }, 201);
+  // Invitations to this address (classes; builds were taken over with the account) apply now.
+  const joinedClasses = user ? await acceptInvitationsForEmail({ email: user.email, userId: outcome.userId }) : [];
+  return json({ user: { id: outcome.userId, email: user?.email, displayName: user?.displayName, role: user?.role ?? "maker" }, joinedClasses }, 201);
 });

@@ -8,6 +8,7 @@ async function main(): Promise<void> {
   const { seedCatalogue } = await import("./seed/catalogue");
   const { seedBuilds } = await import("./seed/builds");
   const { seedReviews } = await import("./seed/reviews");
+  const { seedBench, seedBenchHold } = await import("./seed/bench");
   const { pool } = await import("@/db/client");
   const password = process.env.DEMO_PASSWORD;
   if (!password || password.length < 10) throw new Error("DEMO_PASSWORD (at least 10 characters) is not set; run scripts/env.sh");
@@ -15,9 +16,13 @@ async function main(): Promise<void> {
   const catalogue = await seedCatalogue({ adminId: accounts.admin });
   const builds = await seedBuilds({ makerId: accounts.maker, ids: catalogue });
   await seedReviews({ ids: accounts, builds });
+  const bench = await seedBench({ makerId: accounts.maker, ids: catalogue });
+  const hold = await seedBenchHold({ makerId: accounts.maker, buildId: builds["lantern-strap"] });
   await pool().end();
   console.log(`[seed] ${DEMO_ACCOUNTS.length} demo accounts ready`);
   console.log(`[seed] ${Object.keys(catalogue).length} catalogue parts ready (public, verified)`);
+  if (hold) console.log("[seed] the finished lantern held against its measured warm-up");
+  if (bench) console.log(`[seed] bench run of the salvaged sink: ${bench.sinkToAirKPerW.toFixed(2)} K/W (95 % ${bench.low.toFixed(2)}–${bench.high.toFixed(2)}), ${bench.heatCapacityJPerK.toFixed(0)} J/K`);
   console.log(`[seed] ${Object.keys(builds).length} demo builds ready (with their heat-path variants), a finished review and a queued one`);
 }
 

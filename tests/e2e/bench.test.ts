@@ -1,0 +1,76 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
+import { BASE_URL } from "../support/http";
+
+let session: Awaited<ReturnType<typeof launch>>;
+
+beforeAll(async () => {
+  session = await launch();
+});
+afterAll(async () => {
+  await session?.close();
+});
+
+/** A logger's file: minutes and °F in the headers, a probe column, readings every minute of a sink near 5 K/W, 90 J/K at 7 W in 77 °F air. */
+function loggerCsv(): string {
+  const lines = ["Elapsed (min),Sink °F,Probe"];
+  for (let min = 0; min <= 30; min++) {
+    const c = 25 + 35 * (1 - Math.exp((-min * 60) / 450));
+    lines.push(`${min},${((c * 9) / 5 + 32).toFixed(1)},heatsink`);
+  }
+  return lines.join("\n");
+}
+
+describe("Bench runs in chromium", () => {
+  it("imports a logger CSV, fits, saves the run, keeps the part, uses it in a build and sees it measured on the Budget", async () => {
+    const page = await session.browser.newPage();
+    await signInThroughForm(page, "maker@sinkwise.test");
+    await page.goto(`${BASE_URL}/bench`);
+    await page.getByRole("heading", { name: "Bench runs" }).waitFor();
+    const title = `Logger run ${Date.now().toString(36)}`;
+    await page.getByLabel("Title").fill(title);
+    await page.getByLabel("Heat into the sink").fill("7 W");
+    await page.getByLabel("Ambient").fill("25 °C");
+    await page.getByLabel("Logger CSV").setInputFiles({ name: "logger.csv", mimeType: "text/csv", buffer: Buffer.from(loggerCsv()) });
+    await page.getByTestId("csv-preview").waitFor();
+    await expect.poll(() => page.getByTestId("csv-preview").textContent()).toContain("31 readings");
+    await expect.poll(() => page.getByLabel("Temperature unit").inputValue()).toBe("F");
+    await expect.poll(() => page.getByLabel("Time unit").inputValue()).toBe("min");
+    await page.screenshot({ path: `${ARTEFACTS}/bench-csv-preview.png`, fullPage: true });
+
+    await page.getByRole("button", { name: "Fit", exact: true }).click();
+    await page.getByTestId("fit-summary").waitFor();
+    const r = await page.getByTestId("fit-r").textContent();
+    const kPerW = Number(/^([\d.]+) K\/W/.exec(r ?? "")?.[1]);
+    // The file follows a 5 K/W first-order warm-up; the natural-convection model fits it within a few per cent.
+    expect(kPerW).toBeGreaterThan(4.6);
+    expect(kPerW).toBeLessThan(5.4);
+    await page.screenshot({ path: `${ARTEFACTS}/bench-fit.png`, fullPage: true });
+
+    await page.getByRole("button", { name: "Save run" }).click();
+    await page.waitForURL(/\/bench\/[A-Za-z0-9_-]{10,}$/);
+    await page.getByRole("heading", { name: title }).waitFor();
+    await page.getByLabel("Part name").fill(`${title} sink`);
+    await page.getByRole("button", { name: "Keep as a heatsink part" }).click();
+    await page.getByTestId("kept-part").waitFor();
+    const partHref = await page.getByTestId("kept-part").getByRole("link").getAttribute("href");
+    const partId = partHref?.split("/").pop() ?? "";
+    expect(partId).not.toBe("");
+    await page.screenshot({ path: `${ARTEFACTS}/bench-run-kept.png`, fullPage: true });
+
+    // Use it in a build: a copy of a demo build's design with this sink.
+    const list = (await (await page.request.get(`${BASE_URL}/api/v1/builds`)).json()) as { mine: { id: string; title: string }[] };
+    const source = list.mine.find((b) => /lantern/i.test(b.title))!;
+    const detail = (await (await page.request.get(`${BASE_URL}/api/v1/builds/${source.id}`)).json()) as { revision: { design: { lightEngine: { heatsink: { partId: string } } } } };
+    const design = structuredClone(detail.revision.design);
+    design.lightEngine.heatsink = { partId };
+    const created = await page.request.post(`${BASE_URL}/api/v1/builds`, { data: { title: `${title} lantern`, design }, headers: { origin: BASE_URL } });
+    expect(created.status()).toBe(201);
+    const buildId = ((await created.json()) as { build: { id: string } }).build.id;
+
+    await page.goto(`${BASE_URL}/builds/${buildId}/budget`);
+    await page.getByTestId("measured-sink").waitFor();
+    await expect.poll(() => page.getByTestId("measured-sink").textContent()).toMatch(/measured on the bench/);
+    await page.screenshot({ path: `${ARTEFACTS}/bench-budget-measured.png`, fullPage: true });
+  });
+});

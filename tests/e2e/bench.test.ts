@@ -72,5 +72,21 @@ describe("Bench runs in chromium", () => {
     await page.getByTestId("measured-sink").waitFor();
     await expect.poll(() => page.getByTestId("measured-sink").textContent()).toMatch(/measured on the bench/);
     await page.screenshot({ path: `${ARTEFACTS}/bench-budget-measured.png`, fullPage: true });
+
+    // A warm-up of the finished build, read at the sink and the wall: the Budget overlays it on the prediction.
+    const warmup = [2, 6, 10, 15, 20, 30].flatMap((min) => [
+      { tS: `${min} min`, tempC: 20 + 30 * (1 - Math.exp(-min / 8)), place: "heatsink" },
+      { tS: `${min} min`, tempC: 20 + 12 * (1 - Math.exp(-min / 10)), place: "housing wall" },
+    ]);
+    const held = await page.request.post(`${BASE_URL}/api/v1/bench/runs`, {
+      data: { title: `${title} lantern warm-up`, powered: { kind: "build", buildId }, conditions: { ambientC: 20, volts: "7.4 V", amps: "0.9 A" }, readings: warmup },
+      headers: { origin: BASE_URL },
+    });
+    expect(held.status()).toBe(201);
+    await page.reload();
+    await page.getByTestId("bench-overlay").waitFor();
+    await expect.poll(() => page.getByTestId("hold-verdict").textContent()).toMatch(/^The model (ran (hotter|colder) than the lamp by \d+\.\d K at the|and the lamp agree)/);
+    await page.getByTestId("overlay-chart").waitFor();
+    await page.getByTestId("bench-overlay").screenshot({ path: `${ARTEFACTS}/bench-budget-overlay.png` });
   });
 });

@@ -58,9 +58,9 @@ describe("Bench runs in chromium", () => {
     expect(partId).not.toBe("");
     await page.screenshot({ path: `${ARTEFACTS}/bench-run-kept.png`, fullPage: true });
 
-    // Use it in a build: a copy of a demo build's design with this sink.
+    // Use it in a build: a copy of the demo lantern's design with this sink.
     const list = (await (await page.request.get(`${BASE_URL}/api/v1/builds`)).json()) as { mine: { id: string; title: string }[] };
-    const source = list.mine.find((b) => /lantern/i.test(b.title))!;
+    const source = list.mine.find((b) => b.title === "Square lantern, 2-cell Li-ion")!;
     const detail = (await (await page.request.get(`${BASE_URL}/api/v1/builds/${source.id}`)).json()) as { revision: { design: { lightEngine: { heatsink: { partId: string } } } } };
     const design = structuredClone(detail.revision.design);
     design.lightEngine.heatsink = { partId };

@@ -20,7 +20,8 @@ export function pool(): mysql.Pool {
       database: e.DATABASE_NAME,
       connectionLimit: 10,
       queueLimit: 200,
-      connectTimeout: 5_000,
+      // A refused connection fails at once; an unreachable host must not hold a request past 2 s.
+      connectTimeout: 1_500,
       dateStrings: false,
       timezone: "Z",
       enableKeepAlive: true,
@@ -34,17 +35,38 @@ export function db(): Db {
   return holder.sinkwiseDb;
 }
 
-/** True when the error means MariaDB is not reachable (rather than a bad query). */
+/**
+ * True when the error means MariaDB is not reachable or went away (rather than a bad query):
+ * refused or reset connections, a server shutting down, a pool that is full, or any error the
+ * driver marks fatal for its connection. Each of these is a 503, never a 500.
+ */
 export function isDatabaseDown(error: unknown): boolean {
   const code = mysqlErrorCode(error);
-  return (
-    code === "ECONNREFUSED" ||
-    code === "PROTOCOL_CONNECTION_LOST" ||
-    code === "ETIMEDOUT" ||
-    code === "ENOTFOUND" ||
-    code === "ER_CON_COUNT_ERROR"
-  );
+  if (code !== undefined && DOWN_CODES.has(code)) return true;
+  for (let e: unknown = error, depth = 0; depth < 4 && e && typeof e === "object"; depth++) {
+    if ((e as { fatal?: unknown }).fatal === true) return true;
+    // mysql2 says this (without a code) when a query is sent on a connection that died.
+    if (/closed state|Pool is closed|Connection lost/i.test(String((e as { message?: unknown }).message ?? ""))) return true;
+    e = (e as { cause?: unknown }).cause;
+  }
+  return false;
 }
+
+const DOWN_CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "EPIPE",
+  "ETIMEDOUT",
+  "ENOTFOUND",
+  "EHOSTUNREACH",
+  "PROTOCOL_CONNECTION_LOST",
+  "PROTOCOL_SEQUENCE_TIMEOUT",
+  "ER_CON_COUNT_ERROR",
+  "ER_SERVER_SHUTDOWN",
+  "ER_CONNECTION_KILLED",
+  "ER_QUERY_INTERRUPTED",
+  "POOL_ENQUEUELIMIT",
+]);
 
 /** The driver's error code, looking through Drizzle's wrapper (which keeps it in `cause`). */
 export function mysqlErrorCode(error: unknown): string | undefined {

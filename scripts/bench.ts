@@ -1,6 +1,7 @@
 /** `npm run bench`: runs each section's benchmark in turn. Add a section by importing and awaiting it. */
 import { benchBuilds } from "./bench-builds";
 import { benchFit } from "./bench-fit";
+import { benchPages } from "./bench-pages";
 import { benchParts } from "./bench-parts";
 import { benchRetrofit } from "./bench-retrofit";
 import { benchThermal } from "./bench-thermal";
@@ -11,6 +12,7 @@ async function main(): Promise<void> {
   await benchParts();
   await benchBuilds();
   await benchFit();
+  await benchPages();
 }
 
 main().catch((e: unknown) => {

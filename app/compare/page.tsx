@@ -2,10 +2,11 @@ import Link from "next/link";
 import { type Candidate, ComparePicker } from "@/components/compare/compare-picker";
 import { CompareView } from "@/components/compare/compare-view";
 import { listBuilds } from "@/db/queries/builds";
-import { getComparison, listComparisons } from "@/db/queries/comparisons";
+import { listComparisons } from "@/db/queries/comparisons";
+import { ApiError } from "@/lib/http/api-error";
 import { compareQuerySchema, type CompareItem } from "@/lib/reviews/api-schemas";
 import { requirePageUser } from "@/server/auth/session";
-import { loadItems } from "@/server/compare/load";
+import { loadComparison } from "@/server/compare/load";
 
 export const metadata = { title: "Side by side" };
 
@@ -20,12 +21,16 @@ export default async function ComparePage({ searchParams }: { searchParams: Sear
   let problem: string | null = null;
   const savedId = one(sp.saved);
   if (savedId) {
-    const saved = await getComparison({ id: savedId });
-    const visible = saved && (saved.ownerId === user.id || (await loadItems({ items: saved.items, viewer: user }).then(() => true, () => false)));
-    if (saved && visible) {
+    // A refusal is shown as a problem; a database outage is an error page, never "not visible".
+    const saved = await loadComparison({ id: savedId, viewer: user }).catch((e: unknown) => {
+      if (e instanceof ApiError) return e;
+      throw e;
+    });
+    if (saved instanceof ApiError) problem = saved.message;
+    else {
       items = saved.items;
       savedTitle = saved.title;
-    } else problem = "No such saved comparison, or it compares builds you may not see.";
+    }
   } else if (one(sp.items)) {
     const parsed = compareQuerySchema.safeParse({ items: one(sp.items) });
     if (parsed.success) items = parsed.data.items;

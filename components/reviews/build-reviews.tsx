@@ -1,21 +1,18 @@
 import Link from "next/link";
-import { getBuild } from "@/db/queries/builds";
-import { listReviewsForBuild } from "@/db/queries/reviews";
 import type { BuildViewer } from "@/lib/builds/access";
-import { reviewView } from "@/server/reviews/load";
+import type { LoadedBuild } from "@/server/builds/load";
+import { loadBuildReviews } from "@/server/reviews/load";
 import { age, OlderRevisionBadge, StatusBadge } from "./review-badges";
 import { RequestReviewForm } from "./request-review-form";
 import { SharePanel } from "./share-panel";
 
 /**
  * Reviews of a build with their verdicts, and for its owner the "Request a review" form and
- * the share-link panel. A server component: place it on the build page with the viewer.
+ * the share-link panel. A server component: place it on a build page with the build its
+ * loader gave (`loadBuildPage`) and the viewer; it applies no access rule of its own.
  */
-export async function BuildReviews({ buildId, viewer }: { buildId: string; viewer: NonNullable<BuildViewer> }) {
-  const build = await getBuild({ id: buildId, viewer });
-  if (!build) return null;
-  const seeAll = build.access.isOwner || viewer.role === "admin";
-  const reviews = (await listReviewsForBuild({ buildId })).filter((r) => seeAll || r.reviewerId === viewer.id).map(reviewView);
+export async function BuildReviews({ build, viewer }: { build: LoadedBuild; viewer: NonNullable<BuildViewer> }) {
+  const reviews = await loadBuildReviews({ build, viewer });
   return (
     <section aria-label="Reviews" className="no-print space-y-4 rounded-lg border border-line bg-white/60 p-3 text-sm" data-testid="build-reviews">
       <h2 className="font-medium">Reviews</h2>

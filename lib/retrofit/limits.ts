@@ -120,7 +120,7 @@ export function evaluateLimits(defs: readonly LimitDef[], temperaturesC: Record<
         equation: d.kind === "max" ? "ΔT = T_limit − T" : "ΔT = T − T_limit",
         inputs: [q("T_limit", "limit", limitC, "°C"), q("T", `${d.place} temperature`, t, "°C")],
         result: q("ΔT", "headroom", headroom, "K"),
-        source: `verdict words and the ${marginK} K margin: PRODUCT.md`,
+        source: `common practice (a ${marginK} K margin below each rating, as set in the evaluation's options)`,
         notes: [`${verdict}: ≥ ${marginK} K is within budget, 0–${marginK} K tight, below 0 over budget.`],
       }),
     };

@@ -59,12 +59,12 @@ export function quickCheck(input: QuickCheckInput): QuickCheckResult {
   b.node("solder", "emitter solder point", "rthJspKPerW");
   b.node("sink", "heatsink", "sink");
   const rj = input.rthJspKPerW ?? 1e-6;
-  const tj = declaredResistance({ kelvinPerWatt: rj, source: "Rth(j-sp) as entered" });
+  const tj = declaredResistance({ kelvinPerWatt: rj, source: "Rth(j-sp) as entered by the person running the check" });
   if (input.rthJspKPerW === undefined) tj.trace.notes.push("No Rth(j-sp) given: the junction is taken at the solder point.");
   b.resistance("junction", "solder", rj, "junction → solder point (Rth j-sp)", "rthJspKPerW", tj.trace);
   const jt = input.interface ? joint({ name: "interface", specs: input.interface.specs, curves: {} }, input.interface.areaM2, "interface", problems) : null;
   const rif = jt?.kelvinPerWatt ?? 1e-6;
-  b.resistance("solder", "sink", rif, "interface → heatsink", "interface", jt?.trace ?? trace({ element: "interface", formula: "No interface given", equation: "R = 0", inputs: [], result: q("R", "resistance", 0, "K/W"), source: "as entered" }));
+  b.resistance("solder", "sink", rif, "interface → heatsink", "interface", jt?.trace ?? trace({ element: "interface", formula: "No interface given", equation: "R = 0", inputs: [], result: q("R", "resistance", 0, "K/W"), source: "as entered by the person running the check (no interface given)" }));
   const sinkOut =
     "declaredKPerW" in input.sink
       ? compileSinkToAir(b, { rating: "declared", sinkToAirKPerW: input.sink.declaredKPerW, ratedAirflow: "natural" }, "ambient", "sink", input.ambientC)

@@ -30,6 +30,10 @@ export interface Warmup {
   crossings: { limitId: LimitResult["id"]; node: string; limitC: number; timeS: number | null }[];
   /** First time every node is within 1 K of its steady temperature; null if not within the warm-up. */
   steadyWithinS: number | null;
+  /** Every step converged; Newton corrections over the run; the last step's largest heat imbalance, W. */
+  converged: boolean;
+  iterations: number;
+  residualW: number;
 }
 
 export interface WhatItTakes {
@@ -50,6 +54,8 @@ export interface ThermalResult {
   limits: LimitResult[];
   verdict: Verdict | null;
   ladder: { riseK: number; steps: LadderStep[]; remainderK: number } | null;
+  /** How the steady solve ended: converged, Newton iterations, largest heat imbalance at any node (W). */
+  solver: { converged: boolean; iterations: number; residualW: number };
 }
 
 export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, defs: readonly LimitDef[], o: ResolvedOptions): ThermalResult {
@@ -70,7 +76,8 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
     const r = breakdownRise(compiled.network, steady, top);
     ladder = { riseK: r.riseK, remainderK: r.remainderK, steps: r.steps.map((s) => ({ from: s.from, to: s.to, place: compiled.links[s.link]?.place ?? `${s.from} → ${s.to}`, deltaK: s.deltaK, watts: s.watts, kelvinPerWatt: s.kelvinPerWatt })) };
   }
-  return { nodes: compiled.nodes, links, temperaturesC: steady.temperaturesC, byPlace, energyBalanceW: steady.energyBalanceW, limits, verdict: worstVerdict(limits.map((l) => l.verdict)), ladder };
+  const solver = { converged: steady.converged, iterations: steady.iterations, residualW: steady.residualW };
+  return { nodes: compiled.nodes, links, temperaturesC: steady.temperaturesC, byPlace, energyBalanceW: steady.energyBalanceW, limits, verdict: worstVerdict(limits.map((l) => l.verdict)), ladder, solver };
 }
 
 /** Warm-up in quarters: stops after the quarter in which every node came within 1 K of steady ("60 min or until steady"). */
@@ -93,10 +100,14 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
   const crossings: (number | null)[] = maxLimits.map(() => null);
   let steadyAt: number | null = null;
   let initialC: Record<string, number> | undefined;
+  let iterations = 0;
+  let residualW = 0;
   try {
     for (let c = 0; c < WARMUP_CHUNKS && steadyAt === null; c++) {
       const t0 = c * chunkS;
       const r = solveTransient(network, { durationS: chunkS, stepS, thresholds, ...(initialC ? { initialC } : {}) }, WARMUP_SETTINGS);
+      iterations += r.iterations;
+      residualW = r.residualW;
       // Each quarter after the first starts where the last ended: skip its repeated first sample.
       for (let k = c === 0 ? 0 : 1; k < r.timesS.length; k++) {
         const t = t0 + r.timesS[k]!;
@@ -120,6 +131,9 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
       temperaturesC: temps,
       crossings: maxLimits.map((l, i) => ({ limitId: l.id, node: l.node, limitC: l.limitC, timeS: crossings[i] ?? null })),
       steadyWithinS: steadyAt,
+      converged: true,
+      iterations,
+      residualW,
     };
   } catch (err) {
     if (!isThermalInputError(err)) throw err;
@@ -134,7 +148,8 @@ const kpw = (value: number | null, what: string, equation: string, inputs: Trace
   trace: trace({ element: "inverse", formula: what, equation, inputs, result: q("R", what, value ?? 0, "K/W"), source, notes }),
 });
 
-const SEARCH = "lib/retrofit inverse search (Illinois regula falsi on steady solves of lib/thermal)";
+/** The search is a method, not a source: what it leans on is the steady model, whose links cite their own sources. */
+const SEARCH = "the steady heat-path model above, solved repeatedly (secant steps, then the Illinois variant of regula falsi) until the limit is met within 0.02 K; each link cites its own source";
 
 /** "What it takes": required sink resistance and the highest drive power, at frozen sources. */
 export function whatItTakes(compiled: CompiledBuild, steady: SteadyResult, limits: readonly LimitResult[], driveW: number, o: ResolvedOptions, field: string, problems: ProblemList): WhatItTakes | null {
@@ -151,7 +166,7 @@ export function whatItTakes(compiled: CompiledBuild, steady: SteadyResult, limit
       const notes = ["The emitter's heat follows Vf(Tj) during the search (linearised at this operating point); driver and cell heat held; the sink's own link replaced by a plain resistance during the search; searched over 0.001–1000 K/W (null: any sink in that range will do)."];
       const infeasible = (f: boolean) => (f ? [] : ["Even a perfect sink does not do it: the rest of the heat path is too hot."]);
       sinkToAir = {
-        presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/q across the sink's link", [], [], "lib/thermal steady solve (effective resistance at the solution)"),
+        presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/q across the sink's link", [], [], "the steady heat-path model (effective resistance ΔT/q of the sink's link at the solution; the link's own trace cites its source)"),
         forLimitKPerW: kpw(lim.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max", "find R: Tj(R) = T_j,max", inputs, [...notes, ...infeasible(lim.feasible)], SEARCH),
         forBudgetKPerW: kpw(bud.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max − margin", "find R: Tj(R) = T_j,max − margin", inputs, [...notes, ...infeasible(bud.feasible)], SEARCH),
       };

@@ -1,24 +1,12 @@
-import type { Trace, TraceQuantity } from "@/lib/thermal";
+import { makeTrace, quantity, type Trace } from "@/lib/thermal";
 
 /**
- * Traces of the electrical side and of the build-level figures, in the same shape the
- * engine's element models return, so the Budget screen expands every number the same way.
+ * Traces of the electrical side and of the build-level figures are made with the engine's
+ * own helpers, so the Budget screen expands every number the same way.
  */
-export const q = (symbol: string, name: string, value: number, unit: string): TraceQuantity => ({ symbol, name, value, unit });
-
-export interface TraceSpec {
-  element: string;
-  formula: string;
-  equation: string;
-  inputs: TraceQuantity[];
-  result: TraceQuantity;
-  source: string;
-  intermediates?: TraceQuantity[];
-  notes?: string[];
-  parts?: Trace[];
-}
-
-export const trace = (t: TraceSpec): Trace => ({ intermediates: [], notes: [], parts: [], ...t });
+export const q = quantity;
+export const trace = makeTrace;
+export type TraceSpec = Parameters<typeof makeTrace>[0];
 
 /** A figure with its unit and its trace; value null when it cannot be worked out (a problem says why). */
 export interface Traced {
@@ -37,7 +25,7 @@ export function seriesTrace(element: string, parts: Trace[], totalKPerW: number,
     equation: parts.length > 1 ? "R = " + parts.map((_, i) => `R${i + 1}`).join(" + ") : "R = R1",
     inputs: parts.map((p, i) => q(`R${i + 1}`, `${p.element}: ${p.formula}`, p.result.value, p.result.unit)),
     result: q("R", "resistance", totalKPerW, "K/W"),
-    source: 'Incropera et al., "Fundamentals of Heat and Mass Transfer", §3.1.3 (series thermal circuit)',
+    source: 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., §3.1.3 (the thermal circuit: resistances in series add)',
     notes,
     parts,
   });
@@ -45,9 +33,10 @@ export function seriesTrace(element: string, parts: Trace[], totalKPerW: number,
 
 /** Sources named once so every trace cites them the same way. */
 export const SOURCES = {
-  trade: "common practice (LED and Li-ion trade figures, see PRODUCT.md)",
+  trade: "common practice (LED and Li-ion trade figures)",
   incropera: 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed.',
   iso13732: "ISO 13732-1:2006, Ergonomics of the thermal environment — hot surfaces, burn thresholds (values from memory of the figures; check against a copy)",
-  ohm: "Joule heating P = I²·R (Ohm's law)",
-  datasheet: "the part record (datasheet, measurement or estimate as its provenance says)",
+  ohm: "Joule's first law, P = I²·R (any physics textbook)",
+  datasheet: "as entered by the part's author (datasheet, measurement or estimate, as the part's provenance says)",
+  entered: "as entered by the build's author",
 } as const;

@@ -1,44 +1,15 @@
 import { toKelvin } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
-import { linkModel, type AnyLinkModel } from "./link-models";
+import { linkModel } from "./link-models";
 import type { Network } from "./schema";
-import { groupLinks, type LinkGroups } from "./solver/assemble";
-import { minimumDegreeOrder, type FillPattern } from "./solver/ordering";
+import { groupLinks } from "./solver/assemble";
+import type { CompiledLink, CompiledNetwork } from "./solver/compiled";
+import { minimumDegreeOrder } from "./solver/ordering";
 import { scratch } from "./solver/scratch";
 import { checkReferences } from "./validate";
 
-export interface CompiledLink {
-  /** Solver index of the `from` node, or −1 for ambient. */
-  a: number;
-  /** Solver index of the `to` node, or −1 for ambient. */
-  b: number;
-  model: AnyLinkModel;
-}
-
-/**
- * A network turned into what the loops need: nodes renumbered in elimination order,
- * capacities and sources in typed arrays (solver order), kelvin throughout. Sources are
- * folded into P_i(T) = p0_i + p1_i·T.
- */
-export interface CompiledNetwork {
-  n: number;
-  /** Node ids in solver order. */
-  ids: string[];
-  /** Solver index of each node in the order of `network.nodes`. */
-  solverIndex: Int32Array;
-  ambientK: number;
-  capacity: Float64Array;
-  p0: Float64Array;
-  p1: Float64Array;
-  links: CompiledLink[];
-  /** Where the LU factors of the network's matrix can be non-zero (the factor visits only these). */
-  pattern: FillPattern;
-  /** The same links by kind, in flat arrays for the assembly loops. */
-  groups: LinkGroups;
-  linear: boolean;
-  network: Network;
-}
+export type { CompiledLink, CompiledNetwork } from "./solver/compiled";
 
 export const formatPath = (path: readonly (string | number)[]): string =>
   path.map((p) => (typeof p === "number" ? `[${p}]` : String(p))).join(".").replace(/\.\[/g, "[");

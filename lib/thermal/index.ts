@@ -28,7 +28,7 @@ export { STEFAN_BOLTZMANN, STANDARD_GRAVITY, ZERO_CELSIUS_K, NETWORK_LIMITS, toK
 export { solveSteady, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
 export type { SteadyOptions } from "./solver/steady";
 export { solveTransient, type TransientResult, type Crossing, type TransientSolverSettings } from "./solve-transient";
-export type { Trace, TraceQuantity, TraceValidity, ElementResult } from "./trace";
+export { makeTrace, quantity, elementResult, type Trace, type TraceQuantity, type TraceValidity, type ElementResult } from "./trace";
 export { airPropertiesAt, type AirProperties } from "./air-properties";
 export { MATERIALS, getMaterial, emissivityFor, type Material, type Finish } from "./materials";
 export {
@@ -46,6 +46,16 @@ export { radiationExchange, type RadiationInput } from "./elements/radiation";
 export { finEfficiency, type FinEfficiency, type FinEfficiencyInput } from "./elements/fin";
 export { finnedHeatsink, evaluateFinnedHeatsink, type FinnedHeatsinkGeometry, type FinnedHeatsinkEvaluation } from "./elements/heatsink";
 export { spreadingResistance, type SpreadingInput, type SpreadingResult } from "./elements/spreading";
-export { maxSourcePower, maxLinkResistance, type LimitTarget, type MaxPowerOptions, type MaxPowerResult, type MaxResistanceOptions, type MaxResistanceResult } from "./inverse";
+export {
+  maxSourcePower,
+  maxLinkResistance,
+  monotoneRoot,
+  requiredLinkResistance,
+  maxCommonScale,
+  SINK_RANGE_KPERW,
+  type ResistanceAnswer,
+  type ScaleAnswer,
+  type Root,
+  type LimitTarget, type MaxPowerOptions, type MaxPowerResult, type MaxResistanceOptions, type MaxResistanceResult } from "./inverse";
 export { breakdownRise, type RiseBreakdown, type RiseStep } from "./breakdown";
 export { explainLinks, traceLink } from "./explain";

@@ -3,7 +3,7 @@ import { toCelsius } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
 import type { Network } from "./schema";
-import { solveSteady } from "./solve-steady";
+import { solveSteady, type SteadyResult } from "./solve-steady";
 import { resolveSteadyOptions, solveCompiledSteady } from "./solver/steady";
 
 /** Target: keep `node` at or below `limitC` in steady state. */
@@ -23,6 +23,8 @@ export interface SearchOutcome {
 }
 
 const MAX_SOLVES = 200;
+/** The power search stops at 10 MW: far beyond any lamp, so reaching it means the limit is never met. */
+const MAX_POWER_W = 1e7;
 
 function nodeIndex(network: Network, id: string, path: string): number {
   const i = network.nodes.findIndex((n) => n.id === id);
@@ -52,30 +54,63 @@ function probe(target: number) {
   };
 }
 
+export interface Root {
+  x: number | null;
+  /** f at x (when x is not null). */
+  fx: number;
+  /** -1: f < 0 over the whole range (never reached); +1: f > 0 over it (always exceeded). */
+  outside: -1 | 0 | 1;
+  solves: number;
+}
+
 /**
- * Illinois (modified regula falsi) on an increasing f between lo (f < 0) and hi (f ≥ 0).
- * Exact in one step for a linear response, robust for the curved ones.
+ * The one inverse search of the engine: the root of an increasing f in [lo, hi], starting
+ * from a known point (x0, f0) and a first guess x1. Secant steps (at most 4× the last step)
+ * walk until the root is bracketed; Illinois (modified regula falsi) then closes in. Exact
+ * in one step for a linear response, robust for the curved ones. Stops when |f| ≤ tolF,
+ * when the bracket shrinks to round-off, or after maxSolves evaluations.
  */
-function illinois(f: (x: number) => number, lo: number, flo: number, hi: number, fhi: number, tolF: number, budget: () => boolean): number {
+export function monotoneRoot(f: (x: number) => number, x0: number, f0: number, x1: number, lo: number, hi: number, tolF: number, maxSolves: number): Root {
+  let solves = 0;
+  const ev = (x: number) => {
+    solves++;
+    return f(x);
+  };
+  let [a, fa] = [x0, f0];
+  let b = Math.min(Math.max(x1, lo), hi);
+  let fb = ev(b);
+  while (Math.sign(fa) === Math.sign(fb) && Math.abs(fb) > tolF && solves < maxSolves) {
+    if ((fb < 0 && b >= hi) || (fb > 0 && b <= lo)) return { x: null, fx: fb, outside: fb < 0 ? -1 : 1, solves };
+    const slope = (fb - fa) / (b - a);
+    const d = b - a;
+    let next = slope > 0 && Number.isFinite(slope) ? b - fb / slope : b + (fb < 0 ? 4 : -4) * Math.abs(d);
+    next = Math.min(Math.max(next, b - 4 * Math.abs(d) - 1e-12, lo), b + 4 * Math.abs(d) + 1e-12, hi);
+    [a, fa] = [b, fb];
+    b = next;
+    fb = ev(b);
+  }
+  if (Math.abs(fb) <= tolF || Math.sign(fa) === Math.sign(fb)) return { x: b, fx: fb, outside: 0, solves };
+  let [l, fl, h, fh] = fa < 0 ? [a, fa, b, fb] : [b, fb, a, fa];
   let side = 0;
-  for (let i = 0; i < MAX_SOLVES && budget(); i++) {
-    const x = Number.isFinite(fhi) ? (lo * fhi - hi * flo) / (fhi - flo) : 0.5 * (lo + hi);
-    const fx = f(x);
-    if (Math.abs(fx) <= tolF) return x;
-    if (hi - lo <= 1e-12 * Math.max(1, Math.abs(hi))) return fx <= 0 ? x : lo;
+  let x = b;
+  let fx = fb;
+  while (solves < maxSolves) {
+    x = Number.isFinite(fh) ? (l * fh - h * fl) / (fh - fl) : 0.5 * (l + h);
+    fx = ev(x);
+    if (Math.abs(fx) <= tolF || Math.abs(h - l) <= 1e-12 * Math.max(1, Math.abs(h))) break;
     if (fx < 0) {
-      lo = x;
-      flo = fx;
-      if (side === -1) fhi /= 2;
+      [l, fl] = [x, fx];
+      if (side === -1) fh /= 2;
       side = -1;
     } else {
-      hi = x;
-      fhi = fx;
-      if (side === 1) flo /= 2;
+      [h, fh] = [x, fx];
+      if (side === 1) fl /= 2;
       side = 1;
     }
   }
-  return lo;
+  // Out of budget on the hot side: the last point known to keep the limit is the answer.
+  if (fx > tolF) return { x: l, fx: fl, outside: 0, solves };
+  return { x, fx, outside: 0, solves };
 }
 
 export interface MaxPowerOptions extends LimitTarget {
@@ -114,19 +149,10 @@ export function maxSourcePower(network: Network, options: MaxPowerOptions): MaxP
   const f = (p: number) => pr.at(withPower(p)) - options.limitC;
   const f0 = f(0);
   if (f0 > 0) return { watts: 0, scale: present ? 0 : null, feasible: false, solves: pr.solves, converged: true, temperatureC: f0 + options.limitC };
-  let lo = 0;
-  let flo = f0;
-  let hi = Math.max(Math.abs(present), 1);
-  let fhi = f(hi);
-  while (fhi < 0 && hi < 1e7) {
-    lo = hi;
-    flo = fhi;
-    hi = Math.min(hi * 4, 1e7);
-    fhi = f(hi);
-  }
-  if (fhi < 0) return { watts: hi, scale: present ? hi / present : null, feasible: true, solves: pr.solves, converged: false, temperatureC: fhi + options.limitC };
-  const p = illinois(f, lo, flo, hi, fhi, tol, () => pr.solves < MAX_SOLVES);
-  const t = f(p) + options.limitC;
+  const root = monotoneRoot(f, 0, f0, Math.max(Math.abs(present), 1), 0, MAX_POWER_W, tol, MAX_SOLVES - 1);
+  if (root.outside === -1) return { watts: MAX_POWER_W, scale: present ? MAX_POWER_W / present : null, feasible: true, solves: pr.solves, converged: false, temperatureC: root.fx + options.limitC };
+  const p = root.x ?? 0;
+  const t = root.fx + options.limitC;
   return { watts: p, scale: present ? p / present : null, feasible: true, solves: pr.solves, converged: Math.abs(t - options.limitC) <= Math.max(tol, 1e-9) || t < options.limitC, temperatureC: t };
 }
 
@@ -166,8 +192,95 @@ export function maxLinkResistance(network: Network, options: MaxResistanceOption
   if (flo > 0) return { kelvinPerWatt: 0, presentKelvinPerWatt: present, feasible: false, solves: pr.solves, converged: true, temperatureC: flo + options.limitC };
   const fhi = f(hi);
   if (fhi <= 0) return { kelvinPerWatt: null, presentKelvinPerWatt: present, feasible: true, solves: pr.solves, converged: true, temperatureC: fhi + options.limitC };
-  const x = illinois(f, lo, flo, hi, fhi, tol, () => pr.solves < MAX_SOLVES);
-  const t = f(x) + options.limitC;
+  const root = monotoneRoot(f, lo, flo, hi, lo, hi, tol, MAX_SOLVES - 2);
+  const x = root.x ?? lo;
+  const t = root.fx + options.limitC;
   return { kelvinPerWatt: Math.exp(x), presentKelvinPerWatt: present, feasible: true, solves: pr.solves, converged: Math.abs(t - options.limitC) <= Math.max(tol, 1e-9) || t < options.limitC, temperatureC: t };
 }
 
+
+/**
+ * The two "what it takes" questions of the Budget and the quick check, answered with a few
+ * steady solves each. The responses are monotone and nearly linear (a temperature against a
+ * series resistance, or against a common scale of every source), so the search lands in 2–4
+ * solves. Searches stay inside a practical range, so no solve is asked about a sink so poor
+ * the parts would be thousands of kelvin hot.
+ */
+const PROBE_SOLVES = 24;
+
+/**
+ * Each probe only has to place a temperature within the search tolerance (0.02 K), so its
+ * steady solve stops at 1e-4 K instead of the engine's 1e-6 K: one Newton correction
+ * fewer per probe, and the probe moves by ~1e-11 K (Newton converges quadratically).
+ */
+const PROBE = { toleranceK: 1e-4 } as const;
+
+export interface ResistanceAnswer {
+  /** Largest resistance of the link keeping the node at the limit, K/W; null when any sink up to the top of the range will do; 0 when even a perfect link does not. */
+  kelvinPerWatt: number | null;
+  feasible: boolean;
+  solves: number;
+}
+
+export const SINK_RANGE_KPERW: readonly [number, number] = [1e-3, 1e3];
+
+/** Largest resistance link `index` may have for `node` to stay at or below `limitC` (sources as given, steady answer `at` the present link). */
+export function requiredLinkResistance(network: Network, at: SteadyResult, index: number, node: string, limitC: number, tolK = 0.02): ResistanceAnswer {
+  const link = network.links[index]!;
+  const f = (r: number) => {
+    const links = network.links.map((l, i) => (i === index ? { from: link.from, to: link.to, type: "resistance" as const, kelvinPerWatt: r } : l));
+    return (solveSteady({ ...network, links }, PROBE).temperaturesC[node] ?? 0) - limitC;
+  };
+  const r0 = at.links[index]?.kelvinPerWatt ?? 1;
+  const q = Math.max(Math.abs(at.links[index]?.watts ?? 0), 1e-6);
+  const f0 = (at.temperaturesC[node] ?? 0) - limitC;
+  // In a series path the node moves by about q·ΔR: a first guess that is exact for a linear network.
+  const guess = Math.max(r0 - f0 / q, SINK_RANGE_KPERW[0]);
+  const root = monotoneRoot(f, r0, f0, guess, SINK_RANGE_KPERW[0], SINK_RANGE_KPERW[1], tolK, PROBE_SOLVES);
+  if (root.outside === -1) return { kelvinPerWatt: null, feasible: true, solves: root.solves };
+  if (root.outside === 1) return { kelvinPerWatt: 0, feasible: false, solves: root.solves };
+  return { kelvinPerWatt: root.x, feasible: true, solves: root.solves };
+}
+
+export interface ScaleAnswer {
+  /** Largest factor on every source keeping every limit; null when no source heats anything. */
+  scale: number | null;
+  /** The limit (index into `limits`) that binds at that scale; null when none is reached in the range. */
+  binding: number | null;
+  solves: number;
+}
+
+const MAX_SCALE = 1e3;
+
+/** Largest common scale of all sources with every `limits[i]` node at or below its limit: one search on the worst excess. */
+export function maxCommonScale(network: Network, at: SteadyResult, limits: readonly { node: string; limitC: number }[], tolK = 0.02): ScaleAnswer {
+  if (limits.length === 0 || !network.sources.some((s) => s.watts > 0)) return { scale: null, binding: null, solves: 0 };
+  const excess = (t: Record<string, number>) => {
+    let worst = -Infinity;
+    let who = 0;
+    limits.forEach((l, i) => {
+      const e = (t[l.node] ?? 0) - l.limitC;
+      if (e > worst) [worst, who] = [e, i];
+    });
+    return { worst, who };
+  };
+  let lastWho = 0;
+  const f = (s: number) => {
+    const r = excess(solveSteady({ ...network, sources: network.sources.map((x) => ({ node: x.node, watts: x.watts * s })) }, PROBE).temperaturesC);
+    lastWho = r.who;
+    return r.worst;
+  };
+  const now = excess(at.temperaturesC);
+  // Rises scale about linearly with power: the first guess is where the tightest limit would be met.
+  const ta = network.ambientC;
+  let guess = MAX_SCALE;
+  for (const l of limits) {
+    const rise = (at.temperaturesC[l.node] ?? ta) - ta;
+    if (rise > 1e-9) guess = Math.min(guess, (l.limitC - ta) / rise);
+  }
+  if (ta > Math.min(...limits.map((l) => l.limitC))) return { scale: 0, binding: now.who, solves: 0 };
+  const root = monotoneRoot(f, 1, now.worst, Math.max(guess, 0), 0, MAX_SCALE, tolK, PROBE_SOLVES);
+  if (root.outside === -1) return { scale: MAX_SCALE, binding: null, solves: root.solves };
+  if (root.outside === 1) return { scale: 0, binding: lastWho, solves: root.solves };
+  return { scale: root.x, binding: lastWho, solves: root.solves };
+}

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { NETWORK_LIMITS } from "./constants";
+import { SURFACES } from "./correlations";
 import { referenceIssues, transientIssues } from "./validate";
 
 /**
@@ -29,7 +30,7 @@ const linkBase = {
   label: z.string().max(200).optional(),
 };
 
-export const surfaceSchema = z.enum(["vertical-plate", "horizontal-plate-up", "horizontal-plate-down", "horizontal-cylinder"]);
+export const surfaceSchema = z.enum(SURFACES);
 
 const emissivity = z.number().gt(0, "emissivity must be in (0, 1]").max(1, "emissivity must be in (0, 1]");
 const length = positive(1e3, 1e-9);

@@ -17,6 +17,12 @@ export interface TransientResult {
   timesS: number[];
   temperaturesC: Record<string, number[]>;
   crossings?: Crossing[];
+  /** Every step's Newton iteration converged (a warm-up that cannot converge throws instead of answering). */
+  converged: boolean;
+  /** Newton corrections over the whole warm-up (the same count as `newtonIterations`). */
+  iterations: number;
+  /** Largest heat imbalance of the last step's equations at its answer, W. */
+  residualW: number;
   /** Newton corrections and matrix factorisations used (for the curious and the benchmark). */
   newtonIterations: number;
   factorisations: number;
@@ -75,6 +81,9 @@ export function solveTransient(network: Network, options: TransientOptions, sett
   const result: TransientResult = {
     timesS: solution.timesS,
     temperaturesC,
+    converged: true,
+    iterations: solution.newtonIterations,
+    residualW: solution.residualW,
     newtonIterations: solution.newtonIterations,
     factorisations: solution.factorisations,
   };

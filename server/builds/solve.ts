@@ -101,7 +101,11 @@ async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit
   if (hit !== undefined) return { head: { ...base, cached: true }, evaluationJson: hit };
   const evaluation = evaluateRevision({ design: revision.design, records });
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
-  await putCachedResult({ revisionId: revision.id, cacheKey: key, resultJson: evaluationJson });
+  // Written after the answer leaves: a slow or failed cache write costs the next caller a
+  // recomputation, never this caller time or an error.
+  void putCachedResult({ revisionId: revision.id, cacheKey: key, resultJson: evaluationJson }).catch((e: unknown) => {
+    console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
+  });
   return { head: { ...base, cached: false }, evaluationJson, evaluation };
 }
 

@@ -1,11 +1,12 @@
 import "server-only";
-import { getBuild, getRevision, type RevisionRow } from "@/db/queries/builds";
+import type { RevisionRow } from "@/db/queries/builds";
+import { getComparison } from "@/db/queries/comparisons";
 import type { BuildViewer } from "@/lib/builds/access";
 import { designDiff, figureRows, ladders, warmupSeries } from "@/lib/compare";
 import { ApiError } from "@/lib/http/api-error";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import { buildDesignSchema, type BuildDesign } from "@/lib/retrofit";
-import { loadDesignParts, type LoadedBuild } from "@/server/builds/load";
+import { loadBuild, loadDesignParts, loadRevision, type LoadedBuild } from "@/server/builds/load";
 import { solveRevision } from "@/server/builds/solve";
 
 type Viewer = NonNullable<BuildViewer>;
@@ -17,14 +18,29 @@ type Viewer = NonNullable<BuildViewer>;
 export async function loadItems({ items, viewer }: { items: readonly CompareItem[]; viewer: Viewer }): Promise<{ build: LoadedBuild; revision: RevisionRow }[]> {
   const out: { build: LoadedBuild; revision: RevisionRow }[] = [];
   for (const [i, item] of items.entries()) {
-    const build = await getBuild({ id: item.buildId, viewer });
-    if (!build) throw new ApiError("not_found:build", `Build ${item.buildId} does not exist or is not shared with you, so nothing is compared.`, `items[${i}]`);
+    // The builds' own loaders apply the rule; only their words change here (which item, and that nothing is compared).
+    const build = await loadBuild({ id: item.buildId, viewer }).catch(refuse(new ApiError("not_found:build", `Build ${item.buildId} does not exist or is not shared with you, so nothing is compared.`, `items[${i}]`)));
     const number = item.revision ?? build.currentRevision;
-    const revision = await getRevision({ buildId: build.id, number });
-    if (!revision) throw new ApiError("not_found:revision", `Build ${item.buildId} has no revision ${number}, so nothing is compared.`, `items[${i}]`);
+    const revision = await loadRevision({ build, number }).catch(refuse(new ApiError("not_found:revision", `Build ${item.buildId} has no revision ${number}, so nothing is compared.`, `items[${i}]`)));
     out.push({ build, revision });
   }
   return out;
+}
+
+/** Replaces a refusal (ApiError) with `instead`; anything else (an outage) goes on as it is. */
+function refuse(instead: ApiError): (e: unknown) => never {
+  return (e: unknown) => {
+    throw e instanceof ApiError ? instead : e;
+  };
+}
+
+/** A saved comparison: its owner's, or anyone's who may see every build in it; else 404. */
+export async function loadComparison({ id, viewer }: { id: string; viewer: Viewer }) {
+  const notFound = new ApiError("not_found:comparison", "No such saved comparison, or it compares builds you may not see.", "id");
+  const saved = await getComparison({ id });
+  if (!saved) throw notFound;
+  if (saved.ownerId !== viewer.id) await loadItems({ items: saved.items, viewer }).catch(refuse(notFound));
+  return saved;
 }
 
 export type Comparison = Awaited<ReturnType<typeof compareItems>>;

@@ -1,7 +1,27 @@
 import "server-only";
-import type { AttachmentRecord } from "@/db/queries/part-attachments";
+import { type AttachmentRecord, getAttachment } from "@/db/queries/part-attachments";
 import { ApiError } from "@/lib/http/api-error";
 import { MAX_ATTACHMENT_BYTES } from "@/lib/attachments";
+import type { PartViewer } from "@/lib/parts";
+import { editablePart, visiblePart } from "./api";
+
+/** An attachment is seen by whoever may see its part (404 alike for a hidden part and a missing file). */
+export async function visibleAttachment({ partId, id, viewer }: { partId: string; id: string; viewer: PartViewer }): Promise<AttachmentRecord> {
+  await visiblePart(partId, viewer);
+  return attachmentOf(partId, id);
+}
+
+/** An attachment is removed by whoever may change its part. */
+export async function editableAttachment({ partId, id, viewer }: { partId: string; id: string; viewer: PartViewer }): Promise<AttachmentRecord> {
+  await editablePart(partId, viewer);
+  return attachmentOf(partId, id);
+}
+
+async function attachmentOf(partId: string, id: string): Promise<AttachmentRecord> {
+  const row = await getAttachment({ partId, id });
+  if (!row) throw new ApiError("not_found:attachment", "No such attachment on this part.", "attachmentId");
+  return row;
+}
 
 // Room for the multipart boundaries and headers around a file at the limit.
 const FORM_OVERHEAD_BYTES = 64 * 1024;

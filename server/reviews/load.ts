@@ -1,7 +1,8 @@
 import "server-only";
-import { getReview, type ReviewRow } from "@/db/queries/reviews";
+import { getReview, listReviewsForBuild, type ReviewRow } from "@/db/queries/reviews";
 import type { BuildViewer } from "@/lib/builds/access";
 import { ApiError } from "@/lib/http/api-error";
+import type { LoadedBuild } from "@/server/builds/load";
 
 export type ReviewRole = "reviewer" | "owner" | "admin";
 
@@ -10,6 +11,15 @@ export type ReviewView = ReviewRow & { olderRevision: boolean };
 
 export function reviewView(row: ReviewRow): ReviewView {
   return { ...row, olderRevision: row.revisionNumber < row.currentRevision };
+}
+
+/**
+ * Reviews of a build the viewer may see (loaded with `loadBuild`): every one for its owner
+ * and admins; a reviewer sees the reviews they were asked for, anyone else none.
+ */
+export async function loadBuildReviews({ build, viewer }: { build: LoadedBuild; viewer: NonNullable<BuildViewer> }): Promise<ReviewView[]> {
+  const seeAll = build.access.isOwner || viewer.role === "admin";
+  return (await listReviewsForBuild({ buildId: build.id })).filter((r) => seeAll || r.reviewerId === viewer.id).map(reviewView);
 }
 
 /**

@@ -41,7 +41,12 @@ describe("POST /api/v1/builds/[id]/solve", () => {
     expect(JSON.stringify(first.body)).not.toMatch(/NaN|Infinity/);
     const junction = s.evaluation.scenarios[0]?.thermal?.limits.find((l) => l.id === "junction");
     expect(junction && Number.isFinite(junction.headroomK)).toBe(true);
-    const again = await owner.post(`/api/v1/builds/${buildId}/solve`, {});
+    // The cache is written after the first answer has gone: poll briefly for the hit.
+    let again = await owner.post(`/api/v1/builds/${buildId}/solve`, {});
+    for (let i = 0; i < 50 && !(again.body as unknown as Solve).cached; i++) {
+      await new Promise((r) => setTimeout(r, 100));
+      again = await owner.post(`/api/v1/builds/${buildId}/solve`, {});
+    }
     expect((again.body as unknown as Solve).cached).toBe(true);
     expect((again.body as unknown as Solve).evaluation.verdict).toBe(s.evaluation.verdict);
   });

@@ -12,7 +12,18 @@ export type Reply = { status: number; body: Json; headers: Headers };
 
 export class Client {
   private cookies = new Map<string, string>();
-  constructor(private readonly origin: string | null = BASE_URL, private readonly address = "203.0.113.10") {}
+  /** `base` is the app process to talk to (another port for the scale-out and fault tests). */
+  constructor(
+    private readonly origin: string | null = BASE_URL,
+    private readonly address = "203.0.113.10",
+    private readonly base = BASE_URL,
+  ) {}
+
+  /** Takes over another client's cookies (its session), e.g. to use it on another app process. */
+  withCookiesOf(other: Client): this {
+    for (const [k, v] of other.cookies) this.cookies.set(k, v);
+    return this;
+  }
 
   async request(method: string, path: string, body?: unknown, extraHeaders: Record<string, string> = {}): Promise<Reply> {
     const headers: Record<string, string> = {};
@@ -39,7 +50,7 @@ export class Client {
     const headers: Record<string, string> = { "x-forwarded-for": this.address, ...extraHeaders };
     if (this.origin) headers.origin = this.origin;
     if (this.cookies.size) headers.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
-    const response = await fetch(`${BASE_URL}${path}`, { method, headers, body, redirect: "manual" });
+    const response = await fetch(`${this.base}${path}`, { method, headers, body, redirect: "manual" });
     for (const c of response.headers.getSetCookie()) {
       const [pair] = c.split(";");
       const [name, ...rest] = (pair ?? "").split("=");

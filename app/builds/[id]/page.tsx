@@ -31,7 +31,7 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
       <aside className="space-y-4">
         <BuildActions buildId={build.id} isOwner={build.access.isOwner} />
         {build.access.isOwner && <MembersPanel buildId={build.id} />}
-        <BuildReviews buildId={build.id} viewer={user} />
+        <BuildReviews build={build} viewer={user} />
         <section className="rounded-lg border border-line bg-white/60 p-3 text-sm">
           <h2 className="mb-2 font-medium">History</h2>
           <ol className="space-y-1.5">

@@ -21,7 +21,11 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
     if (e instanceof ApiError) notFound();
     throw e;
   });
-  const [comments, solved] = await Promise.all([listComments({ reviewId: review.id }), reviewedSolve({ review }).catch(() => null)]);
+  const [comments, solved] = await Promise.all([listComments({ reviewId: review.id }), reviewedSolve({ review }).catch((e: unknown) => {
+      // A revision that no longer evaluates shows without figures; a database outage is an error, not "nothing".
+      if (e instanceof ApiError) return null;
+      throw e;
+    })]);
   const evaluation = solved?.evaluation ?? null;
   const anchors = evaluation ? heatPathAnchors(evaluation) : { nodes: [], links: [], figures: [] };
   const thread: CommentItem[] = comments.map((c) => ({ ...c, createdAt: c.createdAt.toISOString() }));

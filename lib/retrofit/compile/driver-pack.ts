@@ -21,7 +21,7 @@ const PACKED_EXPOSURE = 0.7;
 const TAPE_ADHESIVE = { conductivityWPerMK: 0.5, bondLineM: 40e-6 };
 
 const boardCapacity = (massKg: number, what: string): { heatCapacityJPerK: number; trace: Trace } =>
-  ({ ...heatCapacity({ massKg, specificHeatJPerKgK: BOARD_SPECIFIC_HEAT }), trace: trace({ element: "heat-capacity", formula: "Lumped heat capacity", equation: "C = m·c_p", inputs: [q("m", `mass of the ${what}`, massKg, "kg"), q("c_p", "FR-4 with parts (from memory)", BOARD_SPECIFIC_HEAT, "J/(kg·K)")], result: q("C", "heat capacity", massKg * BOARD_SPECIFIC_HEAT, "J/K"), source: "from memory (FR-4 laminate ≈ 1100 J/(kg·K))" }) });
+  ({ ...heatCapacity({ massKg, specificHeatJPerKgK: BOARD_SPECIFIC_HEAT }), trace: trace({ element: "heat-capacity", formula: "Lumped heat capacity", equation: "C = m·c_p", inputs: [q("m", `mass of the ${what}`, massKg, "kg"), q("c_p", "FR-4 with parts (from memory)", BOARD_SPECIFIC_HEAT, "J/(kg·K)")], result: q("C", "heat capacity", massKg * BOARD_SPECIFIC_HEAT, "J/K"), source: "from memory of FR-4 laminate data (≈ 1100 J/(kg·K)) — check against a copy" }) });
 
 /** A board in the housing air: both faces convect to the air and radiate to the wall. */
 function boardInAir(b: NetworkBuilder, id: string, areaM2: number, faces: number, g: HousingGeometry, slot: string, place: string): void {
@@ -76,7 +76,7 @@ export function compileCells(b: NetworkBuilder, build: ResolvedBuild, g: Housing
   const l = build.pack.cellLengthM ?? 0.065;
   const mass = n * (cell.specs.massKg ?? 0.046);
   const cap = heatCapacity({ massKg: mass, specificHeatJPerKgK: CELL_SPECIFIC_HEAT });
-  cap.trace.source = "from memory (Li-ion cells ≈ 0.9–1.1 kJ/(kg·K))";
+  cap.trace.source = "from memory of published 18650 calorimetry (0.9–1.1 kJ/(kg·K)) — check against a copy";
   if (cell.specs.massKg === undefined) b.problems.add("pack.cell.massKg", "cell mass not given: 46 g (an 18650) assumed", "info");
   b.node("cells", PLACES.cells, "pack.cell", cap);
   const area = n * (Math.PI * d * l + (Math.PI * d * d) / 2) * (n > 1 ? PACKED_EXPOSURE : 1);

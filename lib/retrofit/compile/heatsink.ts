@@ -57,7 +57,7 @@ export function sinkCapacity(s: HeatsinkSpecs): { heatCapacityJPerK: number; tra
 export function compileSinkToAir(b: NetworkBuilder, s: HeatsinkSpecs, to: string, field: string, guessC: number): { link: number; estimateKPerW: number } | null {
   const where = to === "ambient" ? "ambient air" : PLACES.air;
   if (s.rating === "declared") {
-    const r = declaredResistance({ kelvinPerWatt: s.sinkToAirKPerW, source: "the heatsink part's declared sink-to-air resistance" });
+    const r = declaredResistance({ kelvinPerWatt: s.sinkToAirKPerW, source: "the heatsink's declared sink-to-air resistance, as entered by the part's author" });
     if (s.ratedAirflow === "forced") {
       b.problems.add(`${field}.ratedAirflow`, "the sink's resistance is rated with a fan; in still air inside a lamp it will be several times worse", "warning");
       r.trace.notes.push("Rated in forced air: optimistic for still air.");

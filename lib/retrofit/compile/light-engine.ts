@@ -1,6 +1,6 @@
 import { declaredResistance, getMaterial, heatCapacity, interfaceLayer, spreadingResistance, strapResistance, type Trace } from "@/lib/thermal";
 import type { ResolvedBuild } from "../resolved";
-import { q, seriesTrace, trace } from "../trace";
+import { q, seriesTrace, SOURCES, trace } from "../trace";
 import { PLACES, type NetworkBuilder } from "./builder";
 import type { HousingGeometry } from "./housing";
 import { wallSpot } from "./housing";
@@ -43,10 +43,10 @@ export function compileLightEngine(b: NetworkBuilder, build: ResolvedBuild, g: H
   const cj = n * EMITTER_CAPACITY_J_PER_K;
   b.node("junction", PLACES.junction, "lightEngine.emitter", {
     heatCapacityJPerK: cj,
-    trace: trace({ element: "heat-capacity", formula: "Emitter packages", equation: "C = N·C_package", inputs: [q("N", "emitters", n, "1"), q("C_package", "one package (≈ 30 mg at ≈ 700 J/(kg·K), estimate)", EMITTER_CAPACITY_J_PER_K, "J/K")], result: q("C", "heat capacity", cj, "J/K"), source: "estimate" }),
+    trace: trace({ element: "heat-capacity", formula: "Emitter packages", equation: "C = N·C_package", inputs: [q("N", "emitters", n, "1"), q("C_package", "one package (≈ 30 mg at ≈ 700 J/(kg·K), estimate)", EMITTER_CAPACITY_J_PER_K, "J/K")], result: q("C", "heat capacity", cj, "J/K"), source: "common practice (a small emitter package weighs tens of milligrams; estimate)" }),
   });
   b.node("solder", PLACES.solder, "lightEngine.emitter");
-  const rj = declaredResistance({ kelvinPerWatt: e.specs.rthJspKPerW, source: `Rth(j-sp) of ${e.name} (the part record)` });
+  const rj = declaredResistance({ kelvinPerWatt: e.specs.rthJspKPerW, source: `Rth(j-sp) of ${e.name}, ${SOURCES.datasheet}` });
   rj.trace.notes.push(n > 1 ? `${n} emitters side by side: parallel paths, R = Rth(j-sp)/${n}.` : "One emitter.");
   b.resistance("junction", "solder", e.specs.rthJspKPerW / n, "junction → solder point (Rth j-sp)", "lightEngine.emitter", rj.trace);
 

@@ -87,7 +87,7 @@ export function emitterAt(e: ResolvedPart<"emitter">, currentA: number, tjC: num
     source: s.vfTempCoeffVPerK !== undefined ? SOURCES.datasheet : `${SOURCES.datasheet}; coefficient −2 mV/K assumed (${SOURCES.trade})`,
     notes: v.fromCurve ? [] : ["No Vf-vs-current curve: Vf taken as at the reference current for every current (real Vf rises with current)."],
   });
-  const powerTrace = trace({ element: "emitter-power", formula: "Electrical power of one emitter", equation: "P = Vf·I", inputs: [q("Vf", "forward voltage", v.vf, "V"), q("I", "current", currentA, "A")], result: q("P", "electrical power", power, "W"), source: "definition of electrical power" });
+  const powerTrace = trace({ element: "emitter-power", formula: "Electrical power of one emitter", equation: "P = Vf·I", inputs: [q("Vf", "forward voltage", v.vf, "V"), q("I", "current", currentA, "A")], result: q("P", "electrical power", power, "W"), source: "definition of electrical power, P = V·I (any physics textbook)" });
   const heatTrace = trace({ element: "emitter-heat", formula: "Heat at the junction", equation: "P_heat = P·f_heat", inputs: [q("P", "electrical power", power, "W"), q("f_heat", "heat fraction", heatFraction, "1")], result: q("P_heat", "heat", heat, "W"), source: s.heatFraction !== undefined ? SOURCES.datasheet : SOURCES.trade, notes: [heatNote] });
   const fluxTrace =
     flux === null || refFlux === null

@@ -35,7 +35,7 @@ export function packSummary(build: ResolvedBuild): PackSummary | null {
     nominalVoltage: { value: v, unit: "V", trace: trace({ element: "pack-voltage", formula: "Cells in series add voltage", equation: "V = S·V_cell", inputs: [q("S", "cells in series", s, "1"), q("V_cell", `nominal voltage of ${cell.name}`, c.nominalVoltageV, "V")], result: q("V", "pack nominal voltage", v, "V"), source: SOURCES.trade }) },
     capacityC: { value: qC, unit: "C", trace: trace({ element: "pack-capacity", formula: "Cells in parallel add capacity at the same voltage", equation: "Q = P·Q_cell", inputs: [q("P", "cells in parallel", p, "1"), q("Q_cell", "cell capacity", c.capacityCoulomb, "C")], result: q("Q", "pack capacity", qC, "C"), source: SOURCES.trade, notes: [`${(qC / 3.6).toFixed(0)} mAh (1 mAh = 3.6 C)`] }) },
     capacityMAh: qC / 3.6,
-    energyWh: { value: wh, unit: "Wh", trace: trace({ element: "pack-energy", formula: "Stored energy at nominal voltage", equation: "E = V·Q", inputs: [q("V", "pack nominal voltage", v, "V"), q("Q", "pack capacity", qC, "C")], result: q("E", "energy", wh, "Wh"), source: "definition (1 Wh = 3600 J)" }) },
+    energyWh: { value: wh, unit: "Wh", trace: trace({ element: "pack-energy", formula: "Stored energy at nominal voltage", equation: "E = V·Q", inputs: [q("V", "pack nominal voltage", v, "V"), q("Q", "pack capacity", qC, "C")], result: q("E", "energy", wh, "Wh"), source: "definition of energy, E = V·Q (1 Wh = 3600 J; any physics textbook)" }) },
     maxVoltageV: s * c.chargeEndVoltageV,
     minVoltageV: s * c.cutoffVoltageV,
     internalResistanceOhm: c.internalResistanceOhm ?? DEFAULT_CELL_RESISTANCE_OHM,
@@ -57,7 +57,7 @@ export function cellHeat(pack: PackSummary, packCurrentA: number): Traced {
       inputs: [q("I_pack", "pack current", packCurrentA, "A"), q("S·P", "cells", pack.cells, "1"), q("P", "cells in parallel", pack.parallel, "1"), q("R_cell", "internal resistance per cell", pack.internalResistanceOhm, "Ω")],
       intermediates: [q("I_cell", "current per cell", i, "A")],
       result: q("P_cells", "heat in the cells", w, "W"),
-      source: pack.resistanceAssumed ? `${SOURCES.ohm}; R_cell assumed 50 mΩ (from memory, a middling 18650)` : SOURCES.ohm,
+      source: pack.resistanceAssumed ? `${SOURCES.ohm}; R_cell assumed 50 mΩ (from memory of typical 18650 datasheets — check against a copy)` : SOURCES.ohm,
       notes: ["Entropic (reversible) heat is left out; it is small against I²R at lamp currents."],
     }),
   };

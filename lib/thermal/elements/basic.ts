@@ -2,7 +2,7 @@ import { getMaterial } from "../materials";
 import { ThermalInputError } from "../errors";
 import { elementResult, makeTrace, quantity, type ElementResult, type Trace } from "../trace";
 
-const INCROPERA = 'Incropera et al., "Fundamentals of Heat and Mass Transfer"';
+const INCROPERA = 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed.';
 
 /** A declared resistance, e.g. Rth(j-sp) from a datasheet or a heatsink's rating. */
 export function declaredResistance(input: { kelvinPerWatt: number; source?: string }): ElementResult {
@@ -12,7 +12,7 @@ export function declaredResistance(input: { kelvinPerWatt: number; source?: stri
     equation: "R = R_declared",
     inputs: [quantity("R", "declared resistance", input.kelvinPerWatt, "K/W")],
     result: quantity("R", "resistance", input.kelvinPerWatt, "K/W"),
-    source: input.source ?? "declared by the caller (datasheet or measurement)",
+    source: input.source ?? "as entered by the network's author (datasheet or measurement)",
   });
   return elementResult(1 / input.kelvinPerWatt, trace);
 }
@@ -120,7 +120,7 @@ export function heatCapacity(input: HeatCapacityInput): { heatCapacityJPerK: num
   if ("specificHeatJPerKgK" in input) {
     mass = input.massKg;
     cp = input.specificHeatJPerKgK;
-    source = "specific heat given by the caller";
+    source = "specific heat as entered by the network's author";
     inputs.push(quantity("m", "mass", mass, "kg"), quantity("c_p", "specific heat", cp, "J/(kg·K)"));
   } else {
     const material = getMaterial(input.materialId);

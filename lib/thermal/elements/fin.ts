@@ -41,7 +41,7 @@ export function finEfficiency(input: FinEfficiencyInput): FinEfficiency {
       ],
       intermediates: [quantity("m", "fin parameter", m, "1/m"), quantity("L_c", "corrected length", lc, "m"), quantity("m·L_c", "", x, "1")],
       result: quantity("η_f", "fin efficiency", eta, "1"),
-      source: 'Incropera et al., "Fundamentals of Heat and Mass Transfer", eqs. 3.89 and 3.91 (Table 4.3 in the 6th ed. fin efficiencies)',
+      source: 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., §3.6.4 (fin efficiency with the corrected length L_c = L + t/2; equation numbers from memory — check against a copy)',
     }),
   };
 }

@@ -1,7 +1,8 @@
 import { airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, STEFAN_BOLTZMANN, toKelvin } from "../constants";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
-import { naturalConvectionH } from "./natural-convection";
+import { channelNusselt, CHANNEL_SOURCE } from "../correlations";
+import { naturalConvectionH } from "../solver/convection-kernel";
 
 /** Straight-fin heatsink with vertical fins (channels run vertically), all lengths in metres. */
 export interface FinnedHeatsinkGeometry {
@@ -64,7 +65,7 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
   // Bar-Cohen & Rohsenow composite for isothermal symmetric vertical channels: spans the
   // fully developed (choked) limit Nu = El/24 and the isolated-plate limit Nu ∝ El^(1/4).
   const el = (STANDARD_GRAVITY * air.expansionPerK * dT * s ** 4) / (air.kinematicViscosityM2PerS * air.diffusivityM2PerS * lv);
-  const nuS = (576 / (el * el) + 2.87 / Math.sqrt(el)) ** -0.5;
+  const nuS = channelNusselt(el);
   const hNatCh = (nuS * k) / s;
   const hNatOuter = naturalConvectionH("vertical-plate", lv, surfaceK, ambientK);
 
@@ -120,7 +121,7 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
 export const finnedHeatsinkConductance = (g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): number =>
   evaluateFinnedHeatsink(g, surfaceK, ambientK).conductanceWPerK;
 
-const BCR = "Bar-Cohen & Rohsenow, J. Heat Transfer 106 (1984) 116, symmetric isothermal plates; as Incropera et al., §9.7";
+const BCR = CHANNEL_SOURCE;
 
 /** Sink-to-air resistance of a straight-fin heatsink at a base temperature and an air temperature. */
 export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: number; ambientC: number }): ElementResult & { evaluation: FinnedHeatsinkEvaluation } {
@@ -164,7 +165,7 @@ export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: numbe
       quantity("G_rad", "radiation from the envelope", e.gRadiation, "W/K"),
     ],
     result: quantity("R", "sink-to-air resistance", 1 / e.conductanceWPerK, "K/W"),
-    source: `${BCR}; outer faces: Churchill & Chu (1975); fin efficiency: Incropera eqs. 3.89, 3.91; forced flow: Incropera eq. 7.30 and Table 8.2 (Nu = 7.54); air: ${e.air.source}`,
+    source: `${BCR}; outer faces: Churchill & Chu, Int. J. Heat Mass Transfer 18 (1975) 1323; fin efficiency: Incropera et al., 6th ed., §3.6.4; forced flow: Incropera et al., 6th ed., eq. 7.30 and the fully developed parallel-plate value Nu = 7.54 (table number from memory — check against a copy); air: ${e.air.source}`,
     validity: { range: "vertical fins, isothermal base, laminar flow (Re_L < 5·10⁵)", inRange: e.reynolds < 5e5 },
     notes,
   });

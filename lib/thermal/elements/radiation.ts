@@ -35,7 +35,7 @@ export function radiationExchange(input: RadiationInput): ElementResult & { watt
       quantity("h_r", "radiation coefficient", g / input.areaM2, "W/(m²·K)"),
     ],
     result: quantity("G", "conductance (secant)", g, "W/K"),
-    source: 'Incropera et al., "Fundamentals of Heat and Mass Transfer", eq. 1.7 (small surface in a large enclosure); σ from CODATA 2018',
+    source: 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., eq. 1.7 (small surface in a large enclosure); σ from CODATA 2018',
     notes: ["Surroundings are taken at the temperature of the link's `to` node and to be much larger than the surface."],
   });
   return { ...elementResult(g, trace), watts };

@@ -1,27 +1,4 @@
-import type { CompiledLink, CompiledNetwork } from "../compile";
-import type { LinkModel } from "../link-models";
-import type { NaturalConvectionLink } from "./convection-kernel";
-
-/**
- * The links sorted by kind into flat arrays, so assembly runs one tight loop per kind:
- * linear and radiation links become plain numbers (no call at all), natural convection
- * one monomorphic call, and only the rare remaining models a general one.
- */
-export interface LinkGroups {
-  linA: Int32Array;
-  linB: Int32Array;
-  linG: Float64Array;
-  radA: Int32Array;
-  radB: Int32Array;
-  /** ε·σ·A of each radiation link, W/K⁴. */
-  radC: Float64Array;
-  natA: Int32Array;
-  natB: Int32Array;
-  nat: NaturalConvectionLink[];
-  othA: Int32Array;
-  othB: Int32Array;
-  oth: LinkModel[];
-}
+import type { CompiledLink, CompiledNetwork, LinkGroups } from "./compiled";
 
 export function groupLinks(links: readonly CompiledLink[]): LinkGroups {
   let lin = 0;

@@ -1,25 +1,18 @@
 import { AIR, airInto } from "../air-properties";
 import { STANDARD_GRAVITY, ZERO_CELSIUS_K } from "../constants";
-import type { LinkModel } from "../link-models";
+import { flippedCode, nusseltOf, SURFACE_CODE, type Surface } from "../correlations";
 import { AIR_TABLE } from "../data/air-table";
-import type { Surface } from "../schema";
+import type { LinkModel } from "./link-model";
 
 /**
  * The natural-convection coefficient as the solver loops evaluate it, many thousand times
- * per warm-up: the same interpolation and correlations as `naturalConvectionCoefficient`
- * (elements/natural-convection.ts, which also names the sources), but with the table row
- * found by a bucket lookup instead of a search, no strings, no objects, and derivatives
- * worked out analytically instead of by finite differences.
+ * per warm-up: the correlations of correlations.ts (the one place they are written, which
+ * also names the sources) with the air table's row found by a bucket lookup instead of a
+ * search, no strings, no objects, and derivatives worked out analytically.
  */
 
-/** Surfaces as small integers for the loops; a colder horizontal plate flips up ↔ down. */
-export const SURFACE_CODE: Readonly<Record<Surface, number>> = {
-  "vertical-plate": 0,
-  "horizontal-cylinder": 1,
-  "horizontal-plate-up": 2,
-  "horizontal-plate-down": 3,
-};
-const flipped = (code: number) => (code >= 2 ? 5 - code : code);
+const flipped = flippedCode;
+export { SURFACE_CODE };
 
 /** Same floor as the element model: a link at ΔT = 0 keeps a small, finite conductance. */
 const MIN_DELTA_K = 1e-9;
@@ -107,67 +100,7 @@ export function filmAir(filmK: number, out: Float64Array, withSlopes: boolean): 
   }
 }
 
-/**
- * x^(9/16) = ¹⁶√(x⁹) and y^(4/9) = ∛∛(y⁴), y^(8/27) = ∛∛∛(y⁸): the same powers by
- * correctly rounded roots, within an ulp or two of `**` and under half its cost.
- */
-function pow9by16(x: number): number {
-  const x2 = x * x;
-  const x4 = x2 * x2;
-  return Math.sqrt(Math.sqrt(Math.sqrt(Math.sqrt(x4 * x4 * x))));
-}
-function pow4by9(y: number): number {
-  const y2 = y * y;
-  return Math.cbrt(Math.cbrt(y2 * y2));
-}
-function pow8by27(y: number): number {
-  const y2 = y * y;
-  const y4 = y2 * y2;
-  return Math.cbrt(Math.cbrt(Math.cbrt(y4 * y4)));
-}
-
-/**
- * Nusselt number of the effective surface (the branches of `nusseltNumber` in
- * elements/natural-convection.ts). With `grad`, also writes ∂Nu/∂ln Ra and ∂Nu/∂Pr: for a
- * Churchill–Chu form with F = [1 + u]^e, u = (c/Pr)^(9/16), d ln F/d Pr = −(9/16)·e·u/((1 + u)·Pr),
- * which is −¼·u/((1 + u)·Pr) for e = 4/9 and −⅙·u/((1 + u)·Pr) for e = 8/27.
- */
-function nusselt(effective: number, ra: number, pr: number, grad: Float64Array | null): number {
-  if (effective === 0 || effective === 1) {
-    const laminar = effective === 0 && ra <= 1e9;
-    const u = pow9by16((effective === 0 ? 0.492 : 0.559) / pr);
-    if (laminar) {
-      const r = (0.67 * Math.sqrt(Math.sqrt(ra))) / pow4by9(1 + u);
-      if (grad) {
-        grad[0] = 0.25 * r;
-        grad[1] = (0.25 * r * u) / ((1 + u) * pr);
-      }
-      return 0.68 + r;
-    }
-    const s = (0.387 * Math.sqrt(Math.cbrt(ra))) / pow8by27(1 + u);
-    const x = (effective === 0 ? 0.825 : 0.6) + s;
-    if (grad) {
-      grad[0] = (x * s) / 3;
-      grad[1] = (x * s * u) / (3 * (1 + u) * pr);
-    }
-    return x * x;
-  }
-  let nu: number;
-  let exponent: number;
-  if (effective === 2) {
-    const laminar = ra <= 1e7;
-    nu = laminar ? 0.54 * Math.sqrt(Math.sqrt(ra)) : 0.15 * Math.cbrt(ra);
-    exponent = laminar ? 0.25 : 1 / 3;
-  } else {
-    nu = 0.52 * ra ** 0.2;
-    exponent = 0.2;
-  }
-  if (grad) {
-    grad[0] = exponent * nu;
-    grad[1] = 0;
-  }
-  return nu;
-}
+const nusselt = nusseltOf;
 
 const rayleigh = (gL3: number, air: Float64Array, delta: number) => (gL3 * air[BETA]! * delta) / (air[NU]! * air[ALPHA]!);
 
@@ -179,6 +112,14 @@ export function coefficientAt(code: number, lengthM: number, gL3: number, air: F
   const delta = Math.max(Math.abs(surfaceK - fluidK), MIN_DELTA_K);
   const effective = surfaceK >= fluidK ? code : flipped(code);
   return (nusselt(effective, rayleigh(gL3, air, delta), air[PR]!, null) * air[K]!) / lengthM;
+}
+
+const H_SCRATCH = new Float64Array(FILM_SLOTS);
+
+/** h of a surface in W/(m²·K), allocation-free: what the element model and the heatsink model ask for. */
+export function naturalConvectionH(surface: Surface, lengthM: number, surfaceK: number, fluidK: number): number {
+  filmAir(0.5 * (surfaceK + fluidK), H_SCRATCH, false);
+  return coefficientAt(SURFACE_CODE[surface], lengthM, STANDARD_GRAVITY * lengthM ** 3, H_SCRATCH, surfaceK, fluidK);
 }
 
 // Scratch shared by every link: evaluations never overlap, and a network with hundreds of

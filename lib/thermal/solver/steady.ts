@@ -1,4 +1,4 @@
-import type { CompiledNetwork } from "../compile";
+import type { CompiledNetwork } from "./compiled";
 import { ThermalInputError } from "../errors";
 import { assemble, maxAbs } from "./assemble";
 import { NetworkLu } from "./lu";

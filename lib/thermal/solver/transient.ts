@@ -1,6 +1,6 @@
-import type { CompiledNetwork } from "../compile";
+import type { CompiledNetwork } from "./compiled";
 import { ThermalInputError } from "../errors";
-import { assemble } from "./assemble";
+import { assemble, maxAbs } from "./assemble";
 import { returnWorkspace, takeWorkspace, type SolverWorkspace } from "./steady";
 
 export interface ResolvedTransientOptions {
@@ -30,6 +30,8 @@ export interface CompiledTransientSolution {
   factorisations: number;
   /** Internal steps rejected and retried shorter (internal: the public answer keeps its shape). */
   rejectedSteps: number;
+  /** Largest heat imbalance of the last step's equations at its accepted temperatures, W. */
+  residualW: number;
 }
 
 /** Output instants: every stepS from 0, plus durationS itself when it is not a whole number of steps. */
@@ -109,6 +111,7 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
   // Longest internal step allowed after a rejection; Infinity: the whole output interval.
   let hMax = Infinity;
   let rejected = 0;
+  let residualW = 0;
   for (let k = 1; k < times.length; k++) {
     const end = times[k]!;
     let at = times[k - 1]!;
@@ -138,6 +141,7 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
         rejected++;
         continue;
       }
+      if (k === times.length - 1 && parts === 1) residualW = stepResidual(c, ws, next, cur, prev, c0 / h, c1 / h, c2 / h);
       [prev, cur] = [cur, prev];
       cur.set(next);
       hPrev = h;
@@ -148,7 +152,18 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
     for (let i = 0; i < n; i++) series[i]![k] = cur[i]!;
   }
   returnWorkspace(ws);
-  return { timesS: times, series, newtonIterations: stats.newton, factorisations: stats.factor, rejectedSteps: rejected };
+  return { timesS: times, series, newtonIterations: stats.newton, factorisations: stats.factor, rejectedSteps: rejected, residualW };
+}
+
+/** max |C·(a·T + b·T_n + c·T_{n−1}) + F(T)|, W: how well a step's equations hold at its answer. */
+function stepResidual(c: CompiledNetwork, ws: SolverWorkspace, t: Float64Array, tn: Float64Array, tnm1: Float64Array, a: number, b: number, cc: number): number {
+  const f = ws.fNew;
+  assemble(c, t, f, null, ws.out);
+  for (let i = 0; i < c.n; i++) {
+    const ci = c.capacity[i]!;
+    if (ci !== 0) f[i]! += ci * (a * t[i]! + b * tn[i]! + cc * tnm1[i]!);
+  }
+  return maxAbs(f);
 }
 
 /**

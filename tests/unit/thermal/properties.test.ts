@@ -11,9 +11,10 @@ describe("properties of the steady solver (fast-check)", () => {
       fc.property(mixedNetwork(), (n) => {
         const r = solveSteady(n);
         expect(r.converged).toBe(true);
-        // 1e-11 W absolute: below it is round-off of sums of watts near zero (a nanowatt
-        // source was seen to leave 1.005e-12 W, which no heat path can tell from nothing)
-        expect(Math.abs(r.energyBalanceW)).toBeLessThanOrEqual(1e-6 * totalWatts(n) + 1e-11);
+        // 1e-9 W absolute: the solve places temperatures to about 1e-7 K, and these networks'
+        // paths to ambient conduct up to ~0.01 W/K, so a nanowatt source's balance is only
+        // known to ~1e-9 W (one was seen to leave 1.0017e-11 W on a 1.6e-8 W source)
+        expect(Math.abs(r.energyBalanceW)).toBeLessThanOrEqual(1e-6 * totalWatts(n) + 1e-9);
       }),
       { numRuns: 150 },
     );

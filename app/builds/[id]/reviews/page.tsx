@@ -15,7 +15,7 @@ export default async function BuildReviewsPage({ params }: { params: Promise<{ i
       </div>
       <BuildNav buildId={build.id} current="reviews" />
       <div className="max-w-xl">
-        <BuildReviews buildId={build.id} viewer={user} />
+        <BuildReviews build={build} viewer={user} />
       </div>
     </div>
   );

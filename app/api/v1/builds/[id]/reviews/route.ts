@@ -5,7 +5,7 @@ import { requestReviewSchema } from "@/lib/reviews/api-schemas";
 import { requireUser } from "@/server/auth/session";
 import { loadBuild, loadRevision } from "@/server/builds/load";
 import { mailReviewRequest } from "@/server/reviews/mail";
-import { reviewView } from "@/server/reviews/load";
+import { loadBuildReviews } from "@/server/reviews/load";
 import { json, readJson, route } from "@/server/route";
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -14,9 +14,7 @@ type Ctx = { params: Promise<{ id: string }> };
 export const GET = route<Ctx>(async (_request, { params }) => {
   const user = await requireUser();
   const build = await loadBuild({ id: (await params).id, viewer: user });
-  const all = await listReviewsForBuild({ buildId: build.id });
-  const seeAll = build.access.isOwner || user.role === "admin";
-  return json({ reviews: all.filter((r) => seeAll || r.reviewerId === user.id).map(reviewView) });
+  return json({ reviews: await loadBuildReviews({ build, viewer: user }) });
 });
 
 /** The owner asks a reviewer (by e-mail) to review a revision; the reviewer is e-mailed and notified. */

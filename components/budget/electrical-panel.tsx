@@ -31,7 +31,10 @@ export function ElectricalPanel({ evaluation }: { evaluation: Evaluation }) {
       </dl>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="text-ink-soft">Charging</dt>
-        <dd>{charge ? `${charge.chargers} × charger, ${num(charge.currentA, 2)} A` : "no charger in the build"}</dd>
+        <dd>
+          {charge ? `${charge.chargers} × charger, ${num(charge.currentA, 2)} A` : "no charger in the build"}
+          {charge?.throttle && <span className="text-tight"> — held down from {num(charge.ratedCurrentA, 2)} A by the chips&apos; {num(charge.throttle.regulationC, 0)} °C die regulation (full in {hours(charge.throttle.ratedHours)} otherwise)</span>}
+        </dd>
         {charge && (
           <>
             <dt className="text-ink-soft">Constant-current phase</dt>

@@ -55,7 +55,7 @@ export function WarmupChart({ scenario }: { scenario: Scenario }) {
           return (
             <li key={c.limitId}>
               {l?.place ?? c.limitId}:{" "}
-              {c.timeS === null ? <span className="text-ok">not reached in {duration(w.durationS)}</span> : <span className="font-medium text-over">limit reached after {duration(c.timeS)}</span>}
+              {c.timeS === null ? <span className="text-ok">{w.ends === "pack-empty" ? `not reached before the pack is empty (${duration(w.durationS)})` : w.ends === "charge-done" ? `not reached before the charge is done (${duration(w.durationS)})` : `not reached; settled within ${duration(w.durationS)}`}</span> : <span className="font-medium text-over">limit reached after {duration(c.timeS)}</span>}
             </li>
           );
         })}

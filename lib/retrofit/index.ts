@@ -38,7 +38,7 @@ export type { Caution } from "./cautions";
 export type { CostSummary, CostLine } from "./costs";
 export type { PackSummary } from "./electrical/pack";
 export type { ChargePlan } from "./electrical/charger";
-export { chargePlan, CC_FRACTION, TERMINATION_FRACTION } from "./electrical/charger";
+export { chargePlan, taperHours, CV_TIME_CONSTANT_H, TERMINATION_C_RATE, DEFAULT_REGULATION_C } from "./electrical/charger";
 export { emitterAt, vfAt } from "./electrical/emitter";
 export type { Problem, Severity } from "./problems";
 export type { Traced } from "./trace";

@@ -1,6 +1,7 @@
 import type { DriverMode } from "@/lib/parts";
 import { isThermalInputError, networkSchema, solveSteady, type SteadyResult } from "@/lib/thermal";
-import { compileBuild, type CompiledBuild, type ScenarioHeat } from "./compile";
+import { compileBuild, sinkLinks, type CompiledBuild, type ScenarioHeat } from "./compile";
+import { pathResistance } from "./inverse";
 import { driverAt, type DriverPoint } from "./electrical/driver";
 import { currentForPower, emitterAt, type EmitterPoint } from "./electrical/emitter";
 import { cellHeat, type PackSummary } from "./electrical/pack";
@@ -77,6 +78,7 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
   if (!e || !d) return null;
   let tj = build.environment.ambientC;
   let sinkR: number | null = null;
+  let sinkRise: number | null = null;
   let last: { el: ModeElectrical; compiled: CompiledBuild; steady: SteadyResult; heat: ScenarioHeat } | null = null;
   for (let k = 1; k <= o.maxIterations; k++) {
     const el = modeElectrical(build, e, d, mode, pack, tj);
@@ -88,19 +90,31 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
       cellsW: el.cellHeat?.value ?? 0,
       chargerW: 0,
     };
-    const compiled = compileBuild(build, heat, { sinkToAirKPerW: sinkR ?? null }, problems);
+    // A declared rating's correction needs the sink's rise: start from the junction's heat through the rating (the driver's heat does not pass the sink).
+    const rated = build.lightEngine.heatsink?.specs;
+    if (sinkRise === null && rated?.rating === "declared") sinkRise = Math.max(heat.junctionW * rated.sinkToAirKPerW, 1e-3);
+    const compiled = compileBuild(build, heat, { sinkToAirKPerW: sinkR ?? null, sinkRiseK: sinkRise }, problems);
     if (!compiled) return null;
     if (sinkR === null) sinkR = compiled.sinkEstimateKPerW;
     const steady = trySteady(compiled, field, problems, k === 1);
     if (!steady) return null;
     const tjNew = steady.temperaturesC.junction ?? tj;
-    const newSinkR: number | null = compiled.sinkLink !== null ? (steady.links[compiled.sinkLink]?.kelvinPerWatt ?? sinkR) : sinkR;
+    const newSinkR: number | null = compiled.sinkLink !== null ? pathResistance(compiled.network, steady, sinkLinks(compiled)) : sinkR;
     last = { el, compiled, steady, heat };
+    const riseBefore = sinkRise;
+    if (compiled.sinkLink !== null) {
+      const l = compiled.network.links[compiled.sinkLink]!;
+      const at = (id: string) => (id === "ambient" ? compiled.network.ambientC : (steady.temperaturesC[id] ?? compiled.network.ambientC));
+      sinkRise = Math.max(at(l.from) - at(l.to), 1e-3);
+    }
+    // Only a declared rating depends on the rise (its correction); a geometry sink's model follows it by itself.
+    const declared = build.lightEngine.heatsink?.specs.rating === "declared";
+    const riseMoved = !declared ? 0 : riseBefore === null ? 1 : Math.abs((sinkRise ?? 0) - riseBefore) / Math.max(riseBefore, 1e-3);
     const moved = Math.abs(tjNew - tj);
     const sinkMoved = sinkR !== null && newSinkR !== null ? Math.abs(newSinkR - sinkR) / sinkR : 0;
     tj = tjNew;
     sinkR = newSinkR;
-    if (moved < o.toleranceK && sinkMoved < 1e-3) {
+    if (moved < o.toleranceK && sinkMoved < 1e-3 && riseMoved < 1e-3) {
       // Re-evaluate the electrical side at the converged Tj so every figure belongs to it.
       return { converged: true, iterations: k, electrical: modeElectrical(build, e, d, mode, pack, tj), compiled, steady, heat };
     }

@@ -76,8 +76,9 @@ export function quickCheck(input: QuickCheckInput): QuickCheckResult {
     const s = solveSteady(network);
     const t = s.temperaturesC;
     const headroom = maxTj - (t.junction ?? 0);
-    const lim = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj);
-    const bud = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj - MARGIN_K);
+    const others = sinkOut.radiationLink === null ? [] : [sinkOut.radiationLink];
+    const lim = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj, 0.02, others);
+    const bud = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj - MARGIN_K, 0.02, others);
     const atSolution = explainLinks(network, s);
     const traces = b.linkPlaces.map((l, i) => l.trace ?? atSolution[i]!);
     return {

@@ -1,17 +1,15 @@
-import { compileBuild, type ScenarioHeat } from "./compile";
-import { chargePlan, type ChargePlan } from "./electrical/charger";
+import { isThermalInputError, monotoneRoot, solveSteady } from "@/lib/thermal";
+import { compileBuild, type CompiledBuild, type ScenarioHeat } from "./compile";
+import { chargePlan, DEFAULT_REGULATION_C, type ChargePlan } from "./electrical/charger";
 import { cellHeat, type PackSummary } from "./electrical/pack";
 import { limitsFor } from "./limits";
 import { trySteady } from "./operating-point";
 import type { ResolvedOptions } from "./options";
-import type { ProblemList } from "./problems";
-import type { ResolvedBuild } from "./resolved";
-import { thermalResult, warmup } from "./scenario";
+import { ProblemList } from "./problems";
+import type { ResolvedBuild, ResolvedPart } from "./resolved";
+import { MAX_RUN_S, thermalResult, warmup } from "./scenario";
 import type { ScenarioResult } from "./scenario-mode";
 
-/** Charging warm-up spans the CC phase (where the heat is highest), at least an hour and at most four. */
-const MIN_CHARGE_WARMUP_S = 3600;
-const MAX_CHARGE_WARMUP_S = 4 * 3600;
 
 export function chargerCount(build: ResolvedBuild): number {
   return build.pack.chargerCount ?? build.pack.charger?.specs.parallelCount ?? 1;
@@ -44,20 +42,34 @@ export function runCharging(build: ResolvedBuild, pack: PackSummary | null, o: R
     problems.add("pack.cell", "no cells in the build: charging cannot be worked out");
     return { plan: null, scenario: null };
   }
-  const plan = chargePlan(charger, chargerCount(build), pack);
+  const count = chargerCount(build);
+  let plan = chargePlan(charger, count, pack);
   checkCharger(build, plan, pack, problems);
-  const cells = cellHeat(pack, plan.currentA);
-  const heat: ScenarioHeat = { junctionW: 0, junctionWPerK: 0, junctionRefC: build.environment.ambientC, driverW: 0, cellsW: cells.value ?? 0, chargerW: plan.lossW.value ?? 0 };
   const field = "pack.charger";
-  // The light engine is only thermal mass and paths while charging; without it the charge can still be checked.
-  const compiled = compileBuild(build, heat, { sinkToAirKPerW: null }, problems) ?? compileBuild(build, heat, { sinkToAirKPerW: null }, problems, false);
   const base: ScenarioResult = { id: "charging", kind: "charging", name: "charging", modeIndex: null, converged: false, iterations: 0, network: null, thermal: null, warmup: null, whatItTakes: null, derating: null, mode: null, charging: null };
+  // The light engine is only thermal mass and paths while charging; without it the charge can still be checked.
+  const compileAt = (p: ChargePlan, quiet: ProblemList) => {
+    const heat: ScenarioHeat = { junctionW: 0, junctionWPerK: 0, junctionRefC: build.environment.ambientC, driverW: 0, cellsW: cellHeat(pack, p.currentA).value ?? 0, chargerW: p.lossW.value ?? 0 };
+    return compileBuild(build, heat, { sinkToAirKPerW: null }, quiet) ?? compileBuild(build, heat, { sinkToAirKPerW: null }, quiet, false);
+  };
+  let compiled = compileAt(plan, problems);
   if (!compiled) return { plan, scenario: base };
-  const steady = trySteady(compiled, field, problems, true);
+  let steady = trySteady(compiled, field, problems, true);
   if (!steady) return { plan, scenario: base };
+  const held = throttledCurrent(charger, count, pack, plan, steady.temperaturesC.charger, compileAt);
+  if (held !== null) {
+    plan = chargePlan(charger, count, pack, held);
+    compiled = compileAt(plan, new ProblemList());
+    steady = compiled ? trySteady(compiled, field, problems, false) : null;
+    if (!compiled || !steady) return { plan, scenario: base };
+    const t = plan.throttle!;
+    problems.add(field, `the linear charger${count > 1 ? "s" : ""} reach${count > 1 ? "" : "es"} ${t.regulationC} °C (die regulation${t.fromPart ? "" : ", assumed"}) and hold${count > 1 ? "" : "s"} ${plan.currentA.toFixed(2)} A instead of ${plan.ratedCurrentA.toFixed(2)} A: the charge takes ${(plan.totalHours.value ?? 0).toFixed(1)} h instead of ${t.ratedHours.toFixed(1)} h`, "warning");
+  }
+  const cells = cellHeat(pack, plan.currentA);
   const defs = limitsFor(build, compiled, steady, true, problems);
   const thermal = thermalResult(compiled, steady, defs, o);
-  const duration = Math.min(MAX_CHARGE_WARMUP_S, Math.max(MIN_CHARGE_WARMUP_S, (plan.ccHours.value ?? 1) * 3600));
+  // The warm-up follows the charge to its end (or until the temperatures settle).
+  const horizon = Math.min(MAX_RUN_S, (plan.totalHours.value ?? 1) * 3600);
   return {
     plan,
     scenario: {
@@ -66,8 +78,32 @@ export function runCharging(build: ResolvedBuild, pack: PackSummary | null, o: R
       iterations: steady.iterations,
       network: compiled.network,
       thermal,
-      warmup: o.skipWarmup ? null : warmup(compiled.network, steady, thermal.limits, duration, o, field, problems),
+      warmup: o.skipWarmup ? null : warmup(compiled.network, steady, thermal.limits, horizon, "charge-done", o, field, problems),
       charging: { chargerLoss: plan.lossW, cellHeat: cells, chargeCurrentA: plan.currentA },
     },
   };
+}
+
+/**
+ * A linear charger chip cuts its current to hold its die at the regulation temperature. When
+ * the steady charger board at the rated current is above it, the current the chips can hold
+ * is the one that puts the board there: one search over the current (the die is taken at the
+ * board's temperature, a few kelvin optimistic). Null when the charger does not throttle.
+ */
+function throttledCurrent(charger: ResolvedPart<"charger">, count: number, pack: PackSummary, plan: ChargePlan, boardC: number | undefined, compileAt: (p: ChargePlan, quiet: ProblemList) => CompiledBuild | null): number | null {
+  if (charger.specs.topology !== "linear" || boardC === undefined) return null;
+  const reg = charger.specs.regulationTempC ?? DEFAULT_REGULATION_C;
+  if (boardC <= reg) return null;
+  const f = (i: number) => {
+    const c = compileAt(chargePlan(charger, count, pack, Math.max(i, 1e-6)), new ProblemList());
+    return c ? (solveSteady(c.network, { toleranceK: 1e-4 }).temperaturesC.charger ?? reg) - reg : 0;
+  };
+  const rated = plan.ratedCurrentA;
+  try {
+    const root = monotoneRoot(f, rated, boardC - reg, rated * 0.7, 0, rated, 0.05, 24);
+    return root.x === null ? 0 : Math.max(root.x, 0);
+  } catch (err) {
+    if (isThermalInputError(err)) return null;
+    throw err;
+  }
 }

@@ -7,7 +7,7 @@ import { solveModePoint } from "./operating-point";
 import type { ResolvedOptions } from "./options";
 import type { ProblemList } from "./problems";
 import type { ResolvedBuild } from "./resolved";
-import { thermalResult, warmup, whatItTakes, type ThermalResult, type Warmup, type WhatItTakes } from "./scenario";
+import { MAX_RUN_S, thermalResult, warmup, whatItTakes, type ThermalResult, type Warmup, type WhatItTakes } from "./scenario";
 import type { Traced } from "./trace";
 
 export interface ModeFigures {
@@ -107,7 +107,8 @@ export function runMode(build: ResolvedBuild, mode: DriverMode, index: number, p
     iterations: op.iterations,
     network: op.compiled.network,
     thermal,
-    warmup: o.skipWarmup ? null : warmup(op.compiled.network, op.steady, thermal.limits, o.warmupS, o, field, problems),
+    // Each mode warms up until it settles or the pack is empty (12 h at most; without a pack, until it settles).
+    warmup: o.skipWarmup ? null : warmup(op.compiled.network, op.steady, thermal.limits, figures.runtime?.value ? figures.runtime.value * 3600 : MAX_RUN_S, "pack-empty", o, field, problems),
     whatItTakes: o.skipWhatItTakes ? null : whatItTakes(op.compiled, op.steady, thermal.limits, el.outputW, o, field, problems),
     derating: {
       fluxVsTj: e.curves.fluxVsTj ? { points: e.curves.fluxVsTj.points, operating: { tjC, relativeFlux: el.emitter.relativeFluxTj } } : null,

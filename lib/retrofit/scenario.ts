@@ -2,7 +2,8 @@ import { AMBIENT_ID, breakdownRise, isThermalInputError, solveTransient, traceLi
 import type { CompiledBuild } from "./compile";
 import type { LinkPlace, NodePlace } from "./compile/builder";
 import { evaluateLimits, worstVerdict, type LimitDef, type LimitResult, type Verdict } from "./limits";
-import { maxCommonScale, requiredLinkResistance } from "./inverse";
+import { maxCommonScale, pathResistance, requiredLinkResistance } from "./inverse";
+import { sinkLinks } from "./compile";
 import type { ResolvedOptions } from "./options";
 import type { ProblemList } from "./problems";
 import { q, trace, type Traced } from "./trace";
@@ -30,6 +31,10 @@ export interface Warmup {
   crossings: { limitId: LimitResult["id"]; node: string; limitC: number; timeS: number | null }[];
   /** First time every node is within 1 K of its steady temperature; null if not within the warm-up. */
   steadyWithinS: number | null;
+  /** Why the curve stops: the temperatures settled, the pack ran empty, the charge finished, or the 12 h cap. */
+  ends: "settled" | RunEnd | "time-cap";
+  /** Length of the whole run (pack empty, charge done), s; the curve may stop earlier once settled. */
+  runS: number;
   /** Every step converged; Newton corrections over the run; the last step's largest heat imbalance, W. */
   converged: boolean;
   iterations: number;
@@ -80,8 +85,19 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
   return { nodes: compiled.nodes, links, temperaturesC: steady.temperaturesC, byPlace, energyBalanceW: steady.energyBalanceW, limits, verdict: worstVerdict(limits.map((l) => l.verdict)), ladder, solver };
 }
 
-/** Warm-up in quarters: stops after the quarter in which every node came within 1 K of steady ("60 min or until steady"). */
-const WARMUP_CHUNKS = 4;
+/**
+ * Warm-up to the end of the run: in chunks until every node is within 1 K of its steady
+ * temperature (and every limit the steady state exceeds has been reached), or the run ends
+ * (the pack is empty, the charge is done), or twelve hours have passed. The first hour goes
+ * in 15-minute chunks at the options' step (30 s by default); after it, where only the slow
+ * housing still moves, in one-hour chunks at four times the step.
+ */
+const CHUNK_S = 900;
+const LATE_AFTER_S = 3600;
+const LATE_CHUNK_S = 3600;
+const LATE_STEP_FACTOR = 4;
+/** Longest warm-up worked out, s: twelve hours. */
+export const MAX_RUN_S = 12 * 3600;
 const STEADY_BAND_K = 1;
 /**
  * Newton tolerance within a warm-up step, K. The curves are shown to 0.1 K and the steady
@@ -90,26 +106,35 @@ const STEADY_BAND_K = 1;
  */
 const WARMUP_SETTINGS = { toleranceK: 1e-4 } as const;
 
-export function warmup(network: Network, steady: SteadyResult, limits: readonly LimitResult[], durationS: number, o: ResolvedOptions, field: string, problems: ProblemList): Warmup | null {
+export type RunEnd = "pack-empty" | "charge-done";
+
+/** `horizonS`: when the run ends (pack empty, charge done); `ends` says which. */
+export function warmup(network: Network, steady: SteadyResult, limits: readonly LimitResult[], horizonS: number, ends: RunEnd, o: ResolvedOptions, field: string, problems: ProblemList): Warmup | null {
   const maxLimits = limits.filter((l) => l.kind === "max");
   const thresholds = maxLimits.map((l) => ({ node: l.node, limitC: l.limitC }));
-  const chunkS = durationS / WARMUP_CHUNKS;
-  const stepS = durationS / o.warmupIntervals;
+  const horizon = Math.min(Math.max(horizonS, CHUNK_S / 30), MAX_RUN_S);
+  const stepS = Math.min(o.warmupS / o.warmupIntervals, horizon);
   const timesS: number[] = [];
   const temps: Record<string, number[]> = Object.fromEntries(network.nodes.map((n) => [n.id, [] as number[]]));
   const crossings: (number | null)[] = maxLimits.map(() => null);
+  // Limits the steady state is at or above are reached some time: the run goes on until they are.
+  const pending = maxLimits.map((l) => (steady.temperaturesC[l.node] ?? -Infinity) >= l.limitC);
   let steadyAt: number | null = null;
+  let settled = false;
   let initialC: Record<string, number> | undefined;
   let iterations = 0;
   let residualW = 0;
+  let t0 = 0;
   try {
-    for (let c = 0; c < WARMUP_CHUNKS && steadyAt === null; c++) {
-      const t0 = c * chunkS;
-      const r = solveTransient(network, { durationS: chunkS, stepS, thresholds, ...(initialC ? { initialC } : {}) }, WARMUP_SETTINGS);
+    while (t0 < horizon - 1e-6 && !settled) {
+      const late = t0 >= LATE_AFTER_S - 1e-6;
+      const chunk = Math.min(late ? LATE_CHUNK_S : CHUNK_S, horizon - t0);
+      const step = Math.min(late ? LATE_STEP_FACTOR * stepS : stepS, chunk);
+      const r = solveTransient(network, { durationS: chunk, stepS: step, thresholds, ...(initialC ? { initialC } : {}) }, WARMUP_SETTINGS);
       iterations += r.iterations;
       residualW = r.residualW;
-      // Each quarter after the first starts where the last ended: skip its repeated first sample.
-      for (let k = c === 0 ? 0 : 1; k < r.timesS.length; k++) {
+      // Each chunk after the first starts where the last ended: skip its repeated first sample.
+      for (let k = t0 === 0 ? 0 : 1; k < r.timesS.length; k++) {
         const t = t0 + r.timesS[k]!;
         timesS.push(t);
         let inBand = true;
@@ -123,14 +148,19 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
       r.crossings?.forEach((x, i) => {
         if (crossings[i] === null && x.timeS !== null) crossings[i] = t0 + x.timeS;
       });
+      settled = steadyAt !== null && pending.every((p, i) => !p || crossings[i] !== null);
+      t0 += chunk;
       initialC = Object.fromEntries(network.nodes.map((n) => [n.id, temps[n.id]![temps[n.id]!.length - 1]!]));
     }
+    const end = timesS[timesS.length - 1] ?? 0;
     return {
-      durationS: timesS[timesS.length - 1] ?? 0,
+      durationS: end,
       timesS,
       temperaturesC: temps,
       crossings: maxLimits.map((l, i) => ({ limitId: l.id, node: l.node, limitC: l.limitC, timeS: crossings[i] ?? null })),
       steadyWithinS: steadyAt,
+      ends: settled ? "settled" : horizon >= horizonS - 1e-6 ? ends : "time-cap",
+      runS: horizonS,
       converged: true,
       iterations,
       residualW,
@@ -159,14 +189,15 @@ export function whatItTakes(compiled: CompiledBuild, steady: SteadyResult, limit
     let sinkToAir: WhatItTakes["sinkToAir"] = null;
     const j = limits.find((l) => l.id === "junction");
     if (compiled.sinkLink !== null && j) {
-      const present = steady.links[compiled.sinkLink]?.kelvinPerWatt ?? 1;
-      const lim = requiredLinkResistance(compiled.network, steady, compiled.sinkLink, "junction", j.limitC);
-      const bud = requiredLinkResistance(compiled.network, steady, compiled.sinkLink, "junction", j.limitC - o.marginK);
+      const others = sinkLinks(compiled).slice(1);
+      const present = pathResistance(compiled.network, steady, sinkLinks(compiled));
+      const lim = requiredLinkResistance(compiled.network, steady, compiled.sinkLink, "junction", j.limitC, 0.02, others);
+      const bud = requiredLinkResistance(compiled.network, steady, compiled.sinkLink, "junction", j.limitC - o.marginK, 0.02, others);
       const inputs = [q("T_j,max", "junction limit", j.limitC, "°C"), q("margin", "budget margin", o.marginK, "K"), q("P_j", "heat at the junction at this operating point", frozen.sources.find((s) => s.node === "junction")?.watts ?? 0, "W")];
-      const notes = ["The emitter's heat follows Vf(Tj) during the search (linearised at this operating point); driver and cell heat held; the sink's own link replaced by a plain resistance during the search; searched over 0.001–1000 K/W (null: any sink in that range will do)."];
+      const notes = ["The emitter's heat follows Vf(Tj) during the search (linearised at this operating point); driver and cell heat held; the sink's own links (convection to the air, and radiation to what it sees) replaced by one plain resistance to the air during the search; searched over 0.001–1000 K/W (null: any sink in that range will do)."];
       const infeasible = (f: boolean) => (f ? [] : ["Even a perfect sink does not do it: the rest of the heat path is too hot."]);
       sinkToAir = {
-        presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/q across the sink's link", [], [], "the steady heat-path model (effective resistance ΔT/q of the sink's link at the solution; the link's own trace cites its source)"),
+        presentKPerW: kpw(present, "sink-to-air resistance in the build (at this operating point)", "R = ΔT/(q_convection + q_radiation) from the sink to the air around it", [], [], "the steady heat-path model (effective resistance ΔT/q of the sink's link at the solution; the link's own trace cites its source)"),
         forLimitKPerW: kpw(lim.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max", "find R: Tj(R) = T_j,max", inputs, [...notes, ...infeasible(lim.feasible)], SEARCH),
         forBudgetKPerW: kpw(bud.kelvinPerWatt, "largest sink-to-air resistance for Tj = T_j,max − margin", "find R: Tj(R) = T_j,max − margin", inputs, [...notes, ...infeasible(bud.feasible)], SEARCH),
       };

@@ -31,6 +31,19 @@ export function seriesTrace(element: string, parts: Trace[], totalKPerW: number,
   });
 }
 
+/** N identical paths in parallel: the trace of one path, divided by N. */
+export function scaledTrace(one: Trace, n: number): Trace {
+  return trace({
+    element: one.element,
+    formula: `${n} identical paths in parallel`,
+    equation: `R = R_one / ${n}`,
+    inputs: [q("R_one", `${one.element}: ${one.formula}`, one.result.value, one.result.unit), q("N", "paths", n, "1")],
+    result: q("R", "resistance", one.result.value / n, one.result.unit),
+    source: 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., §3.1.3 (the thermal circuit: resistances in parallel)',
+    parts: [one],
+  });
+}
+
 /** Sources named once so every trace cites them the same way. */
 export const SOURCES = {
   trade: "common practice (LED and Li-ion trade figures)",

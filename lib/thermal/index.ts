@@ -44,13 +44,14 @@ export {
 export { naturalConvection, naturalConvectionCoefficient, rayleighNumber, type NaturalConvectionInput, type NaturalConvectionCoefficient } from "./elements/natural-convection";
 export { radiationExchange, type RadiationInput } from "./elements/radiation";
 export { finEfficiency, type FinEfficiency, type FinEfficiencyInput } from "./elements/fin";
-export { finnedHeatsink, evaluateFinnedHeatsink, type FinnedHeatsinkGeometry, type FinnedHeatsinkEvaluation } from "./elements/heatsink";
+export { finnedHeatsink, evaluateFinnedHeatsink, finnedEnvelopeAreaM2, type FinnedHeatsinkGeometry, type FinnedHeatsinkEvaluation } from "./elements/heatsink";
 export { spreadingResistance, type SpreadingInput, type SpreadingResult } from "./elements/spreading";
 export {
   maxSourcePower,
   maxLinkResistance,
   monotoneRoot,
   requiredLinkResistance,
+  pathResistance,
   maxCommonScale,
   SINK_RANGE_KPERW,
   type ResistanceAnswer,

@@ -224,15 +224,34 @@ export interface ResistanceAnswer {
 
 export const SINK_RANGE_KPERW: readonly [number, number] = [1e-3, 1e3];
 
-/** Largest resistance link `index` may have for `node` to stay at or below `limitC` (sources as given, steady answer `at` the present link). */
-export function requiredLinkResistance(network: Network, at: SteadyResult, index: number, node: string, limitC: number, tolK = 0.02): ResistanceAnswer {
+/**
+ * Effective resistance of a part's links taken together at a steady answer: the drop across
+ * the first link over the heat all of them carry (e.g. a heatsink's convection to the air and
+ * its radiation to the wall).
+ */
+export function pathResistance(network: Network, at: SteadyResult, links: readonly number[]): number {
+  const first = network.links[links[0]!]!;
+  const t = (id: string) => (id === AMBIENT_ID ? network.ambientC : (at.temperaturesC[id] ?? network.ambientC));
+  const q = links.reduce((s, i) => s + (at.links[i]?.watts ?? 0), 0);
+  const dt = t(first.from) - t(first.to);
+  return q > 1e-12 && dt > 0 ? dt / q : (at.links[links[0]!]?.kelvinPerWatt ?? 1);
+}
+
+/**
+ * Largest resistance link `index` may have for `node` to stay at or below `limitC` (sources
+ * as given, steady answer `at` the present link). Links in `alsoRemove` (the same part's
+ * other paths, e.g. its radiation) are taken out during the search, so the answer is for
+ * the part's whole path as one resistance.
+ */
+export function requiredLinkResistance(network: Network, at: SteadyResult, index: number, node: string, limitC: number, tolK = 0.02, alsoRemove: readonly number[] = []): ResistanceAnswer {
   const link = network.links[index]!;
+  const drop = new Set(alsoRemove);
   const f = (r: number) => {
-    const links = network.links.map((l, i) => (i === index ? { from: link.from, to: link.to, type: "resistance" as const, kelvinPerWatt: r } : l));
+    const links = network.links.flatMap((l, i) => (i === index ? [{ from: link.from, to: link.to, type: "resistance" as const, kelvinPerWatt: r }] : drop.has(i) ? [] : [l]));
     return (solveSteady({ ...network, links }, PROBE).temperaturesC[node] ?? 0) - limitC;
   };
-  const r0 = at.links[index]?.kelvinPerWatt ?? 1;
-  const q = Math.max(Math.abs(at.links[index]?.watts ?? 0), 1e-6);
+  const r0 = pathResistance(network, at, [index, ...alsoRemove]);
+  const q = Math.max(Math.abs([index, ...alsoRemove].reduce((s, i) => s + (at.links[i]?.watts ?? 0), 0)), 1e-6);
   const f0 = (at.temperaturesC[node] ?? 0) - limitC;
   // In a series path the node moves by about q·ΔR: a first guess that is exact for a linear network.
   const guess = Math.max(r0 - f0 / q, SINK_RANGE_KPERW[0]);

@@ -21,6 +21,8 @@ export interface Material {
 const INCROPERA_A1 = 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., Table A.1 (metallic solids, 300 K)';
 const INCROPERA_A3 = 'Incropera et al., "Fundamentals of Heat and Mass Transfer", 6th ed., Table A.3 (common materials, 300 K)';
 const ASM_VOL2 = '"ASM Handbook, Vol. 2: Properties and Selection — Nonferrous Alloys" (wrought aluminium alloy data sheets)';
+const POLYMERS = 'J. E. Mark (ed.), "Physical Properties of Polymers Handbook", 2nd ed., Springer 2007 (thermal conductivity and heat capacity chapters; typical unfilled grades near 300 K; values from memory — check against a copy)';
+const POLYMER_EMISSIVITY = "from memory of published total emissivities of plastics (0.85–0.95 for opaque grades) — check against a copy";
 const INCROPERA_A11 = 'Incropera et al., "Fundamentals of Heat and Mass Transfer", 6th ed., Table A.11 (total normal emissivity)';
 
 export const MATERIALS: readonly Material[] = [
@@ -113,6 +115,46 @@ export const MATERIALS: readonly Material[] = [
     emissivity: { polished: 0.17, "as-supplied": 0.3, oxidised: 0.6, painted: 0.9 },
     source: INCROPERA_A1,
     emissivitySource: INCROPERA_A11,
+  },
+  {
+    id: "abs",
+    name: "ABS plastic",
+    conductivityWPerMK: 0.17,
+    densityKgPerM3: 1050,
+    specificHeatJPerKgK: 1400,
+    emissivity: { "as-supplied": 0.9, painted: 0.9 },
+    source: POLYMERS,
+    emissivitySource: POLYMER_EMISSIVITY,
+  },
+  {
+    id: "polycarbonate",
+    name: "Polycarbonate (PC)",
+    conductivityWPerMK: 0.2,
+    densityKgPerM3: 1200,
+    specificHeatJPerKgK: 1200,
+    emissivity: { "as-supplied": 0.9, painted: 0.9 },
+    source: POLYMERS,
+    emissivitySource: POLYMER_EMISSIVITY,
+  },
+  {
+    id: "polyamide-66",
+    name: "Polyamide PA 66 (nylon)",
+    conductivityWPerMK: 0.25,
+    densityKgPerM3: 1140,
+    specificHeatJPerKgK: 1670,
+    emissivity: { "as-supplied": 0.9, painted: 0.9 },
+    source: POLYMERS,
+    emissivitySource: POLYMER_EMISSIVITY,
+  },
+  {
+    id: "acrylic-pmma",
+    name: "Acrylic (PMMA)",
+    conductivityWPerMK: 0.19,
+    densityKgPerM3: 1190,
+    specificHeatJPerKgK: 1470,
+    emissivity: { "as-supplied": 0.9, painted: 0.9 },
+    source: POLYMERS,
+    emissivitySource: POLYMER_EMISSIVITY,
   },
   {
     id: "glass-soda-lime",

@@ -73,7 +73,8 @@ export const finnedHeatsinkLinkSchema = z.object({
   finHeightM: length,
   finThicknessM: length,
   conductivityWPerMK: conductivity,
-  emissivity,
+  /** 0: the envelope's radiation is left to a radiation link of its own (to what the sink sees). */
+  emissivity: z.number().min(0, "emissivity must be in [0, 1]").max(1, "emissivity must be in [0, 1]"),
   /** Air speed through the channels from a fan, m/s; absent or 0 means still air. */
   airSpeedMPerS: finite(0, 100).optional(),
   /** Whether the back of the base also faces the air (default false: it is mounted). */

@@ -8,6 +8,9 @@ export const HOUSING_FIELDS = [
   { key: "outerAreaM2", label: "Outer area", type: "quantity", quantity: "area", required: true, gt: 0, max: 10, help: "Outside surface exposed to air (what sheds the heat)." },
   { key: "innerAreaM2", label: "Inner area", type: "quantity", quantity: "area", required: false, gt: 0, max: 10, help: "Inside surface facing the parts." },
   { key: "emissivity", label: "Emissivity", type: "quantity", quantity: "fraction", required: false, min: 0, max: 1, help: "Emissivity of the outer surface (0–1): painted ≈ 0.9, bare polished brass ≈ 0.05." },
+  { key: "secondMaterial", label: "Second material", type: "material", required: false, help: "For a housing of two materials (a metal tube with a plastic head): the other part's material." },
+  { key: "secondAreaM2", label: "Second material's outer area", type: "quantity", quantity: "area", required: false, gt: 0, max: 10, help: "Outside area made of the second material; part of the outer area, so less than it." },
+  { key: "secondWallThicknessM", label: "Second material's wall thickness", type: "quantity", quantity: "length", required: false, gt: 0, max: 0.05, help: "Wall thickness of the second material (default: the wall thickness)." },
   { key: "enclosure", label: "Enclosure", type: "choice", options: ["sealed", "vented"], required: true, help: "Sealed (closed against weather: heat must cross the wall) or vented." },
   { key: "massKg", label: "Mass", type: "quantity", quantity: "mass", required: false, gt: 0, max: 100, help: "Mass of the housing, for warm-up time." },
 ] as const satisfies readonly FieldDef[];
@@ -15,6 +18,15 @@ export const HOUSING_FIELDS = [
 export const housingSpecsSchema = buildSpecsSchema(HOUSING_FIELDS).superRefine((specs, ctx) => {
   if (specs.innerAreaM2 !== undefined && specs.innerAreaM2 > specs.outerAreaM2) {
     ctx.addIssue({ code: "custom", path: ["innerAreaM2"], message: "must not exceed the outer area" });
+  }
+  if (specs.secondMaterial !== undefined && specs.secondAreaM2 === undefined) {
+    ctx.addIssue({ code: "custom", path: ["secondAreaM2"], message: "required when a second material is given" });
+  }
+  if (specs.secondAreaM2 !== undefined && specs.secondMaterial === undefined) {
+    ctx.addIssue({ code: "custom", path: ["secondMaterial"], message: "required when the second material's area is given" });
+  }
+  if (specs.secondAreaM2 !== undefined && specs.secondAreaM2 >= specs.outerAreaM2) {
+    ctx.addIssue({ code: "custom", path: ["secondAreaM2"], message: "must be less than the outer area (the two materials' areas add up to it)" });
   }
 });
 export type HousingSpecs = z.output<typeof housingSpecsSchema>;

@@ -11,6 +11,7 @@ export const PLACES = {
   wall: "housing wall",
   wallEngine: "housing wall at the light engine",
   wallDriver: "housing wall at the driver",
+  wallSecond: "housing wall, second material",
   driver: "driver board",
   cells: "cells",
   charger: "charger",

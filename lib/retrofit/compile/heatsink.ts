@@ -1,7 +1,8 @@
-import { declaredResistance, emissivityFor, finnedHeatsink, getMaterial, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
+import { declaredResistance, makeTrace, quantity, emissivityFor, finnedEnvelopeAreaM2, finnedHeatsink, getMaterial, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
 import type { SpecsOfKind } from "@/lib/parts";
 import type { ProblemList } from "../problems";
 import { PLACES, type NetworkBuilder } from "./builder";
+import { LAMINAR_EXPONENT } from "@/lib/thermal/correlations";
 
 type HeatsinkSpecs = SpecsOfKind<"heatsink">;
 type GeometrySpecs = Extract<HeatsinkSpecs, { rating: "geometry" }>;
@@ -13,6 +14,47 @@ export function sinkEmissivity(s: GeometrySpecs | HeatsinkSpecs): { e: number; n
   const finish: Finish = s.finish ?? "as-supplied";
   const t = emissivityFor(material, finish) ?? emissivityFor(material, "as-supplied");
   return t ? { e: t.emissivity, note: `emissivity of ${material}, ${finish} (${t.source})` } : { e: 0.5, note: "emissivity unknown: 0.5 assumed" };
+}
+
+/** Rated rise used when the part gives neither its rated rise nor its rated power: 75 K (from memory of heatsink catalogues' usual basis — check against a copy). */
+export const DEFAULT_RATED_RISE_K = 75;
+/** Share of a rated sink's heat that leaves by convection in still air (the rest by radiation): 0.7 (common practice for bare or anodised sinks). */
+export const CONVECTIVE_SHARE = 0.7;
+
+/**
+ * A declared rating holds at its rated rise. Natural convection strengthens with the rise
+ * (laminar: h ∝ ΔT^¼), so the convective share of the conductance is scaled by
+ * (ΔT/ΔT_rated)^¼; the radiative share is taken as unchanged.
+ */
+export function declaredAtRise(s: Extract<HeatsinkSpecs, { rating: "declared" }>, riseK: number | null): { kelvinPerWatt: number; ratedRiseK: number; trace: Trace } {
+  const base = declaredResistance({ kelvinPerWatt: s.sinkToAirKPerW, source: "the heatsink's declared sink-to-air resistance, as entered by the part's author" });
+  const rated = s.ratedDeltaK ?? (s.ratedPowerW !== undefined ? s.ratedPowerW * s.sinkToAirKPerW : DEFAULT_RATED_RISE_K);
+  const ratedFrom = s.ratedDeltaK !== undefined ? "rated rise from the part" : s.ratedPowerW !== undefined ? "rated rise = rated power × rated resistance" : `no rated rise or power on the part: ${DEFAULT_RATED_RISE_K} K assumed (from memory of heatsink catalogues' usual basis — check against a copy)`;
+  // Forced-air ratings are not natural convection: no correction.
+  if (s.ratedAirflow === "forced" || riseK === null || !(riseK > 0)) {
+    base.trace.notes.push(riseK === null ? "Rating used as declared until the sink's rise is known." : "Rated in forced air: no natural-convection correction.");
+    return { kelvinPerWatt: s.sinkToAirKPerW, ratedRiseK: rated, trace: base.trace };
+  }
+  const factor = CONVECTIVE_SHARE * (riseK / rated) ** LAMINAR_EXPONENT + (1 - CONVECTIVE_SHARE);
+  const r = s.sinkToAirKPerW / factor;
+  const trace = makeTrace({
+    element: "declared-sink",
+    formula: "Declared sink rating corrected to the actual temperature rise (convective share, laminar exponent)",
+    equation: "R = R_rated / [s_c·(ΔT/ΔT_rated)^n + (1 − s_c)]",
+    inputs: [
+      quantity("R_rated", "declared sink-to-air resistance", s.sinkToAirKPerW, "K/W"),
+      quantity("ΔT_rated", ratedFrom, rated, "K"),
+      quantity("ΔT", "sink's rise above the air around it, at this operating point", riseK, "K"),
+      quantity("s_c", "convective share of the rated conductance (common practice for still air)", CONVECTIVE_SHARE, "1"),
+      quantity("n", "exponent of h on ΔT in laminar natural convection (Nu ∝ Ra^¼)", LAMINAR_EXPONENT, "1"),
+    ],
+    intermediates: [quantity("G/G_rated", "conductance relative to the rating", factor, "1")],
+    result: quantity("R", "sink-to-air resistance at this rise", r, "K/W"),
+    source: "rating as entered by the part's author; correction: laminar natural convection h ∝ ΔT^¼ (Incropera, DeWitt, Bergman & Lavine, 6th ed., eq. 9.27 at large Ra); convective share 0.7 (common practice)",
+    notes: [riseK < rated ? "A smaller rise than rated: the sink does worse than its rating." : "A larger rise than rated: the sink does a little better than its rating."],
+    parts: [base.trace],
+  });
+  return { kelvinPerWatt: r, ratedRiseK: rated, trace };
 }
 
 /** Straight-fin geometry for the engine, or null (with a problem) when the fins cannot fit on the base. */
@@ -51,33 +93,43 @@ export function sinkCapacity(s: HeatsinkSpecs): { heatCapacityJPerK: number; tra
 
 /**
  * The sink's own path to the air it stands in (`to`): a declared rating, the finned model,
- * or a flat plate for a sink without fins. Returns the index of the link to ask the
- * "required sink resistance" question of, and a first estimate of its resistance.
+ * or a flat plate for a sink without fins. Convection goes to the air around the sink (`to`);
+ * radiation goes to what the sink sees (`sees`: the housing wall inside a housing, the
+ * surroundings in the open), since air is transparent. Returns the sink's links (the
+ * convective one first) to ask the "required sink resistance" question of, and a first
+ * estimate of their combined resistance.
  */
-export function compileSinkToAir(b: NetworkBuilder, s: HeatsinkSpecs, to: string, field: string, guessC: number): { link: number; estimateKPerW: number } | null {
+export function compileSinkToAir(b: NetworkBuilder, s: HeatsinkSpecs, to: string, field: string, guessC: number, sees: string = to, riseK: number | null = null): { link: number; radiationLink: number | null; estimateKPerW: number } | null {
   const where = to === "ambient" ? "ambient air" : PLACES.air;
+  const seen = sees === "ambient" ? "surroundings" : sees === "wall" ? PLACES.wall : sees;
   if (s.rating === "declared") {
-    const r = declaredResistance({ kelvinPerWatt: s.sinkToAirKPerW, source: "the heatsink's declared sink-to-air resistance, as entered by the part's author" });
+    const c = declaredAtRise(s, riseK);
+    const r = { kelvinPerWatt: c.kelvinPerWatt, trace: c.trace };
     if (s.ratedAirflow === "forced") {
       b.problems.add(`${field}.ratedAirflow`, "the sink's resistance is rated with a fan; in still air inside a lamp it will be several times worse", "warning");
       r.trace.notes.push("Rated in forced air: optimistic for still air.");
     }
     r.trace.notes.push("A declared rating includes the sink's radiation and assumes open air at the rated conditions.");
-    return { link: b.resistance("sink", to, s.sinkToAirKPerW, `heatsink → ${where} (declared)`, field, r.trace), estimateKPerW: s.sinkToAirKPerW };
+    if (sees !== to) r.trace.notes.push("Inside a housing the rating's radiation share goes to the inside air with the rest: a declared rating does not say how it splits.");
+    return { link: b.resistance("sink", to, c.kelvinPerWatt, `heatsink → ${where} (declared, corrected to the actual rise)`, field, r.trace), radiationLink: null, estimateKPerW: c.kelvinPerWatt };
   }
   if (s.finCount >= 2) {
     const g = finGeometry(s, field, b.problems);
     if (!g) return null;
-    const link = b.link({ from: "sink", to, type: "finned-heatsink", ...g }, `heatsink → ${where} (finned, from geometry)`, field);
+    // The finned model's convection to the air; its envelope radiation as a link of its own to what the sink sees.
+    const link = b.link({ from: "sink", to, type: "finned-heatsink", ...g, emissivity: 0 }, `heatsink → ${where} (finned, convection, from geometry)`, field);
+    const envelope = finnedEnvelopeAreaM2(g);
+    const em = sinkEmissivity(s);
+    const radiationLink = b.link({ from: "sink", to: sees, type: "radiation", areaM2: envelope, emissivity: em.e }, `heatsink envelope → ${seen} (radiation, ε ${em.e.toFixed(2)})`, field);
     const est = finnedHeatsink({ ...g, surfaceC: guessC + 30, ambientC: guessC });
-    return { link, estimateKPerW: est.kelvinPerWatt };
+    return { link, radiationLink, estimateKPerW: est.kelvinPerWatt };
   }
   // A flat plate (or one fin): its open face convects and radiates.
   const area = s.baseLengthM * s.baseWidthM;
   const em = sinkEmissivity(s);
   const link = b.link({ from: "sink", to, type: "natural-convection", areaM2: area, surface: "vertical-plate", characteristicLengthM: s.baseLengthM }, `heatsink plate → ${where} (convection)`, field);
-  b.link({ from: "sink", to, type: "radiation", areaM2: area, emissivity: em.e }, `heatsink plate → surroundings (radiation; ${em.note})`, field);
+  const radiationLink = b.link({ from: "sink", to: sees, type: "radiation", areaM2: area, emissivity: em.e }, `heatsink plate → ${seen} (radiation, ε ${em.e.toFixed(2)})`, field);
   const h = naturalConvection({ surface: "vertical-plate", areaM2: area, characteristicLengthM: s.baseLengthM, surfaceC: guessC + 30, fluidC: guessC });
   const rad = radiationExchange({ areaM2: area, emissivity: em.e, surfaceC: guessC + 30, surroundingsC: guessC });
-  return { link, estimateKPerW: 1 / (h.conductanceWPerK + rad.conductanceWPerK) };
+  return { link, radiationLink, estimateKPerW: 1 / (h.conductanceWPerK + rad.conductanceWPerK) };
 }

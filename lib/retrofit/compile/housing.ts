@@ -1,6 +1,6 @@
-import { airPropertiesAt, emissivityFor, getMaterial, heatCapacity, spreadingResistance, toKelvin, type Surface } from "@/lib/thermal";
+import { airPropertiesAt, conductionResistance, emissivityFor, getMaterial, heatCapacity, spreadingResistance, toKelvin, type Surface } from "@/lib/thermal";
 import type { ResolvedBuild, ResolvedPart } from "../resolved";
-import { q, SOURCES, trace } from "../trace";
+import { q, seriesTrace, SOURCES, trace } from "../trace";
 import { PLACES, type NetworkBuilder } from "./builder";
 
 /** Combined outer coefficient (convection + radiation) used only as the far-side boundary of spreading in the wall: ≈ 10 W/(m²·K) in still air (estimate). */
@@ -40,9 +40,9 @@ export function housingGeometry(build: ResolvedBuild, housing: ResolvedPart<"hou
   };
 }
 
-function outerEmissivity(housing: ResolvedPart<"housing">): { e: number; note: string } {
-  if (housing.specs.emissivity !== undefined && housing.specs.emissivity > 0) return { e: housing.specs.emissivity, note: "emissivity from the housing part" };
-  const t = emissivityFor(housing.specs.material, "as-supplied") ?? emissivityFor(housing.specs.material, "oxidised");
+function outerEmissivity(given: number | undefined, material: string): { e: number; note: string } {
+  if (given !== undefined && given > 0) return { e: given, note: "emissivity from the housing part" };
+  const t = emissivityFor(material, "as-supplied") ?? emissivityFor(material, "oxidised");
   return t ? { e: t.emissivity, note: `no emissivity on the part: ${t.source}, as supplied` } : { e: 0.5, note: "no emissivity on the part and none in the table: 0.5 assumed" };
 }
 
@@ -76,34 +76,66 @@ function breezeCoefficient(g: HousingGeometry, speed: number, ambientC: number) 
   });
 }
 
-/** Housing wall and (sealed) air nodes with every path to ambient. */
+/**
+ * Housing wall and (sealed) air nodes with every path to ambient. A housing of two
+ * materials has a wall node for each, every outside path shared by area, and the two joined
+ * by conduction along the wall (each part from its middle to the joint, as plane walls in
+ * series).
+ */
 export function compileHousing(b: NetworkBuilder, build: ResolvedBuild, housing: ResolvedPart<"housing">, g: HousingGeometry): void {
   const s = housing.specs;
-  const cap = s.massKg !== undefined ? heatCapacity({ massKg: s.massKg, materialId: s.material }) : heatCapacity({ volumeM3: g.outerAreaM2 * s.wallThicknessM, materialId: s.material });
+  const second = s.secondMaterial !== undefined && s.secondAreaM2 !== undefined && s.secondAreaM2 < g.outerAreaM2 ? { material: s.secondMaterial, areaM2: s.secondAreaM2, thicknessM: s.secondWallThicknessM ?? s.wallThicknessM } : null;
+  const mainShare = second ? 1 - second.areaM2 / g.outerAreaM2 : 1;
+  const cap =
+    s.massKg !== undefined
+      ? heatCapacity({ massKg: s.massKg * mainShare, materialId: s.material })
+      : heatCapacity({ volumeM3: g.outerAreaM2 * mainShare * s.wallThicknessM, materialId: s.material });
   b.node("wall", PLACES.wall, "housing", cap);
+  const em = outerEmissivity(housing.specs.emissivity, s.material);
+  outside(b, build, g, "wall", mainShare, em, second ? ` (${getMaterial(s.material)?.name ?? s.material} part)` : "");
+  if (second) {
+    const m2 = getMaterial(second.material);
+    b.node("wall-second", PLACES.wallSecond, "housing.secondMaterial", heatCapacity({ volumeM3: second.areaM2 * second.thicknessM, materialId: second.material }));
+    outside(b, build, g, "wall-second", 1 - mainShare, outerEmissivity(undefined, second.material), ` (${m2?.name ?? second.material} part)`);
+    // Heat crosses the joint along the wall: a ring as long as the housing's girth.
+    const girth = g.form === "tube" ? Math.PI * g.lengthM : 4 * g.lengthM;
+    const k1 = g.conductivity;
+    const k2 = m2?.conductivityWPerMK ?? 0.2;
+    const l1 = (g.outerAreaM2 * mainShare) / girth / 2;
+    const l2 = second.areaM2 / girth / 2;
+    const a1 = conductionResistance({ lengthM: l1, areaM2: girth * s.wallThicknessM, conductivityWPerMK: k1 });
+    const a2 = conductionResistance({ lengthM: l2, areaM2: girth * second.thicknessM, conductivityWPerMK: k2 });
+    const r = a1.kelvinPerWatt + a2.kelvinPerWatt;
+    b.resistance("wall", "wall-second", r, "along the housing wall, across the joint of its two materials", "housing.secondMaterial", seriesTrace("housing-joint", [a1.trace, a2.trace], r, [`Each part conducts from its middle to the joint (${(l1 * 1000).toFixed(0)} mm and ${(l2 * 1000).toFixed(0)} mm) through a ring ${(girth * 1000).toFixed(0)} mm round; the joint itself taken as perfect.`]));
+  }
+  if (g.sealed) {
+    b.node("air", PLACES.air, "housing");
+    b.link({ from: "air", to: "wall", type: "natural-convection", areaM2: g.innerAreaM2 * mainShare, surface: "vertical-plate", characteristicLengthM: g.lengthM }, "housing air → inner wall (enclosed air taken as free convection on the inner wall)", "housing");
+    if (second) b.link({ from: "air", to: "wall-second", type: "natural-convection", areaM2: g.innerAreaM2 * (1 - mainShare), surface: "vertical-plate", characteristicLengthM: g.lengthM }, "housing air → inner wall, second material", "housing.secondMaterial");
+  }
+}
+
+/** The outside of a wall node (a share of the housing's outer area): convection to still air or a breeze, and radiation. */
+function outside(b: NetworkBuilder, build: ResolvedBuild, g: HousingGeometry, id: string, share: number, em: { e: number; note: string }, what: string): void {
   const env = build.environment;
   // Lying on a table, the face underneath sheds next to nothing into the air: left out (conservative).
   const lyingBox = env.orientation === "lying" && g.form === "box";
-  const exposed = lyingBox ? (g.outerAreaM2 * 5) / 6 : g.outerAreaM2;
+  const exposed = (lyingBox ? (g.outerAreaM2 * 5) / 6 : g.outerAreaM2) * share;
   if (env.air.kind === "breeze") {
     const t = breezeCoefficient(g, env.air.speedMPerS, env.ambientC);
-    b.link({ from: "wall", to: "ambient", type: "convection", areaM2: exposed, coefficientWPerM2K: t.result.value }, "housing outside → breeze", "environment.air", t);
+    b.link({ from: id, to: "ambient", type: "convection", areaM2: exposed, coefficientWPerM2K: t.result.value }, `housing outside${what} → breeze`, "environment.air", t);
   } else if (g.form === "tube") {
     const surface: Surface = env.orientation === "upright" ? "vertical-plate" : "horizontal-cylinder";
     const l = env.orientation === "upright" ? g.tubeLengthM : g.lengthM;
-    b.link({ from: "wall", to: "ambient", type: "natural-convection", areaM2: exposed, surface, characteristicLengthM: l }, `housing outside → still air (${surface})`, "environment.orientation");
+    b.link({ from: id, to: "ambient", type: "natural-convection", areaM2: exposed, surface, characteristicLengthM: l }, `housing outside${what} → still air (${surface})`, "environment.orientation");
   } else {
     const side = g.lengthM;
-    b.link({ from: "wall", to: "ambient", type: "natural-convection", areaM2: (g.outerAreaM2 * 4) / 6, surface: "vertical-plate", characteristicLengthM: side }, "housing sides → still air", "environment.orientation");
-    b.link({ from: "wall", to: "ambient", type: "natural-convection", areaM2: g.outerAreaM2 / 6, surface: "horizontal-plate-up", characteristicLengthM: side / 4 }, "housing top → still air", "environment.orientation");
-    if (!lyingBox) b.link({ from: "wall", to: "ambient", type: "natural-convection", areaM2: g.outerAreaM2 / 6, surface: "horizontal-plate-down", characteristicLengthM: side / 4 }, "housing bottom → still air", "environment.orientation");
+    const a = g.outerAreaM2 * share;
+    b.link({ from: id, to: "ambient", type: "natural-convection", areaM2: (a * 4) / 6, surface: "vertical-plate", characteristicLengthM: side }, `housing sides${what} → still air`, "environment.orientation");
+    b.link({ from: id, to: "ambient", type: "natural-convection", areaM2: a / 6, surface: "horizontal-plate-up", characteristicLengthM: side / 4 }, `housing top${what} → still air`, "environment.orientation");
+    if (!lyingBox) b.link({ from: id, to: "ambient", type: "natural-convection", areaM2: a / 6, surface: "horizontal-plate-down", characteristicLengthM: side / 4 }, `housing bottom${what} → still air`, "environment.orientation");
   }
-  const em = outerEmissivity(housing);
-  b.link({ from: "wall", to: "ambient", type: "radiation", areaM2: exposed, emissivity: em.e }, `housing outside → surroundings (radiation; ${em.note})`, "housing.emissivity");
-  if (g.sealed) {
-    b.node("air", PLACES.air, "housing");
-    b.link({ from: "air", to: "wall", type: "natural-convection", areaM2: g.innerAreaM2, surface: "vertical-plate", characteristicLengthM: g.lengthM }, "housing air → inner wall (enclosed air taken as free convection on the inner wall)", "housing");
-  }
+  b.link({ from: id, to: "ambient", type: "radiation", areaM2: exposed, emissivity: em.e }, `housing outside${what} → surroundings (radiation, ε ${em.e.toFixed(2)}${what ? "" : "; " + em.note})`, "housing.emissivity");
 }
 
 /** A hot spot on the wall where a part is pressed: spreading from the contact into the wall, to the wall's mean temperature. */

@@ -24,13 +24,20 @@ export interface CompiledBuild {
   links: LinkPlace[];
   /** Index of the heatsink's own link to the air, for the "required sink resistance" question. */
   sinkLink: number | null;
+  /** The sink's radiation link (to the wall inside a housing), taken with `sinkLink` as the sink's whole path. */
+  sinkRadiationLink: number | null;
   sinkEstimateKPerW: number | null;
   has: { emitter: boolean; driver: boolean; cells: boolean; charger: boolean };
 }
 
+/** The sink's links taken together (convection, and radiation when it has its own link). */
+export const sinkLinks = (c: CompiledBuild): number[] => (c.sinkLink === null ? [] : c.sinkRadiationLink === null ? [c.sinkLink] : [c.sinkLink, c.sinkRadiationLink]);
+
 export interface CompileState {
   /** Effective sink-to-air resistance from the previous solve, for the spreading boundary. */
   sinkToAirKPerW: number | null;
+  /** The sink's rise above the air around it in the previous solve, for a declared rating's correction. */
+  sinkRiseK?: number | null;
 }
 
 /**
@@ -47,7 +54,7 @@ export function compileBuild(build: ResolvedBuild, heat: ScenarioHeat, state: Co
   const g = housingGeometry(build, housing);
   if (!g.sealed) problems.add("housing.enclosure", "vented housing: the parts inside are taken to convect straight to ambient air (optimistic for small vents); radiation still goes to the wall", "info");
   compileHousing(b, build, housing, g);
-  const le = withLightEngine ? compileLightEngine(b, build, g, state.sinkToAirKPerW) : null;
+  const le = withLightEngine ? compileLightEngine(b, build, g, state.sinkToAirKPerW, state.sinkRiseK ?? null) : null;
   // A light engine that cannot be compiled leaves half a path behind: no network.
   if (withLightEngine && !le) return null;
   const driver = compileDriver(b, build, g);
@@ -63,6 +70,7 @@ export function compileBuild(build: ResolvedBuild, heat: ScenarioHeat, state: Co
     nodes: b.nodePlaces,
     links: b.linkPlaces,
     sinkLink: le?.sinkLink ?? null,
+    sinkRadiationLink: le?.sinkRadiationLink ?? null,
     sinkEstimateKPerW: le?.sinkEstimateKPerW ?? null,
     has: { emitter: le !== null, driver, cells, charger },
   };

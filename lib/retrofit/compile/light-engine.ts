@@ -1,6 +1,6 @@
 import { declaredResistance, getMaterial, heatCapacity, interfaceLayer, spreadingResistance, strapResistance, type Trace } from "@/lib/thermal";
 import type { ResolvedBuild } from "../resolved";
-import { q, seriesTrace, SOURCES, trace } from "../trace";
+import { q, scaledTrace, seriesTrace, SOURCES, trace } from "../trace";
 import { PLACES, type NetworkBuilder } from "./builder";
 import type { HousingGeometry } from "./housing";
 import { wallSpot } from "./housing";
@@ -15,6 +15,7 @@ export const EMITTER_CAPACITY_J_PER_K = 0.02;
 export interface LightEngineOut {
   /** Index of the sink's own link to the air (the "required resistance" link), if the build has a sink. */
   sinkLink: number | null;
+  sinkRadiationLink: number | null;
   sinkEstimateKPerW: number | null;
 }
 
@@ -23,7 +24,7 @@ export interface LightEngineOut {
  * emitters share one junction node: their parallel paths are R/N and their heat adds, so
  * the node's temperature is each emitter's Tj.
  */
-export function compileLightEngine(b: NetworkBuilder, build: ResolvedBuild, g: HousingGeometry, sinkToAirKPerW: number | null): LightEngineOut | null {
+export function compileLightEngine(b: NetworkBuilder, build: ResolvedBuild, g: HousingGeometry, sinkToAirKPerW: number | null, sinkRiseK: number | null = null): LightEngineOut | null {
   const le = build.lightEngine;
   const e = le.emitter;
   if (!e) {
@@ -83,17 +84,26 @@ export function compileLightEngine(b: NetworkBuilder, build: ResolvedBuild, g: H
   }
 
   let sinkLink: number | null = null;
+  let sinkRadiationLink: number | null = null;
   let estimate: number | null = null;
   if (sink) {
     b.node("sink", PLACES.sink, "lightEngine.heatsink", sinkCapacity(sink.specs));
     if (!b.nodePlaces[b.nodePlaces.length - 1]!.heatCapacityTrace) b.problems.add("lightEngine.heatsink.massKg", "heatsink mass unknown: its warm-up is taken as instant (conservative)", "info");
+    // The joint is taken over the combined footprint of all N emitters (topArea = N·footprint
+    // without a board), so it is already the N paths in parallel: not divided again. The
+    // spreading into the base is worked out per emitter (each into 1/N of the base) and the N
+    // paths are then in parallel.
+    const shares = top === "solder" ? n : 1;
     const jt = joint(le.interface, topArea, "lightEngine.interface", b.problems);
-    const spread = intoBase(top === "solder" ? fp : topArea, top === "solder" ? n : 1);
-    const r = jt.kelvinPerWatt / (top === "solder" ? n : 1) + spread.reduce((s, t) => s + t.result.value / (top === "solder" ? n : 1), 0);
-    b.resistance(top, "sink", r, `interface${spread.length ? " + spreading" : ""}, ${top === "solder" ? "emitter" : "board"} → heatsink`, "lightEngine.interface", seriesTrace("interface", [jt.trace, ...spread], r));
-    const out = compileSinkToAir(b, sink.specs, g.inside, "lightEngine.heatsink", build.environment.ambientC);
+    const spread = intoBase(top === "solder" ? fp : topArea, shares);
+    const r = jt.kelvinPerWatt + spread.reduce((s, t) => s + t.result.value / shares, 0);
+    const notes = shares > 1 ? [`Interface over the ${n} emitters' combined footprint (${n} × footprint); spreading per emitter into 1/${n} of the base, the ${n} paths in parallel (R_spread/${n}).`] : [];
+    b.resistance(top, "sink", r, `interface${spread.length ? " + spreading" : ""}, ${top === "solder" ? "emitter" : "board"} → heatsink`, "lightEngine.interface", seriesTrace("interface", [jt.trace, ...spread.map((t) => (shares > 1 ? scaledTrace(t, shares) : t))], r, notes));
+    // Convection to the air around the sink; radiation to the housing wall it sees (air is transparent).
+    const out = compileSinkToAir(b, sink.specs, g.inside, "lightEngine.heatsink", build.environment.ambientC, "wall", sinkRiseK);
     if (!out) return null;
     sinkLink = out.link;
+    sinkRadiationLink = out.radiationLink;
     estimate = out.estimateKPerW;
     top = "sink";
     topArea = sinkArea ?? topArea;
@@ -114,5 +124,5 @@ export function compileLightEngine(b: NetworkBuilder, build: ResolvedBuild, g: H
     const r = along.kelvinPerWatt + jt.kelvinPerWatt;
     b.resistance(top, spot, r, `through the reflector → housing wall`, "lightEngine.mount", seriesTrace("reflector", [along.trace, jt.trace], r));
   }
-  return { sinkLink, sinkEstimateKPerW: estimate };
+  return { sinkLink, sinkRadiationLink, sinkEstimateKPerW: estimate };
 }

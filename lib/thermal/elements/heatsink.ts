@@ -52,6 +52,13 @@ const finEta = (h: number, k: number, t: number, lc: number) => {
   return x < 1e-4 ? 1 - (x * x) / 3 : Math.tanh(x) / x;
 };
 
+/** Area of the box enclosing the fins (front, two sides, two channel openings, and the back when exposed): what radiation leaves through, since the fins mostly see each other. */
+export function finnedEnvelopeAreaM2(g: FinnedHeatsinkGeometry): number {
+  const depth = g.finHeightM + g.baseThicknessM;
+  const lv = g.baseLengthM;
+  return g.baseWidthM * lv + 2 * depth * lv + 2 * g.baseWidthM * depth + (g.backExposed ? g.baseWidthM * lv : 0);
+}
+
 /** The numbers of the model at one pair of temperatures; the solver calls this in its loop, the trace formats it. */
 export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): FinnedHeatsinkEvaluation {
   const n = g.finCount;
@@ -89,8 +96,7 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
   const gBack = g.backExposed ? hOuter * g.baseWidthM * lv : 0;
 
   // Fins mostly see each other; what leaves by radiation is what the enclosing box sees.
-  const depth = g.finHeightM + g.baseThicknessM;
-  const envelope = g.baseWidthM * lv + 2 * depth * lv + 2 * g.baseWidthM * depth + (g.backExposed ? g.baseWidthM * lv : 0);
+  const envelope = finnedEnvelopeAreaM2(g);
   const gRad = g.emissivity * STEFAN_BOLTZMANN * envelope * (surfaceK * surfaceK + ambientK * ambientK) * (surfaceK + ambientK);
 
   return {

@@ -6,7 +6,7 @@ const SIGNED_IN_PREFIXES = ["/parts", "/builds", "/compare", "/reviews", "/class
 export function proxy(request: NextRequest) {
   const { pathname } = request.nextUrl;
   const needsSession = SIGNED_IN_PREFIXES.some((p) => pathname === p || pathname.startsWith(`${p}/`));
-  if (needsSession && !request.cookies.has("sinkwise_session")) {
+  if (needsSession && !request.cookies.has("sinkwise_session") && !request.cookies.has("__Host-sinkwise_session")) {
     const url = request.nextUrl.clone();
     url.pathname = "/signin";
     url.search = "";

@@ -9,6 +9,7 @@ import {
   mysqlEnum,
   mysqlTable,
   primaryKey,
+  text,
   uniqueIndex,
   varchar,
 } from "drizzle-orm/mysql-core";
@@ -221,7 +222,7 @@ export const solveCache = mysqlTable(
 
 export const REVIEW_STATUSES = ["requested", "approved", "changes_requested", "rejected"] as const;
 export const ANCHOR_KINDS = ["node", "link", "figure"] as const;
-export const NOTIFICATION_KINDS = ["review_requested", "verdict", "comment"] as const;
+export const NOTIFICATION_KINDS = ["review_requested", "verdict", "comment", "feedback"] as const;
 
 /** A maker's request that a reviewer check one revision of a build, and the verdict. */
 export const reviews = mysqlTable(
@@ -303,6 +304,8 @@ export const notifications = mysqlTable(
     reviewId: varchar("review_id", { length: 40 }).references(() => reviews.id, { onDelete: "cascade" }),
     buildId: varchar("build_id", { length: 40 }).references(() => builds.id, { onDelete: "cascade" }),
     text: varchar("text", { length: 500 }).notNull(),
+    /** Where the notification leads when it is neither a review nor a build (a class hand-in). */
+    href: varchar("href", { length: 300 }),
     readAt: datetime("read_at", { fsp: 3 }),
     createdAt: datetime("created_at", { fsp: 3 }).notNull(),
   },
@@ -322,6 +325,218 @@ export const comparisons = mysqlTable(
     createdAt: datetime("created_at", { fsp: 3 }).notNull(),
   },
   (t) => [index("comparison_owner_idx").on(t.ownerId, t.createdAt)],
+);
+
+/**
+ * The specs of every part a revision used, as they were when it was saved (or, for a
+ * revision saved before snapshots existed, when it was first solved). The revision's Budget,
+ * reviews and worked examples read these, so editing a part in the bin never moves them.
+ */
+export const revisionPartSnapshots = mysqlTable(
+  "revision_part_snapshot",
+  {
+    revisionId: varchar("revision_id", { length: 40 })
+      .notNull()
+      .references(() => buildRevisions.id, { onDelete: "cascade" }),
+    partId: varchar("part_id", { length: 40 }).notNull(),
+    /** The part record (kind, name, provenance, specs, curves, cost, last change) at snapshot time. */
+    record: json("record").notNull(),
+    takenAt: datetime("taken_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.partId] })],
+);
+
+/** When a newer solver gave a revision other figures than the last one did: what moved. */
+export const revisionSolverChanges = mysqlTable(
+  "revision_solver_change",
+  {
+    revisionId: varchar("revision_id", { length: 40 })
+      .notNull()
+      .references(() => buildRevisions.id, { onDelete: "cascade" }),
+    solverVersion: varchar("solver_version", { length: 40 }).notNull(),
+    previousVersion: varchar("previous_version", { length: 40 }).notNull(),
+    /** The figures that moved, in words ("Mode high, LED junction: 92 °C → 105 °C"); empty when none did. */
+    changes: json("changes").notNull(),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.revisionId, t.solverVersion] })],
+);
+
+/**
+ * Who checked a part's values, when, and against what (a cited datasheet or measurement,
+ * optionally one of the part's attachments). A part is "verified" only with one of these;
+ * editing the part's values removes it (they are no longer what was checked).
+ */
+export const partVerifications = mysqlTable("part_verification", {
+  partId: varchar("part_id", { length: 40 })
+    .primaryKey()
+    .references(() => parts.id, { onDelete: "cascade" }),
+  verifiedBy: varchar("verified_by", { length: 40 })
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  verifiedAt: datetime("verified_at", { fsp: 3 }).notNull(),
+  /** What the values were checked against, as the checker cited it (title, revision, page; or the measurement). */
+  against: varchar("against", { length: 500 }).notNull(),
+  attachmentId: varchar("attachment_id", { length: 40 }).references(() => partAttachments.id, { onDelete: "set null" }),
+});
+
+export const CLASS_ROLES = ["instructor", "student"] as const;
+export const EXAMPLE_VISIBILITIES = ["class", "link"] as const;
+
+/** A class of the Classroom: its join code is shown to its instructors and may be rotated. */
+export const classes = mysqlTable(
+  "class",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    name: varchar("name", { length: 120 }).notNull(),
+    term: varchar("term", { length: 80 }).notNull().default(""),
+    joinCode: varchar("join_code", { length: 16 }).notNull(),
+    createdBy: varchar("created_by", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    archivedAt: datetime("archived_at", { fsp: 3 }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [uniqueIndex("class_join_code_unique").on(t.joinCode)],
+);
+
+/** Who belongs to a class and as what; an account's global role is not changed by it. */
+export const classMembers = mysqlTable(
+  "class_member",
+  {
+    classId: varchar("class_id", { length: 40 })
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: mysqlEnum("role", CLASS_ROLES).notNull(),
+    joinedAt: datetime("joined_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.classId, t.userId] }), index("class_member_user_idx").on(t.userId)],
+);
+
+/** An e-mail invitation to a class: only the SHA-256 of the token is kept; single use, 7 days. */
+export const classInvitations = mysqlTable(
+  "class_invitation",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    classId: varchar("class_id", { length: 40 })
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    email: varchar("email", { length: 254 }).notNull(),
+    tokenHash: varchar("token_hash", { length: 64 }).notNull(),
+    invitedBy: varchar("invited_by", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: datetime("expires_at", { fsp: 3 }).notNull(),
+    usedAt: datetime("used_at", { fsp: 3 }),
+    usedBy: varchar("used_by", { length: 40 }).references(() => users.id, { onDelete: "set null" }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [uniqueIndex("class_invitation_token_unique").on(t.tokenHash), index("class_invitation_class_idx").on(t.classId, t.createdAt)],
+);
+
+/**
+ * A worked example: one immutable revision of a build, a Markdown narrative, the scenario the
+ * derivation follows, the values hidden from students (keys of derivation steps) and when
+ * they are revealed. `link` visibility opens it read-only to anyone holding the link.
+ */
+export const workedExamples = mysqlTable(
+  "worked_example",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    classId: varchar("class_id", { length: 40 })
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    title: varchar("title", { length: 160 }).notNull(),
+    narrative: text("narrative").notNull(),
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    revisionId: varchar("revision_id", { length: 40 })
+      .notNull()
+      .references(() => buildRevisions.id, { onDelete: "cascade" }),
+    revisionNumber: int("revision_number").notNull(),
+    scenarioId: varchar("scenario_id", { length: 80 }),
+    hidden: json("hidden").notNull(),
+    tolerancePercent: double("tolerance_percent").notNull().default(2),
+    revealAt: datetime("reveal_at", { fsp: 3 }),
+    revealedAt: datetime("revealed_at", { fsp: 3 }),
+    visibility: mysqlEnum("visibility", EXAMPLE_VISIBILITIES).notNull().default("class"),
+    linkTokenHash: varchar("link_token_hash", { length: 64 }),
+    createdBy: varchar("created_by", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("worked_example_class_idx").on(t.classId, t.createdAt), uniqueIndex("worked_example_link_unique").on(t.linkTokenHash), index("worked_example_build_idx").on(t.buildId)],
+);
+
+/** An exercise: instructions, a starter revision every student copies, and a due date. */
+export const exercises = mysqlTable(
+  "exercise",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    classId: varchar("class_id", { length: 40 })
+      .notNull()
+      .references(() => classes.id, { onDelete: "cascade" }),
+    title: varchar("title", { length: 160 }).notNull(),
+    instructions: text("instructions").notNull(),
+    starterBuildId: varchar("starter_build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    starterRevision: int("starter_revision").notNull(),
+    dueAt: datetime("due_at", { fsp: 3 }).notNull(),
+    createdBy: varchar("created_by", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("exercise_class_idx").on(t.classId, t.dueAt), index("exercise_starter_idx").on(t.starterBuildId)],
+);
+
+/** A student's own copy of an exercise's starter ("Start"): one per student and exercise. */
+export const exerciseCopies = mysqlTable(
+  "exercise_copy",
+  {
+    exerciseId: varchar("exercise_id", { length: 40 })
+      .notNull()
+      .references(() => exercises.id, { onDelete: "cascade" }),
+    userId: varchar("user_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [primaryKey({ columns: [t.exerciseId, t.userId] })],
+);
+
+/** One hand-in of a saved revision; the student's latest counts. Feedback and mark per hand-in. */
+export const handins = mysqlTable(
+  "handin",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    exerciseId: varchar("exercise_id", { length: 40 })
+      .notNull()
+      .references(() => exercises.id, { onDelete: "cascade" }),
+    studentId: varchar("student_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    buildId: varchar("build_id", { length: 40 })
+      .notNull()
+      .references(() => builds.id, { onDelete: "cascade" }),
+    revisionNumber: int("revision_number").notNull(),
+    late: boolean("late").notNull(),
+    submittedAt: datetime("submitted_at", { fsp: 3 }).notNull(),
+    feedback: text("feedback"),
+    mark: varchar("mark", { length: 40 }),
+    feedbackBy: varchar("feedback_by", { length: 40 }).references(() => users.id, { onDelete: "set null" }),
+    feedbackAt: datetime("feedback_at", { fsp: 3 }),
+  },
+  (t) => [index("handin_exercise_student_idx").on(t.exerciseId, t.studentId, t.submittedAt), index("handin_build_idx").on(t.buildId)],
 );
 
 export const BENCH_RUN_VISIBILITIES = ["private", "shared"] as const;

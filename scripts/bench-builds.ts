@@ -1,6 +1,6 @@
 /**
  * Build solve benchmark: POST /api/v1/builds/[id]/solve on the seeded demo builds, served by
- * the production build against the bench database. "Cold" clears the result cache before
+ * the production build against the bench database. "Cold" clears the solve cache before
  * each request (the whole evaluation runs: every mode's steady state, warm-up, inverse
  * problems, and charging); "cached" is the answer for an unchanged revision. Target from
  * the builds issue: route median under 30 ms for a demo build. Prints figures only.
@@ -30,7 +30,7 @@ export async function benchBuilds(): Promise<void> {
     for (const b of list.mine) {
       const cold: number[] = [];
       for (let i = 0; i < COLD_RUNS; i++) {
-        await conn.query("DELETE r FROM revision_result r JOIN build_revision v ON v.id = r.revision_id WHERE v.build_id = ?", [b.id]);
+        await conn.query("DELETE r FROM solve_cache r JOIN build_revision v ON v.id = r.revision_id WHERE v.build_id = ?", [b.id]);
         cold.push(await solve(b.id));
       }
       const cached: number[] = [];

@@ -40,6 +40,8 @@ cat <<MSG
     reviewer@sinkwise.test    reviewer: reviews shared builds, records verdicts
     instructor@sinkwise.test  instructor: runs the class, publishes worked examples
     admin@sinkwise.test       admin: users, roles and the verified catalogue
+    student1@sinkwise.test    student in the evening course: hand-in with feedback
+    student2@sinkwise.test    student in the evening course: a late hand-in
 
   E-mail inbox (password reset mails land here): $MAIL_INBOX_URL
   Press Ctrl-C to stop.

@@ -15,6 +15,9 @@ export APP_URL="http://127.0.0.1:$PORT"
 export S3_ENDPOINT="http://127.0.0.1:${TEST_S3_PORT:-4570}"
 export S3_BUCKET="sinkwise-test"
 export SINKWISE_TEST_URL="$APP_URL"
+# The tests stand in for a reverse proxy on loopback: each test client tells its own address
+# in X-Forwarded-For, the way nginx would (tests/support/http.ts).
+export TRUSTED_PROXY="127.0.0.1"
 mkdir -p .data test-results
 
 # Several checkouts on one machine share its cores: at most two full runs at a time, the

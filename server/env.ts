@@ -20,6 +20,15 @@ const envSchema = z.object({
   S3_BUCKET: z.string().default("sinkwise-attachments"),
   S3_ACCESS_KEY_ID: z.string().default("S3RVER"),
   S3_SECRET_ACCESS_KEY: z.string().default("S3RVER"),
+  /**
+   * Addresses of reverse proxies whose X-Forwarded-For and X-Forwarded-Host we believe
+   * (comma-separated IPs). Empty: the client address is the socket's and headers are ignored.
+   */
+  TRUSTED_PROXY: z
+    .string()
+    .default("")
+    .transform((text) => text.split(",").map((a) => a.trim()).filter(Boolean))
+    .pipe(z.array(z.union([z.ipv4(), z.ipv6()], { error: "TRUSTED_PROXY: list IP addresses, separated by commas" }))),
 });
 
 export type Env = z.infer<typeof envSchema>;

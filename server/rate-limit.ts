@@ -10,7 +10,12 @@ const WINDOW_S = 15 * 60;
 const PER_ACCOUNT = 5;
 const PER_ADDRESS = 20;
 
-type Limiters = { account: RateLimiterMySQL; address: RateLimiterMySQL };
+// Reset mails: a few per address an hour (a person retrying), more per client address.
+const RESET_WINDOW_S = 60 * 60;
+const RESET_PER_EMAIL = 3;
+const RESET_PER_CLIENT = 20;
+
+type Limiters = { account: RateLimiterMySQL; address: RateLimiterMySQL; resetEmail: RateLimiterMySQL; resetClient: RateLimiterMySQL };
 const holder = globalThis as unknown as { sinkwiseLimiters?: Limiters };
 
 function limiters(): Limiters {
@@ -27,14 +32,11 @@ function limiters(): Limiters {
     holder.sinkwiseLimiters = {
       account: new RateLimiterMySQL({ ...common, keyPrefix: "signin_account", points: PER_ACCOUNT }),
       address: new RateLimiterMySQL({ ...common, keyPrefix: "signin_address", points: PER_ADDRESS }),
+      resetEmail: new RateLimiterMySQL({ ...common, keyPrefix: "reset_email", points: RESET_PER_EMAIL, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
+      resetClient: new RateLimiterMySQL({ ...common, keyPrefix: "reset_client", points: RESET_PER_CLIENT, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
     };
   }
   return holder.sinkwiseLimiters;
-}
-
-export function clientAddress(request: Request): string {
-  const forwarded = request.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return forwarded || request.headers.get("x-real-ip") || "unknown";
 }
 
 function tooMany(res: RateLimiterRes | null): ApiError {
@@ -45,27 +47,45 @@ function tooMany(res: RateLimiterRes | null): ApiError {
   );
 }
 
-/** Throws 429 when the account or the address has used up its failed attempts. */
-export async function assertSignInAllowed(email: string, address: string): Promise<void> {
+/**
+ * Takes one attempt from the account's and the address's allowance BEFORE the password is
+ * checked: the database counts atomically, so however many guesses arrive at once, at most
+ * the allowance of them is ever checked. Throws 429 when either allowance is used up.
+ */
+export async function consumeSignInAttempt(email: string, address: string): Promise<void> {
   const l = limiters();
-  const [acct, addr] = await Promise.all([l.account.get(email), l.address.get(address)]);
-  if (acct && acct.consumedPoints >= PER_ACCOUNT) throw tooMany(acct);
-  if (addr && addr.consumedPoints >= PER_ADDRESS) throw tooMany(addr);
+  const results = await Promise.allSettled([l.account.consume(email), l.address.consume(address)]);
+  for (const result of results) {
+    if (result.status === "rejected") {
+      if (result.reason instanceof RateLimiterRes) throw tooMany(result.reason);
+      throw result.reason;
+    }
+  }
 }
 
-export async function recordSignInFailure(email: string, address: string): Promise<void> {
+/**
+ * After a right password the attempt is given back. Earlier failures stay counted for their
+ * window: forgetting them here would hand fresh guesses to a burst still in flight.
+ */
+export async function signInSucceeded(email: string, address: string): Promise<void> {
   const l = limiters();
-  await Promise.all([
-    l.account.consume(email).catch((e: unknown) => ignoreLimit(e)),
-    l.address.consume(address).catch((e: unknown) => ignoreLimit(e)),
-  ]);
+  await Promise.all([l.account.reward(email, 1), l.address.reward(address, 1)]);
 }
 
-export async function clearSignInFailures(email: string): Promise<void> {
-  await limiters().account.delete(email);
-}
-
-function ignoreLimit(e: unknown): void {
-  // consume() rejects with a RateLimiterRes once the limit is reached: that is expected.
-  if (!(e instanceof RateLimiterRes)) throw e;
+/**
+ * Takes one reset request from the address's and the client's hourly allowance. Keyed on
+ * the address as typed, so the answer is the same whether or not an account uses it.
+ */
+export async function consumeResetRequest(email: string, client: string): Promise<void> {
+  const l = limiters();
+  const results = await Promise.allSettled([l.resetEmail.consume(email), l.resetClient.consume(client)]);
+  for (const result of results) {
+    if (result.status === "rejected") {
+      if (result.reason instanceof RateLimiterRes) {
+        const minutes = Math.max(1, Math.ceil(result.reason.msBeforeNext / 60_000));
+        throw new ApiError("rate_limited:reset", `Too many reset requests. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`);
+      }
+      throw result.reason;
+    }
+  }
 }

@@ -9,10 +9,12 @@ import { HeadroomTable } from "./headroom-table";
 import { HeatPathDiagram } from "./heat-path-diagram";
 import { LadderChart } from "./ladder-chart";
 import { ModesTable } from "./modes-table";
+import { NodeTemperatures } from "./node-temperatures";
 import { VERDICTS } from "@/lib/retrofit";
 import type { Evaluation, Scenario } from "./types";
 import { WarmupChart } from "./warmup-chart";
 import { WhatItTakes } from "./what-it-takes";
+import { formatMoney } from "@/lib/units/figures";
 
 function Panel({ title, children }: { title: string; children: React.ReactNode }) {
   return (
@@ -68,13 +70,17 @@ export function BudgetReport({ evaluation, ambientC, unit = "C" }: { evaluation:
             ))}
           </div>
           <div className="grid gap-5 lg:grid-cols-2">
-            <Panel title="Headroom to every limit"><HeadroomTable scenario={scenario} unit={unit} /></Panel>
+            <Panel title="Headroom to every limit"><HeadroomTable scenario={scenario} unit={unit} ambientC={ambientC} /></Panel>
             <Panel title="Temperature ladder: where the rise goes"><LadderChart scenario={scenario} ambientC={ambientC} /></Panel>
             <Panel title="Warm-up from a cold start"><WarmupChart scenario={scenario} /></Panel>
             <Panel title="What it takes"><WhatItTakes scenario={scenario} /></Panel>
           </div>
           <Panel title="Derating: operating points on the part curves"><DeratingCharts scenario={scenario} /></Panel>
-          <Panel title="The heat path, as solved"><HeatPathDiagram scenario={scenario} ambientC={ambientC} unit={unit} /></Panel>
+          <Panel title="The heat path, as solved">
+            <HeatPathDiagram scenario={scenario} ambientC={ambientC} unit={unit} />
+            <h3 className="text-sm font-medium">Temperature of every place (open one for the heat flows in and out of it)</h3>
+            <NodeTemperatures scenario={scenario} ambientC={ambientC} unit={unit} />
+          </Panel>
         </>
       )}
       <Panel title="Electrical: pack, runtime and charging"><ElectricalPanel evaluation={evaluation} /></Panel>
@@ -82,13 +88,13 @@ export function BudgetReport({ evaluation, ambientC, unit = "C" }: { evaluation:
         <Panel title="Cost">
           <ul className="text-sm">
             {evaluation.costs.lines.map((l) => (
-              <li key={l.slot}>{l.count} × {l.name}: {l.totalEur === null ? "no price" : `€${l.totalEur.toFixed(2)}`}</li>
+              <li key={l.slot}>{l.count} × {l.name}: {l.totalEur === null ? "no price" : formatMoney(l.totalEur)}</li>
             ))}
           </ul>
           <p className="text-sm">
-            Parts: <strong>€{evaluation.costs.totalEur.toFixed(2)}</strong>
-            {evaluation.costs.comparableNewLightEur !== null && ` · a comparable new light: €${evaluation.costs.comparableNewLightEur.toFixed(2)}`}
-            {evaluation.costs.savingEur !== null && ` · ${evaluation.costs.savingEur >= 0 ? "saving" : "extra"} €${Math.abs(evaluation.costs.savingEur).toFixed(2)}`}
+            Parts: <strong>{formatMoney(evaluation.costs.totalEur)}</strong>
+            {evaluation.costs.comparableNewLightEur !== null && ` · a comparable new light: ${formatMoney(evaluation.costs.comparableNewLightEur)}`}
+            {evaluation.costs.savingEur !== null && ` · ${evaluation.costs.savingEur >= 0 ? "saving" : "extra"} ${formatMoney(Math.abs(evaluation.costs.savingEur))}`}
           </p>
         </Panel>
       )}

@@ -1,6 +1,7 @@
 "use client";
 
-import { hours, num } from "./format";
+import { formatDuration, formatFigure as fig, formatTraced } from "@/lib/units/figures";
+import { enteredTrace, peakPackCurrentTrace } from "@/lib/retrofit/derivations";
 import { Traceable } from "./trace-view";
 import type { Evaluation } from "./types";
 
@@ -15,34 +16,41 @@ export function ElectricalPanel({ evaluation }: { evaluation: Evaluation }) {
         {pack && (
           <>
             <dt className="text-ink-soft">Nominal voltage</dt>
-            <dd><Traceable label={`${num(pack.nominalVoltage.value, 2)} V`} trace={pack.nominalVoltage.trace} /></dd>
+            <dd><Traceable label={formatTraced(pack.nominalVoltage)} trace={pack.nominalVoltage.trace} /></dd>
             <dt className="text-ink-soft">Capacity</dt>
-            <dd><Traceable label={`${num(pack.capacityMAh, 0)} mAh`} trace={pack.capacityC.trace} /></dd>
+            <dd><Traceable label={formatTraced(pack.capacityC)} trace={pack.capacityC.trace} /></dd>
             <dt className="text-ink-soft">Energy</dt>
-            <dd><Traceable label={`${num(pack.energyWh.value, 1)} Wh`} trace={pack.energyWh.trace} /></dd>
+            <dd><Traceable label={formatTraced(pack.energyWh)} trace={pack.energyWh.trace} /></dd>
           </>
         )}
         <dt className="text-ink-soft">Peak pack current</dt>
-        <dd>{peakPackCurrentA === null ? "–" : `${num(peakPackCurrentA, 2)} A`}</dd>
+        <dd><Traceable label={fig(peakPackCurrentA, "current")} trace={peakPackCurrentTrace(evaluation.modes)} /></dd>
         <dt className="text-ink-soft">Protection trips at</dt>
         <dd className={protectionTripA !== null && peakPackCurrentA !== null && protectionTripA < peakPackCurrentA ? "text-over" : ""}>
-          {protectionTripA === null ? "no protection in the build" : `${num(protectionTripA, 1)} A${peakPackCurrentA !== null && protectionTripA < peakPackCurrentA ? " — below the peak current: it will cut out" : ""}`}
+          {protectionTripA === null ? (
+            "no protection in the build"
+          ) : (
+            <>
+              <Traceable label={fig(protectionTripA, "current")} trace={enteredTrace("over-current trip", "the protection circuit", protectionTripA, "A")} />
+              {peakPackCurrentA !== null && protectionTripA < peakPackCurrentA ? " — below the peak current: it will cut out" : ""}
+            </>
+          )}
         </dd>
       </dl>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
         <dt className="text-ink-soft">Charging</dt>
         <dd>
-          {charge ? `${charge.chargers} × charger, ${num(charge.currentA, 2)} A` : "no charger in the build"}
-          {charge?.throttle && <span className="text-tight"> — held down from {num(charge.ratedCurrentA, 2)} A by the chips&apos; {num(charge.throttle.regulationC, 0)} °C die regulation (full in {hours(charge.throttle.ratedHours)} otherwise)</span>}
+          {charge ? `${charge.chargers} × charger, ${fig(charge.currentA, "current")}` : "no charger in the build"}
+          {charge?.throttle && <span className="text-tight">{` — held down from ${fig(charge.ratedCurrentA, "current")} by the chips' ${fig(charge.throttle.regulationC, "temperature")} die regulation (full in ${formatDuration(charge.throttle.ratedHours * 3600)} otherwise)`}</span>}
         </dd>
         {charge && (
           <>
             <dt className="text-ink-soft">Constant-current phase</dt>
-            <dd><Traceable label={hours(charge.ccHours.value)} trace={charge.ccHours.trace} /></dd>
+            <dd><Traceable label={formatTraced(charge.ccHours)} trace={charge.ccHours.trace} /></dd>
             <dt className="text-ink-soft">To full (with CV taper)</dt>
-            <dd><Traceable label={hours(charge.totalHours.value)} trace={charge.totalHours.trace} /> <span className="text-xs text-ink-soft">(capacity ÷ current would say {hours(charge.capacityOverCurrentH)})</span></dd>
+            <dd><Traceable label={formatTraced(charge.totalHours)} trace={charge.totalHours.trace} /> <span className="text-xs text-ink-soft">(capacity ÷ current would say {formatDuration(charge.capacityOverCurrentH * 3600)})</span></dd>
             <dt className="text-ink-soft">Charger heat</dt>
-            <dd><Traceable label={`${num(charge.lossW.value, 2)} W`} trace={charge.lossW.trace} /></dd>
+            <dd><Traceable label={formatTraced(charge.lossW)} trace={charge.lossW.trace} /></dd>
           </>
         )}
       </dl>

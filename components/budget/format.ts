@@ -1,35 +1,10 @@
-/** Display helpers: never print NaN or Infinity; a missing figure is an en dash. */
-export const DASH = "–";
+/**
+ * Budget-screen helpers that are not number formatting (verdict colours, the heat scale,
+ * limit labels). Every figure is printed by lib/units/figures, the one formatter.
+ */
+import type { TemperatureUnit } from "@/lib/units/figures";
 
-export type TempUnit = "C" | "F";
-
-export function num(value: number | null | undefined, digits = 1): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return DASH;
-  return value.toFixed(digits);
-}
-
-export function temp(c: number | null | undefined, unit: TempUnit = "C", digits = 0): string {
-  if (c === null || c === undefined || !Number.isFinite(c)) return DASH;
-  return unit === "F" ? `${(c * 1.8 + 32).toFixed(digits)} °F` : `${c.toFixed(digits)} °C`;
-}
-
-/** A temperature difference (headroom, rise): K, or °F-degrees for a °F user. */
-export function delta(k: number | null | undefined, unit: TempUnit = "C", digits = 0): string {
-  if (k === null || k === undefined || !Number.isFinite(k)) return DASH;
-  return unit === "F" ? `${(k * 1.8).toFixed(digits)} °F` : `${k.toFixed(digits)} K`;
-}
-
-export function duration(s: number | null | undefined): string {
-  if (s === null || s === undefined || !Number.isFinite(s)) return DASH;
-  if (s < 90) return `${Math.round(s)} s`;
-  if (s < 5400) return `${Math.round(s / 60)} min`;
-  return `${(s / 3600).toFixed(1)} h`;
-}
-
-export function hours(h: number | null | undefined): string {
-  if (h === null || h === undefined || !Number.isFinite(h)) return DASH;
-  return h < 1.5 ? `${Math.round(h * 60)} min` : `${h.toFixed(1)} h`;
-}
+export type TempUnit = TemperatureUnit;
 
 export const VERDICT_STYLE: Record<string, string> = {
   "within budget": "bg-ok/10 text-ok border-ok/40",

@@ -1,6 +1,7 @@
 "use client";
 
-import { heatColour, temp, type TempUnit } from "./format";
+import { formatFigure } from "@/lib/units/figures";
+import { heatColour, type TempUnit } from "./format";
 import type { Scenario } from "./types";
 
 /**
@@ -27,7 +28,7 @@ export function HeatPathDiagram({ scenario, ambientC, unit }: { scenario: Scenar
         return (
           <g key={l.index}>
             <path d={`M 220 ${y1} C ${x} ${y1}, ${x} ${y2}, 220 ${y2}`} fill="none" stroke="#c2410c" strokeOpacity={0.55} strokeWidth={Math.min(6, 1 + Math.abs(l.watts))} />
-            <title>{`${l.place}: ${l.watts.toFixed(2)} W, ${l.kelvinPerWatt.toFixed(2)} K/W`}</title>
+            <title>{`${l.place}: ${formatFigure(l.watts, "power")}, ${formatFigure(l.kelvinPerWatt, "thermalResistance")}`}</title>
           </g>
         );
       })}
@@ -37,7 +38,7 @@ export function HeatPathDiagram({ scenario, ambientC, unit }: { scenario: Scenar
           <g key={n.id}>
             <rect x={10} y={y(n.id) - 16} width={210} height={32} rx={5} fill="white" stroke={heatColour(c, ambientC, hottest)} strokeWidth={2} />
             <text x={20} y={y(n.id) + 4} fontSize={12} fill="#2b2520">{n.place}</text>
-            <text x={212} y={y(n.id) + 4} fontSize={12} textAnchor="end" fill="#6b6158">{temp(c, unit)}</text>
+            <text x={212} y={y(n.id) + 4} fontSize={12} textAnchor="end" fill="#6b6158">{formatFigure(c, "temperature", { temperatureUnit: unit })}</text>
           </g>
         );
       })}

@@ -1,6 +1,7 @@
 "use client";
 
 import { useMe } from "@/components/shell/use-me";
+import { formatFigure } from "@/lib/units/figures";
 import { HeatPathDiagram } from "./heat-path-diagram";
 import { useSolve } from "./use-solve";
 
@@ -20,7 +21,7 @@ export function HeatPathPreview({ buildId, revision, ambientC }: { buildId: stri
       <HeatPathDiagram scenario={scenario} ambientC={ambientC} unit={me.data?.temperatureUnit ?? "C"} />
       <ul className="grid gap-x-4 text-xs text-ink-soft sm:grid-cols-2">
         {scenario.thermal.links.filter((l) => Math.abs(l.watts) > 1e-6).map((l) => (
-          <li key={l.index}>{l.place}: {l.watts.toFixed(2)} W</li>
+          <li key={l.index}>{l.place}: {formatFigure(l.watts, "power")}</li>
         ))}
       </ul>
     </figure>

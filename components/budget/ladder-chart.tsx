@@ -2,6 +2,7 @@
 
 import { Bar } from "react-chartjs-2";
 import "./chart-setup";
+import { formatFigure } from "@/lib/units/figures";
 import { heatColour } from "./format";
 import type { Scenario } from "./types";
 
@@ -49,7 +50,7 @@ export function LadderChart({ scenario, ambientC }: { scenario: Scenario; ambien
                 title: (items) => steps[items[0]?.dataIndex ?? 0]?.place ?? "",
                 label: (ctx) => {
                   const s = steps[ctx.dataIndex];
-                  return s ? `+${s.deltaK.toFixed(1)} K · ${s.watts.toFixed(2)} W · ${s.kelvinPerWatt.toFixed(2)} K/W` : "";
+                  return s ? `${formatFigure(s.deltaK, "temperatureDifference", { signed: true })} · ${formatFigure(s.watts, "power")} · ${formatFigure(s.kelvinPerWatt, "thermalResistance")}` : "";
                 },
               },
             },

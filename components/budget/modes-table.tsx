@@ -1,6 +1,8 @@
 "use client";
 
-import { duration, num, VERDICT_STYLE } from "./format";
+import { formatDuration, formatFigure as fig, formatTraced } from "@/lib/units/figures";
+import { VERDICT_STYLE } from "./format";
+import { driveTrace, limitTimeTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
 import { Traceable } from "./trace-view";
 import type { Evaluation } from "./types";
 
@@ -20,16 +22,20 @@ export function ModesTable({ evaluation }: { evaluation: Evaluation }) {
         </tr>
       </thead>
       <tbody>
-        {evaluation.modes.map((m) => (
+        {evaluation.modes.map((m) => {
+          const s = evaluation.scenarios.find((x) => x.kind === "mode" && x.modeIndex === m.modeIndex);
+          const limit = s?.thermal?.limits.find((l) => l.id === m.firstLimit);
+          return (
           <tr key={m.name} className="border-b border-line/60">
             <td className="py-1.5 pr-3 font-medium">{m.name}</td>
-            <td className="py-1.5 pr-3">{m.driveW === null ? "–" : `${num(m.driveW, 1)} W`}</td>
-            <td className="py-1.5 pr-3">{m.totalFluxLm === null ? "–" : `${num(m.totalFluxLm, 0)} lm`}</td>
-            <td className="py-1.5 pr-3">{m.runtime ? <Traceable label={duration((m.runtime.value ?? 0) * (m.runtime.unit === "h" ? 3600 : 1))} trace={m.runtime.trace} /> : "–"}</td>
-            <td className="py-1.5 pr-3">{m.firstLimitS === null ? "none within the warm-up" : `${m.firstLimit ?? "a limit"} after ${duration(m.firstLimitS)}`}</td>
+            <td className="py-1.5 pr-3">{s?.mode ? <Traceable label={fig(m.driveW, "power")} trace={driveTrace(s.mode)} /> : fig(m.driveW, "power")}</td>
+            <td className="py-1.5 pr-3">{s?.mode ? <Traceable label={fig(m.totalFluxLm, "flux")} trace={totalFluxTrace(s.mode)} /> : fig(m.totalFluxLm, "flux")}</td>
+            <td className="py-1.5 pr-3">{m.runtime ? <Traceable label={formatTraced(m.runtime)} trace={m.runtime.trace} /> : "–"}</td>
+            <td className="py-1.5 pr-3">{m.firstLimitS === null ? "none within the warm-up" : <Traceable label={`${limit?.place ?? m.firstLimit ?? "a limit"} after ${formatDuration(m.firstLimitS)}`} trace={s?.warmup && m.firstLimit ? limitTimeTrace(s.warmup, m.firstLimit, limit?.place ?? m.firstLimit) : null} />}</td>
             <td className="py-1.5">{m.verdict ? <span className={`rounded border px-1.5 py-0.5 text-xs ${VERDICT_STYLE[m.verdict] ?? ""}`}>{m.verdict}</span> : "–"}</td>
           </tr>
-        ))}
+          );
+        })}
       </tbody>
     </table>
   );

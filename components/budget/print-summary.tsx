@@ -1,4 +1,7 @@
-import { delta, duration, hours, limitLabel, num, temp, VERDICT_STYLE } from "./format";
+import { formatAgainstLimit, formatDuration, formatFigure as fig, formatHeadroom, formatTraced } from "@/lib/units/figures";
+import { driveTrace, nodeBalanceTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
+import { limitLabel, VERDICT_STYLE } from "./format";
+import { Traceable } from "./trace-view";
 import type { Evaluation } from "./types";
 
 /** The one-page report: every scenario's limits, the modes, the electrical side, the cautions. */
@@ -21,16 +24,19 @@ export function PrintSummary({ evaluation, title, revision, owner }: { evaluatio
             </tr>
           </thead>
           <tbody>
-            {evaluation.modes.map((m) => (
+            {evaluation.modes.map((m) => {
+              const s = evaluation.scenarios.find((x) => x.kind === "mode" && x.modeIndex === m.modeIndex);
+              return (
               <tr key={m.name} className="border-b border-line/50">
                 <td className="pr-2">{m.name}</td>
-                <td className="pr-2">{m.driveW === null ? "–" : `${num(m.driveW)} W`}</td>
-                <td className="pr-2">{m.totalFluxLm === null ? "–" : `${num(m.totalFluxLm, 0)} lm`}</td>
-                <td className="pr-2">{m.runtime?.value == null ? "–" : hours(m.runtime.value)}</td>
-                <td className="pr-2">{m.firstLimitS === null ? "none in the warm-up" : `${m.firstLimit} after ${duration(m.firstLimitS)}`}</td>
+                <td className="pr-2"><Traceable label={fig(m.driveW, "power")} trace={s?.mode ? driveTrace(s.mode) : null} /></td>
+                <td className="pr-2"><Traceable label={fig(m.totalFluxLm, "flux")} trace={s?.mode ? totalFluxTrace(s.mode) : null} /></td>
+                <td className="pr-2"><Traceable label={formatTraced(m.runtime)} trace={m.runtime?.trace} /></td>
+                <td className="pr-2">{m.firstLimitS === null ? "none in the warm-up" : `${m.firstLimit} after ${formatDuration(m.firstLimitS)}`}</td>
                 <td>{m.verdict ?? "–"}</td>
               </tr>
-            ))}
+              );
+            })}
           </tbody>
         </table>
       </section>
@@ -40,14 +46,17 @@ export function PrintSummary({ evaluation, title, revision, owner }: { evaluatio
             <h2 className="mb-1 font-semibold">{s.kind === "charging" ? "Charging" : `Mode ${s.name}`} — {s.thermal?.verdict ?? "not worked out"}</h2>
             <table className="w-full border-collapse">
               <tbody>
-                {(s.thermal?.limits ?? []).map((l) => (
-                  <tr key={l.id} className="border-b border-line/50">
-                    <td className="pr-2">{limitLabel(l)}</td>
-                    <td className="pr-2">{temp(l.temperatureC)}</td>
-                    <td className="pr-2">{l.kind === "min" ? "≥" : "≤"} {temp(l.limitC)}</td>
-                    <td>{delta(l.headroomK)}</td>
-                  </tr>
-                ))}
+                {(s.thermal?.limits ?? []).map((l) => {
+                  const shown = formatAgainstLimit(l.temperatureC, l.limitC, l.kind, "temperature");
+                  return (
+                    <tr key={l.id} className="border-b border-line/50">
+                      <td className="pr-2">{limitLabel(l)}</td>
+                      <td className="pr-2"><Traceable label={shown.value} trace={s.thermal ? nodeBalanceTrace(s.thermal, l.node, s.network?.ambientC ?? 25) : null} /></td>
+                      <td className="pr-2"><Traceable label={`${shown.relation} ${shown.limit}`} trace={l.limitTrace} /></td>
+                      <td><Traceable label={formatHeadroom(l.headroomK)} trace={l.trace} /></td>
+                    </tr>
+                  );
+                })}
               </tbody>
             </table>
           </div>
@@ -56,9 +65,9 @@ export function PrintSummary({ evaluation, title, revision, owner }: { evaluatio
       <section>
         <h2 className="mb-1 font-semibold">Electrical</h2>
         <p>
-          {e.pack ? `Pack ${e.pack.series}S${e.pack.parallel}P: ${num(e.pack.nominalVoltage.value, 2)} V, ${num(e.pack.capacityMAh, 0)} mAh, ${num(e.pack.energyWh.value)} Wh. ` : "No cells. "}
-          {e.charge ? `Charging at ${num(e.charge.currentA, 2)} A: constant current ${hours(e.charge.ccHours.value)}, full after ${hours(e.charge.totalHours.value)}; charger heat ${num(e.charge.lossW.value, 2)} W. ` : "No charger. "}
-          {e.protectionTripA !== null ? `Protection trips at ${num(e.protectionTripA)} A (peak pack current ${num(e.peakPackCurrentA, 2)} A).` : "No protection circuit."}
+          {e.pack ? `Pack ${e.pack.series}S${e.pack.parallel}P: ${formatTraced(e.pack.nominalVoltage)}, ${formatTraced(e.pack.capacityC)}, ${formatTraced(e.pack.energyWh)}. ` : "No cells. "}
+          {e.charge ? `Charging at ${fig(e.charge.currentA, "current")}: constant current ${formatTraced(e.charge.ccHours)}, full after ${formatTraced(e.charge.totalHours)}; charger heat ${formatTraced(e.charge.lossW)}. ` : "No charger. "}
+          {e.protectionTripA !== null ? `Protection trips at ${fig(e.protectionTripA, "current")} (peak pack current ${fig(e.peakPackCurrentA, "current")}).` : "No protection circuit."}
         </p>
       </section>
       {evaluation.problems.filter((p) => p.severity === "error").length > 0 && (

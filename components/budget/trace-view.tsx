@@ -1,14 +1,7 @@
 "use client";
 
 import type { Trace } from "@/lib/thermal";
-import { num } from "./format";
-
-function fmt(v: number): string {
-  if (!Number.isFinite(v)) return "–";
-  const a = Math.abs(v);
-  if (a !== 0 && (a < 1e-3 || a >= 1e6)) return v.toExponential(3);
-  return a < 10 ? v.toPrecision(3) : num(v, a < 100 ? 1 : 0);
-}
+import { formatTraceValue } from "@/lib/units/figures";
 
 /** Expands a number into its trace: formula, inputs with units, result, source. */
 export function TraceView({ trace, depth = 0 }: { trace: Trace; depth?: number }) {
@@ -20,13 +13,13 @@ export function TraceView({ trace, depth = 0 }: { trace: Trace; depth?: number }
         <ul className="grid grid-cols-[auto_1fr] gap-x-3 font-mono">
           {trace.inputs.concat(trace.intermediates).map((q, i) => (
             <li key={`${q.symbol}-${i}`} className="contents">
-              <span>{q.symbol} = {fmt(q.value)} {q.unit}</span>
+              <span>{q.symbol} = {formatTraceValue(q.value, q.unit)}</span>
               <span className="font-sans text-ink-soft">{q.name}</span>
             </li>
           ))}
         </ul>
       )}
-      <div className="font-mono">→ {trace.result.symbol} = {fmt(trace.result.value)} {trace.result.unit}</div>
+      <div className="font-mono">→ {trace.result.symbol} = {formatTraceValue(trace.result.value, trace.result.unit)}</div>
       <div className="text-ink-soft">Source: {trace.source}</div>
       {trace.validity && (
         <div className={trace.validity.inRange ? "text-ink-soft" : "text-tight"}>

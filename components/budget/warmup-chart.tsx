@@ -3,7 +3,7 @@
 import { Line } from "react-chartjs-2";
 import "./chart-setup";
 import { SERIES_COLOURS } from "./chart-setup";
-import { duration } from "./format";
+import { formatDuration as duration } from "@/lib/units/figures";
 import type { Scenario } from "./types";
 
 /** Warm-up from ambient: the nodes with a limit, the limit lines, and when each is reached. */

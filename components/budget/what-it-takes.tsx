@@ -1,6 +1,6 @@
 "use client";
 
-import { num } from "./format";
+import { formatFigure as fig } from "@/lib/units/figures";
 import { Traceable } from "./trace-view";
 import type { Scenario } from "./types";
 
@@ -15,14 +15,14 @@ export function WhatItTakes({ scenario }: { scenario: Scenario }) {
       {s ? (
         <>
           <dt className="text-ink-soft">Heatsink to air, in this build</dt>
-          <dd><Traceable label={`${num(s.presentKPerW.value, 2)} K/W`} trace={s.presentKPerW.trace} /></dd>
+          <dd><Traceable label={fig(s.presentKPerW.value, "thermalResistance")} trace={s.presentKPerW.trace} /></dd>
           <dt className="text-ink-soft">Needed for the budget (10 K margin)</dt>
           <dd>
-            <Traceable label={s.forBudgetKPerW.value === null ? "any sink would do" : `≤ ${num(s.forBudgetKPerW.value, 2)} K/W`} trace={s.forBudgetKPerW.trace} />
+            <Traceable label={s.forBudgetKPerW.value === null ? "any sink would do" : `≤ ${fig(s.forBudgetKPerW.value, "thermalResistance")}`} trace={s.forBudgetKPerW.trace} />
             {enough !== null && <span className={`ml-2 font-medium ${enough ? "text-ok" : "text-over"}`}>{enough ? "the sink is enough" : "the sink is not enough"}</span>}
           </dd>
           <dt className="text-ink-soft">Needed to just stay under the limit</dt>
-          <dd><Traceable label={s.forLimitKPerW.value === null ? "any sink would do" : `≤ ${num(s.forLimitKPerW.value, 2)} K/W`} trace={s.forLimitKPerW.trace} /></dd>
+          <dd><Traceable label={s.forLimitKPerW.value === null ? "any sink would do" : `≤ ${fig(s.forLimitKPerW.value, "thermalResistance")}`} trace={s.forLimitKPerW.trace} /></dd>
         </>
       ) : (
         <>
@@ -31,7 +31,7 @@ export function WhatItTakes({ scenario }: { scenario: Scenario }) {
         </>
       )}
       <dt className="text-ink-soft">Highest drive power the build holds</dt>
-      <dd>{w.maxDrivePowerW ? <Traceable label={`${num(w.maxDrivePowerW.value, 1)} W`} trace={w.maxDrivePowerW.trace} /> : "–"}{w.bindingLimit && <span className="ml-2 text-xs text-ink-soft">(limited by {w.bindingLimit})</span>}</dd>
+      <dd>{w.maxDrivePowerW ? <Traceable label={fig(w.maxDrivePowerW.value, "power")} trace={w.maxDrivePowerW.trace} /> : "–"}{w.bindingLimit && <span className="ml-2 text-xs text-ink-soft">(limited by {w.bindingLimit})</span>}</dd>
     </dl>
   );
 }

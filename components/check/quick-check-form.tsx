@@ -2,7 +2,8 @@
 
 import { useMutation } from "@tanstack/react-query";
 import { type FormEvent, useState } from "react";
-import { delta, num, temp, VERDICT_STYLE } from "@/components/budget/format";
+import { VERDICT_STYLE } from "@/components/budget/format";
+import { formatAgainstLimit, formatFigure, formatHeadroom } from "@/lib/units/figures";
 import { TraceView } from "@/components/budget/trace-view";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { FINISHES, materialOptions } from "@/lib/parts";
@@ -123,15 +124,15 @@ export function QuickCheckForm() {
           <>
             <div className="flex items-center gap-3">
               <span className={`rounded border px-2 py-1 text-sm font-semibold ${VERDICT_STYLE[r.verdict ?? ""] ?? "border-line"}`} data-testid="quick-verdict">{r.verdict ?? "could not be worked out"}</span>
-              <span className="text-sm text-ink-soft">headroom {delta(r.headroomK)} to {temp(r.maxTjC)}</span>
+              <span className="text-sm text-ink-soft">headroom {formatHeadroom(r.headroomK)} to {formatFigure(r.maxTjC, "temperature")}</span>
             </div>
             <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm">
-              <dt className="text-ink-soft">Junction</dt><dd className="font-medium">{temp(r.tjC, "C", 1)}</dd>
-              <dt className="text-ink-soft">Solder point</dt><dd>{temp(r.solderPointC, "C", 1)}</dd>
-              <dt className="text-ink-soft">Heatsink</dt><dd>{temp(r.sinkC, "C", 1)}</dd>
-              <dt className="text-ink-soft">Sink-to-air, this sink</dt><dd>{num(r.sinkKPerW, 2)} K/W</dd>
-              <dt className="text-ink-soft">Needed for the budget (10 K margin)</dt><dd>{r.requiredForBudgetKPerW === null ? "–" : `≤ ${num(r.requiredForBudgetKPerW, 2)} K/W`}</dd>
-              <dt className="text-ink-soft">Needed to just reach the limit</dt><dd>{r.requiredForLimitKPerW === null ? "–" : `≤ ${num(r.requiredForLimitKPerW, 2)} K/W`}</dd>
+              <dt className="text-ink-soft">Junction</dt><dd className="font-medium">{formatAgainstLimit(r.tjC, r.maxTjC, "max", "temperature").value}</dd>
+              <dt className="text-ink-soft">Solder point</dt><dd>{formatFigure(r.solderPointC, "temperature")}</dd>
+              <dt className="text-ink-soft">Heatsink</dt><dd>{formatFigure(r.sinkC, "temperature")}</dd>
+              <dt className="text-ink-soft">Sink-to-air, this sink</dt><dd>{formatFigure(r.sinkKPerW, "thermalResistance")}</dd>
+              <dt className="text-ink-soft">Needed for the budget (10 K margin)</dt><dd>{r.requiredForBudgetKPerW === null ? "–" : `≤ ${formatFigure(r.requiredForBudgetKPerW, "thermalResistance")}`}</dd>
+              <dt className="text-ink-soft">Needed to just reach the limit</dt><dd>{r.requiredForLimitKPerW === null ? "–" : `≤ ${formatFigure(r.requiredForLimitKPerW, "thermalResistance")}`}</dd>
             </dl>
             {r.problems.length > 0 && (
               <ul className="list-disc pl-5 text-xs text-ink-soft">{r.problems.map((p, i) => <li key={i}>{p.field}: {p.message}</li>)}</ul>

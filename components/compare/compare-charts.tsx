@@ -5,6 +5,7 @@ import { Bar, Line } from "react-chartjs-2";
 import "@/components/budget/chart-setup";
 import { SERIES_COLOURS } from "@/components/budget/chart-setup";
 import type { CompareAnswer } from "./use-compare";
+import { formatFigure } from "@/lib/units/figures";
 
 const columnName = (c: CompareAnswer["columns"][number]) => `${c.variantNote ?? c.title} (r${c.revision})`;
 
@@ -83,7 +84,7 @@ export function SideBySideLadders({ data }: { data: CompareAnswer }) {
             ) : (
               <p className="text-xs text-ink-soft">No ladder for this scenario.</p>
             )}
-            {c && <p className="text-xs text-ink-soft">rise {c.riseK.toFixed(1)} K</p>}
+            {c && <p className="text-xs text-ink-soft">rise {formatFigure(c.riseK, "temperatureDifference")}</p>}
           </figure>
         ))}
       </div>

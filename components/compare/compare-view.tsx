@@ -3,27 +3,29 @@
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { VERDICT_STYLE } from "@/components/budget/format";
+import { Traceable } from "@/components/budget/trace-view";
 import { ApiClientError } from "@/components/ui/fetch-json";
+import { formatInUnit } from "@/lib/units/figures";
 import type { FigureRow } from "@/lib/compare";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import { OverlaidWarmups, SideBySideLadders } from "./compare-charts";
 import { type CompareAnswer, useCompare, useSaveComparison } from "./use-compare";
 
-const DIGITS: Record<string, number> = { "°C": 1, K: 1, min: 0, h: 1, lm: 0, W: 2, "€": 2, mAh: 0, Wh: 1 };
 const JUDGED = { better: "bg-ok/10 text-ok", worse: "bg-over/10 text-over", same: "text-ink-soft" } as const;
 
 function show(row: FigureRow, v: number | string | null): string {
   if (row.kind === "verdict") return typeof v === "string" ? v : "–";
   if (row.kind === "time" && v === null) return "not reached";
   if (typeof v !== "number" || !Number.isFinite(v)) return "–";
-  return row.unit === "€" ? `€${v.toFixed(2)}` : `${v.toFixed(DIGITS[row.unit] ?? 1)} ${row.unit}`;
+  return formatInUnit(v, row.unit);
 }
 
 function signed(row: FigureRow, d: number | null): string {
   if (d === null || !Number.isFinite(d)) return "";
-  const digits = DIGITS[row.unit] ?? 1;
-  if (Math.abs(d) < 0.5 * 10 ** -digits) return "±0";
-  return `${d > 0 ? "+" : "−"}${row.unit === "€" ? "€" : ""}${Math.abs(d).toFixed(digits)}${row.unit === "€" ? "" : ` ${row.unit}`}`;
+  // A difference is shown like the figure itself; one that rounds away to nothing is "±0".
+  const size = formatInUnit(Math.abs(d), row.unit);
+  if (!/[1-9]/.test(size)) return "±0";
+  return `${d > 0 ? "+" : "−"}${size}`;
 }
 
 function Figures({ data }: { data: CompareAnswer }) {
@@ -49,7 +51,7 @@ function Figures({ data }: { data: CompareAnswer }) {
                   const j = f.judgements[i];
                   return (
                     <td key={i} className={`py-1 pr-3 ${j && j !== "same" ? JUDGED[j] : ""}`}>
-                      {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : show(f, v)}
+                      {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={show(f, v)} trace={f.traces?.[i]} />}
                       {i > 0 && f.deltas[i] !== null && <span className="ml-1.5 text-xs">{signed(f, f.deltas[i] ?? null)}</span>}
                       {i > 0 && f.kind === "time" && j && j !== "same" && f.deltas[i] === null && <span className="ml-1.5 text-xs">{j}</span>}
                     </td>

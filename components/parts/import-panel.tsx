@@ -48,7 +48,8 @@ export function ImportPanel() {
       </div>
       <p className="text-xs text-ink-soft">
         Expected header for this kind: <code className="break-all font-mono">{csvHeaders(kind).join(",")}</code>. The unit in brackets is what a bare number means;
-        change it (e.g. [in]) or write the unit in the cell.
+        change it (e.g. [in]) or write the unit in the cell. A cell that starts with ' followed by =, +, −, @ or a tab (as our exports
+        write them, so a spreadsheet never runs them as a formula) is read without that quote.
       </p>
       <label className="block space-y-1 text-sm">
         <span className="font-medium">CSV text</span>

@@ -5,11 +5,12 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { buttonClass, quietButtonClass } from "./labels";
 import { usePartAction } from "./use-parts";
+import { VerifyControl } from "./verify-control";
 
 /** Edit, duplicate, delete and (admins) verify: each button only where the viewer may. */
-export function PartActions({ id, name, canEdit, isAdmin, verified }: { id: string; name: string; canEdit: boolean; isAdmin: boolean; verified: boolean }) {
+export function PartActions({ id, name, canEdit, isAdmin, verified, provenance }: { id: string; name: string; canEdit: boolean; isAdmin: boolean; verified: boolean; provenance: string }) {
   const router = useRouter();
-  const { duplicate, remove, verify } = usePartAction(id);
+  const { duplicate, remove } = usePartAction(id);
   const [error, setError] = useState<string | null>(null);
   const fail = (e: unknown) => setError(e instanceof Error ? e.message : "That did not work.");
 
@@ -25,11 +26,6 @@ export function PartActions({ id, name, canEdit, isAdmin, verified }: { id: stri
         >
           Duplicate
         </button>
-        {isAdmin && (
-          <button type="button" className={quietButtonClass} disabled={verify.isPending} onClick={() => verify.mutate(!verified, { onSuccess: () => router.refresh(), onError: fail })}>
-            {verified ? "Remove verified mark" : "Mark verified"}
-          </button>
-        )}
         {canEdit && (
           <button
             type="button"
@@ -44,6 +40,7 @@ export function PartActions({ id, name, canEdit, isAdmin, verified }: { id: stri
           </button>
         )}
       </div>
+      {isAdmin && <VerifyControl id={id} verified={verified} provenance={provenance} />}
       {error && <p role="alert" className="text-sm text-over">{error}</p>}
     </div>
   );

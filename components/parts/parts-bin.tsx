@@ -54,7 +54,7 @@ function columnsFor(kind: PartKind | "", prefs: UnitPreferences): ColumnDef<Part
       cell: ({ row }) => (
         <span>
           {row.original.owner.displayName}
-          {row.original.verified && <span className="ml-2 rounded bg-ok/10 px-1.5 py-0.5 text-xs text-ok">verified</span>}
+          {row.original.verified && <span className="ml-2 rounded bg-ok/10 px-1.5 py-0.5 text-xs text-ok" title="Checked against a cited datasheet or measurement: the part page says by whom, when and against what">verified</span>}
         </span>
       ),
     },

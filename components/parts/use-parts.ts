@@ -51,8 +51,8 @@ export function usePartAction(id: string) {
       onSuccess: done,
     }),
     verify: useMutation({
-      mutationFn: async (verified: boolean) =>
-        (await fetchJson<{ part: PartDto }>(`/api/v1/parts/${id}/verify`, { method: "PATCH", body: { verified } })).part,
+      mutationFn: async (body: { verified: true; against: string; attachmentId?: string } | { verified: false }) =>
+        (await fetchJson<{ part: PartDto }>(`/api/v1/parts/${id}/verify`, { method: "PATCH", body })).part,
       onSuccess: (part) => {
         client.setQueryData(["part", id], part);
         done();

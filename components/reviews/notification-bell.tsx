@@ -45,7 +45,7 @@ export function NotificationBell() {
             {notes.data?.items.map((n) => (
               <li key={n.id}>
                 <Link
-                  href={n.reviewId ? `/reviews/${n.reviewId}` : n.buildId ? `/builds/${n.buildId}` : "/reviews"}
+                  href={n.href ? n.href : n.reviewId ? `/reviews/${n.reviewId}` : n.buildId ? `/builds/${n.buildId}` : "/reviews"}
                   onClick={() => {
                     setOpen(false);
                     if (!n.readAt) markRead.mutate([n.id]);

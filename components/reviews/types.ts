@@ -33,9 +33,11 @@ export type Anchors = HeatPathAnchors;
 
 export interface NotificationItem {
   id: string;
-  kind: "review_requested" | "verdict" | "comment";
+  kind: "review_requested" | "verdict" | "comment" | "feedback";
   reviewId: string | null;
   buildId: string | null;
+  /** Where a Classroom notification leads (a hand-in's exercise). */
+  href: string | null;
   text: string;
   readAt: string | null;
   createdAt: string;

@@ -3,6 +3,8 @@ import { and, desc, eq, ne, or, sql } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
 import { db } from "../client";
 import { buildMembers, buildRevisions, builds, reviews, revisionParts, solveCache, users } from "../schema";
+import { snapshotPartsInTx } from "./snapshots";
+import { classReaderSql } from "./classwork";
 import { newId } from "./users";
 
 export interface BuildSummary {
@@ -75,6 +77,7 @@ export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer
       memberUser: buildMembers.userId,
       // Any review of this build assigned to the viewer lets them read it (never edit).
       assigned: sql<number>`exists(select 1 from ${reviews} where ${reviews.buildId} = ${builds.id} and ${reviews.reviewerId} = ${viewer?.id ?? ""})`,
+      classReader: classReaderSql(builds.id, viewer?.id ?? ""),
     })
     .from(builds)
     .innerJoin(users, eq(users.id, builds.ownerId))
@@ -83,12 +86,13 @@ export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer
     .limit(1);
   const row = rows[0];
   if (!row) return undefined;
-  const { memberEdit, memberUser, assigned, ...build } = row;
+  const { memberEdit, memberUser, assigned, classReader, ...build } = row;
   const access = buildAccess(viewer, {
     ownerId: build.ownerId,
     visibility: build.visibility,
     member: memberUser ? { canEdit: Boolean(memberEdit) } : null,
     assignedReviewer: Number(assigned) === 1,
+    classReader: Number(classReader) === 1,
   });
   return access.canView ? { ...build, access } : undefined;
 }
@@ -150,6 +154,7 @@ export async function createBuild(input: NewBuild): Promise<{ id: string; revisi
     const revisionId = newId();
     await tx.insert(buildRevisions).values({ id: revisionId, buildId: id, number: 1, design: input.design, note: input.note, createdBy: input.ownerId, createdAt: now });
     if (input.partIds.length) await tx.insert(revisionParts).values(input.partIds.map((partId) => ({ revisionId, partId })));
+    await snapshotPartsInTx(tx, revisionId, input.partIds, now);
   });
   return { id, revision: 1 };
 }
@@ -163,6 +168,7 @@ export async function saveRevision(input: { buildId: string; userId: string; des
     const now = new Date();
     await tx.insert(buildRevisions).values({ id: revisionId, buildId: input.buildId, number: next, design: input.design, note: input.note, createdBy: input.userId, createdAt: now });
     if (input.partIds.length) await tx.insert(revisionParts).values(input.partIds.map((partId) => ({ revisionId, partId })));
+    await snapshotPartsInTx(tx, revisionId, input.partIds, now);
     await tx.update(builds).set({ currentRevision: next, updatedAt: now }).where(eq(builds.id, input.buildId));
     return next;
   });
@@ -202,8 +208,7 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
     .from(revisionParts)
     .innerJoin(buildRevisions, eq(buildRevisions.id, revisionParts.revisionId))
     .innerJoin(builds, eq(builds.id, buildRevisions.buildId))
-    .where(eq(revisionParts.partId, partId))
-    .limit(50);
+    .where(eq(revisionParts.partId, partId));
 }
 
 /** The cached result as stored JSON text, so a cache hit is sent without parsing it. */

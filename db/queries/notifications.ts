@@ -8,6 +8,7 @@ export interface NotificationRow {
   kind: (typeof NOTIFICATION_KINDS)[number];
   reviewId: string | null;
   buildId: string | null;
+  href: string | null;
   text: string;
   readAt: Date | null;
   createdAt: Date;
@@ -21,6 +22,7 @@ export async function listNotifications({ userId, limit = 30 }: { userId: string
       kind: notifications.kind,
       reviewId: notifications.reviewId,
       buildId: notifications.buildId,
+      href: notifications.href,
       text: notifications.text,
       readAt: notifications.readAt,
       createdAt: notifications.createdAt,

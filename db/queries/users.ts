@@ -105,6 +105,8 @@ export async function consumePasswordResetToken({
       .where(and(eq(passwordResetTokens.tokenHash, row.tokenHash), isNull(passwordResetTokens.usedAt)));
     await tx.update(users).set({ passwordHash }).where(eq(users.id, row.userId));
     await tx.delete(userSessions).where(eq(userSessions.userId, row.userId));
+    // Every other link still out for this account stops working: one reset closes them all.
+    await tx.delete(passwordResetTokens).where(and(eq(passwordResetTokens.userId, row.userId), isNull(passwordResetTokens.usedAt)));
     return "ok";
   });
 }

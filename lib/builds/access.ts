@@ -8,6 +8,8 @@ export type BuildFacts = {
   readonly member?: { readonly canEdit: boolean } | null;
   /** The viewer is the reviewer of one of the build's reviews: they may read it, never edit it. */
   readonly assignedReviewer?: boolean;
+  /** The build is a worked example or exercise starter of the viewer's class, or a hand-in in a class they teach: read-only. */
+  readonly classReader?: boolean;
 };
 
 export type BuildAccess = { canView: boolean; canEdit: boolean; isOwner: boolean };
@@ -22,6 +24,6 @@ export function buildAccess(viewer: BuildViewer, build: BuildFacts): BuildAccess
   const isOwner = viewer.id === build.ownerId;
   const memberEdit = Boolean(build.member?.canEdit) && viewer.role !== "reviewer";
   const canEdit = isOwner || memberEdit;
-  const canView = canEdit || Boolean(build.member) || Boolean(build.assignedReviewer) || build.visibility === "shared" || viewer.role === "admin";
+  const canView = canEdit || Boolean(build.member) || Boolean(build.assignedReviewer) || Boolean(build.classReader) || build.visibility === "shared" || viewer.role === "admin";
   return { canView, canEdit, isOwner };
 }

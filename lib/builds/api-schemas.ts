@@ -1,7 +1,10 @@
 import { z } from "zod";
 import { buildDesignSchema } from "@/lib/retrofit";
 
-const title = z.string({ error: "Give the build a title." }).trim().min(1, { error: "Give the build a title." }).max(160);
+/** The longest title a build keeps (its database column). */
+export const MAX_TITLE_CHARS = 160;
+
+const title = z.string({ error: "Give the build a title." }).trim().min(1, { error: "Give the build a title." }).max(MAX_TITLE_CHARS);
 const summary = z.string().trim().max(2000, { error: "Keep the summary under 2000 characters." });
 const visibility = z.enum(["private", "shared"], { error: "Visibility is private or shared." });
 

@@ -1,4 +1,5 @@
 import type { BuildDesign } from "@/lib/retrofit";
+import { formatDecimal } from "@/lib/units/figures";
 
 /**
  * The parts and mounting of two to four designs, slot by slot, so Side by side can say
@@ -50,7 +51,7 @@ function mount(d: BuildDesign, names: PartNames): string {
   return `${MOUNTS[m.kind]}${through}`;
 }
 
-const fmt = (x: number, digits = 1): string => (Number.isFinite(x) ? x.toFixed(digits) : "—");
+const fmt = (x: number, digits = 1): string => formatDecimal(x, digits);
 
 const ROWS: { slot: string; label: string; text: (d: BuildDesign, n: PartNames) => string }[] = [
   { slot: "driver.cooling", label: "Driver cooling", text: cooling },

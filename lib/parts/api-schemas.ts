@@ -75,7 +75,26 @@ export const partPatchSchema = z
   .strict();
 export type PartPatch = z.output<typeof partPatchSchema>;
 
-export const verifySchema = z.strictObject({ verified: z.boolean({ error: "must be true or false" }) });
+/**
+ * PATCH /api/v1/parts/[id]/verify. Marking verified records what the values were checked
+ * against (a cited datasheet or measurement) and, optionally, which attachment holds it.
+ */
+export const verifySchema = z.discriminatedUnion(
+  "verified",
+  [
+    z.strictObject({
+      verified: z.literal(true),
+      against: z
+        .string({ error: "Checked against: name the datasheet (title, revision, page) or the measurement the values were checked against." })
+        .trim()
+        .min(10, { error: "Checked against: name the datasheet (title, revision, page) or the measurement (who measured, how, when) — at least 10 characters." })
+        .max(500, { error: "Checked against: keep it under 500 characters." }),
+      attachmentId: z.string().trim().min(1).max(40).optional(),
+    }),
+    z.strictObject({ verified: z.literal(false) }),
+  ],
+  { error: "Verified: must be true or false." },
+);
 
 /** POST /api/v1/parts/import: preview first, then commit the same text (all-or-nothing). */
 export const partImportSchema = z.strictObject({

@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import type { z } from "zod";
-import { formatNumber, formatPath, fromStorage, parseQuantity, QUANTITY_INFO, type UnitChoice } from "@/lib/units";
+import { BARE_NUMBER, formatNumber, formatPath, fromStorage, parseQuantity, QUANTITY_INFO, type UnitChoice } from "@/lib/units";
 import { COMMON_FIELDS, type PartKind } from "./common";
 import type { FieldDef } from "./fields";
 import { formatModesCell, parseModesCell, type DriverMode } from "./modes";
@@ -57,7 +57,18 @@ export interface CsvImport {
   readonly rows: CsvRowResult[];
 }
 
-const HEADER = /^\s*([^[\]]+?)\s*(?:\[([^\]]*)\])?\s*$/;
+const MAX_HEADER_CHARS = 200;
+
+/**
+ * "key [unit]" → its key and bracket (without a pattern that could backtrack on a long run
+ * of spaces: this reads any header in one pass).
+ */
+function splitHeader(cell: string): { key: string; bracket: string | undefined } {
+  const text = cell.trim();
+  const open = text.indexOf("[");
+  if (open < 0 || !text.endsWith("]") || text.indexOf("]") !== text.length - 1) return { key: text, bracket: undefined };
+  return { key: text.slice(0, open).trim(), bracket: text.slice(open + 1, -1).trim() };
+}
 
 /** Matches the file's header against the kind's columns, honouring changed bracket units. */
 function readHeader(cells: readonly string[], kind: PartKind): { columns: (CsvColumn | undefined)[]; errors: CsvError[] } {
@@ -65,8 +76,11 @@ function readHeader(cells: readonly string[], kind: PartKind): { columns: (CsvCo
   const errors: CsvError[] = [];
   const seen = new Set<string>();
   const columns = cells.map((cell): CsvColumn | undefined => {
-    const match = HEADER.exec(cell);
-    const key = match?.[1] ?? "";
+    if (cell.length > MAX_HEADER_CHARS) {
+      errors.push({ line: 1, column: `${cell.trim().slice(0, 40)}…`, message: `a column header is longer than ${MAX_HEADER_CHARS} characters; expected: ${known.map((c) => c.header).join(", ")}` });
+      return undefined;
+    }
+    const { key, bracket } = splitHeader(cell);
     const column = known.find((c) => c.key.toLowerCase() === key.toLowerCase());
     if (!column) {
       errors.push({ line: 1, column: cell, message: `unknown column "${cell}" for a ${kind}; expected: ${known.map((c) => c.header).join(", ")}` });
@@ -74,7 +88,6 @@ function readHeader(cells: readonly string[], kind: PartKind): { columns: (CsvCo
     }
     if (seen.has(column.key)) errors.push({ line: 1, column: cell, message: `column ${column.key} appears twice` });
     seen.add(column.key);
-    const bracket = match?.[2]?.trim();
     if (bracket === undefined || column.field.type !== "quantity") return column;
     const probe = parseQuantity(`1 ${bracket}`, column.field.quantity);
     const plain = bracket === "" || bracket === "%";
@@ -92,12 +105,10 @@ function readHeader(cells: readonly string[], kind: PartKind): { columns: (CsvCo
   return { columns, errors };
 }
 
-const BARE = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
-
 /** A bare number gets the column's unit written on, so the one part schema reads every cell. */
 function cellValue(cell: string, column: CsvColumn): string {
   const text = cell.trim();
-  if (!column.unit || !BARE.test(text) || column.unit.math === "") return text;
+  if (!column.unit || !BARE_NUMBER.test(text) || column.unit.math === "") return text;
   return `${text} ${column.unit.math}`;
 }
 
@@ -160,7 +171,7 @@ export function parsePartsCsv(text: string, kind: PartKind): CsvImport {
     }
     const row: Record<string, string> = {};
     columns.forEach((column, i) => {
-      if (column) row[column.header] = cells[i] ?? "";
+      if (column) row[column.header] = unquoteFormulaCell(cells[i] ?? "");
     });
     rows.push(parsePartRow(row, kind, line, present));
   });
@@ -186,9 +197,21 @@ export function partToCsvRow(part: Part | PartInput): Record<string, string> {
   );
 }
 
-/** Parts of one kind → CSV text with the kind's header. */
+/**
+ * Cells a spreadsheet would run as a formula start with one of these (OWASP, "CSV
+ * Injection"). On export such a cell gets a leading single quote, the usual spreadsheet-safe
+ * form; the import takes that quote off again, so a file round-trips unchanged.
+ */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+/** The import's half of the formula guard: "'-40" (as exported) reads as "-40". */
+export function unquoteFormulaCell(cell: string): string {
+  return cell.startsWith("'") && FORMULA_START.test(cell.slice(1)) ? cell.slice(1) : cell;
+}
+
+/** Parts of one kind → CSV text with the kind's header; formula-like cells are neutralised. */
 export function partsToCsv(parts: readonly (Part | PartInput)[], kind: PartKind): string {
   const headers = csvHeaders(kind);
   const rows = parts.filter((p) => p.kind === kind).map((p) => headers.map((h) => partToCsvRow(p)[h] ?? ""));
-  return Papa.unparse({ fields: headers, data: rows });
+  return Papa.unparse({ fields: headers, data: rows }, { escapeFormulae: FORMULA_START });
 }

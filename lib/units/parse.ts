@@ -9,8 +9,16 @@ export interface ParseOptions {
   readonly bareUnit?: UnitChoice | string;
 }
 
-const BARE_NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
-const PERCENT_TEXT = /^(.*?)\s*%$/;
+/**
+ * The longest value we read ("0.000123 W/(m^2 K)" is 19 characters). Anything longer is
+ * refused before any pattern or the unit reader sees it, so parsing time is bounded no
+ * matter what a request carries.
+ */
+export const MAX_VALUE_CHARS = 64;
+
+// Unambiguous: every character can be taken by one place of the pattern only, so a failing
+// match is linear (no way to split a run of digits between two parts of the pattern).
+export const BARE_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
 
 // Quantities whose dimension names what a person typed, in the order we prefer when two
 // share a dimension (temperature before temperature difference).
@@ -26,6 +34,10 @@ function expected(quantity: Quantity): string {
 
 function fail(message: string): ParseResult {
   return { ok: false, message };
+}
+
+function tooLong(quantity: Quantity): ParseResult {
+  return fail(`${expected(quantity)}; got a value longer than ${MAX_VALUE_CHARS} characters`);
 }
 
 /** Only finite numbers leave this module: NaN and ±Infinity are errors, never values. */
@@ -86,8 +98,10 @@ function fromUnit(unit: Unit, quantity: Quantity): ParseResult {
  */
 export function parseQuantity(input: string | number, quantity: Quantity, options: ParseOptions = {}): ParseResult {
   if (typeof input === "number") return finite(input, quantity);
+  if (input.length > MAX_VALUE_CHARS * 4) return tooLong(quantity);
   const text = input.trim();
   if (text === "") return fail("required");
+  if (text.length > MAX_VALUE_CHARS) return tooLong(quantity);
   const bareOption = options.bareUnit ?? QUANTITY_INFO[quantity].bare;
   // Bare units come from headers people type too ("[°F]"), so they get the same respelling.
   const bare = normaliseUnitText(typeof bareOption === "string" ? bareOption : bareOption.math);
@@ -98,9 +112,8 @@ export function parseQuantity(input: string | number, quantity: Quantity, option
     return fromPlain(value, quantity, bare);
   }
 
-  const percent = PERCENT_TEXT.exec(text);
-  if (percent) {
-    const head = percent[1] ?? "";
+  if (text.endsWith("%")) {
+    const head = text.slice(0, -1).trimEnd();
     if (!BARE_NUMBER.test(head)) return fail(`${expected(quantity)}; got "${text}"`);
     if (!PLAIN_QUANTITIES.has(quantity)) return fail(`${expected(quantity)}; got a percentage (%)`);
     return converted(Number(head) / 100, quantity);

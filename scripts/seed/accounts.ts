@@ -10,7 +10,7 @@ export const DEMO_ACCOUNTS: readonly { email: string; displayName: string; role:
   { email: "maker@sinkwise.test", displayName: "Mara Quayle (workshop volunteer)", role: "maker", can: "builds retrofits, checks their budget, asks for reviews" },
   { email: "reviewer@sinkwise.test", displayName: "Ravi Tamsin (senior tech)", role: "reviewer", can: "reviews builds shared with them and records verdicts" },
   { email: "instructor@sinkwise.test", displayName: "Ines Corrow (evening class)", role: "instructor", can: "runs the class and publishes worked examples" },
-  { email: "admin@sinkwise.test", displayName: "Alder Penhale (workshop admin)", role: "admin", can: "manages users, roles and the verified catalogue" },
+  { email: "admin@sinkwise.test", displayName: "Alder Penhale (workshop admin)", role: "admin", can: "manages users and roles, curates the catalogue and records checks of parts against their datasheets" },
 ];
 
 /** Creates the demo accounts, or resets their role and password when they already exist. */

@@ -10,7 +10,8 @@ import { CATALOGUE, type CatalogueKey } from "./catalogue-data";
 export { CATALOGUE, type CatalogueKey } from "./catalogue-data";
 
 /**
- * Seeds the shared catalogue, owned by the admin demo account, public and verified.
+ * Seeds the shared catalogue, owned by the admin demo account and public. Its parts are
+ * invented estimates, so none is verified (nobody checked them against a datasheet).
  * Idempotent: a part is found by owner + name and refreshed in place, so its id (which
  * builds refer to) survives every re-seed. Returns the part ids by catalogue key.
  */
@@ -36,7 +37,7 @@ export async function seedCatalogue({ adminId }: { adminId: string }): Promise<R
         provenanceNote: part.provenanceNote ?? null,
         visibility: "public" as const,
         costEur: part.costEur ?? null,
-        verified: true,
+        verified: false,
         specs: part.specs,
         curves: part.curves,
         updatedAt: now,

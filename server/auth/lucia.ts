@@ -5,16 +5,24 @@ import { pool } from "@/db/client";
 import type { Role } from "@/db/schema";
 import { env } from "@/server/env";
 
+const HTTPS = () => env().APP_URL.startsWith("https://");
+
+export function sessionCookieName(): string {
+  return HTTPS() ? "__Host-sinkwise_session" : "sinkwise_session";
+}
+
 // Lucia v3 is kept inside this one module (and session.ts) so it can be swapped later.
 function createLucia() {
   const adapter = new Mysql2Adapter(pool(), { user: "user", session: "user_session" });
   return new Lucia(adapter, {
     sessionExpiresIn: new TimeSpan(30, "d"),
     sessionCookie: {
-      name: "sinkwise_session",
+      // Over https the __Host- prefix makes the browser refuse the cookie unless it is
+      // Secure, for this exact host and path / (no sibling subdomain can set or read it).
+      name: sessionCookieName(),
       expires: false,
       attributes: {
-        secure: env().APP_URL.startsWith("https://"),
+        secure: HTTPS(),
         sameSite: "lax",
       },
     },

@@ -1,4 +1,5 @@
 import "server-only";
+import { createHash, randomBytes } from "node:crypto";
 import type { Session, User } from "lucia";
 import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
@@ -9,15 +10,45 @@ import { lucia } from "./lucia";
 
 export type SessionUser = User;
 
+/**
+ * However active, a session ends this long after its sign-in (on top of Lucia's sliding
+ * 30 days), so a stolen cookie cannot be kept alive for ever.
+ */
+export const ABSOLUTE_SESSION_MS = 60 * 24 * 60 * 60 * 1000;
+
+const TOKEN = /^([0-9a-z]{1,12})\.([A-Za-z0-9_-]{43})$/;
+
+/**
+ * The cookie carries "<issued>.<secret>"; the database keeps "<issued>.<SHA-256 of secret>"
+ * as the session id, so a copy of the table opens no session. The issue time is part of
+ * the stored id, so a client who edits it in the cookie only names a session that does not
+ * exist.
+ */
+export function sessionIdOf(token: string): { id: string; issuedAt: number } | null {
+  const m = TOKEN.exec(token);
+  if (!m?.[1] || !m[2]) return null;
+  return { id: `${m[1]}.${createHash("sha256").update(m[2]).digest("hex")}`, issuedAt: parseInt(m[1], 36) };
+}
+
+function newSessionToken(now = Date.now()): { token: string; id: string } {
+  const token = `${now.toString(36)}.${randomBytes(32).toString("base64url")}`;
+  const parsed = sessionIdOf(token);
+  if (!parsed) throw new Error("session token shape");
+  return { token, id: parsed.id };
+}
+
 /** Reads and validates the session cookie; refreshes it when Lucia extended the session. */
 export const getSession = cache(async (): Promise<{ user: User; session: Session } | null> => {
   const jar = await cookies();
-  const id = jar.get(lucia().sessionCookieName)?.value;
-  if (!id) return null;
-  const result = await lucia().validateSession(id);
+  const token = jar.get(lucia().sessionCookieName)?.value;
+  if (!token) return null;
+  const parsed = sessionIdOf(token);
+  const expired = parsed !== null && Date.now() - parsed.issuedAt > ABSOLUTE_SESSION_MS;
+  if (parsed && expired) await lucia().invalidateSession(parsed.id);
+  const result = parsed && !expired ? await lucia().validateSession(parsed.id) : { session: null, user: null };
   try {
     if (result.session?.fresh) {
-      const c = lucia().createSessionCookie(result.session.id);
+      const c = lucia().createSessionCookie(token);
       jar.set(c.name, c.value, c.attributes);
     }
     if (!result.session) {
@@ -53,8 +84,9 @@ export async function requirePageUser(...roles: Role[]): Promise<User> {
 }
 
 export async function startSession(userId: string): Promise<void> {
-  const session = await lucia().createSession(userId, {});
-  const c = lucia().createSessionCookie(session.id);
+  const { token, id } = newSessionToken();
+  await lucia().createSession(userId, {}, { sessionId: id });
+  const c = lucia().createSessionCookie(token);
   (await cookies()).set(c.name, c.value, c.attributes);
 }
 

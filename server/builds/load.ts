@@ -1,7 +1,7 @@
 import "server-only";
 import { notFound } from "next/navigation";
 import { getBuild, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
-import { getParts, type PartRecord } from "@/db/queries/parts";
+import { getParts, partUsage, type PartRecord } from "@/db/queries/parts";
 import type { BuildAccess, BuildViewer } from "@/lib/builds/access";
 import { collectPartIds } from "@/lib/builds/part-ids";
 import { ApiError } from "@/lib/http/api-error";
@@ -27,6 +27,16 @@ export async function loadRevision({ build, number }: { build: LoadedBuild; numb
   const revision = await getRevision({ buildId: build.id, number: n });
   if (!revision) throw new ApiError("not_found:revision", `This build has no revision ${n}.`, "revision");
   return revision;
+}
+
+/**
+ * How many builds use a part, and the titles of those among them the viewer may see (a
+ * private build of someone else is counted, never named).
+ */
+export async function partUsageFor({ partId, viewer }: { partId: string; viewer: BuildViewer }): Promise<{ count: number; visibleTitles: string[] }> {
+  const usage = await partUsage({ partId });
+  const seen = await Promise.all(usage.slice(0, 20).map((u) => getBuild({ id: u.buildId, viewer })));
+  return { count: usage.length, visibleTitles: seen.flatMap((b) => (b?.access.canView ? [b.title] : [])) };
 }
 
 /** The parts a design refers to that the viewer may see, by id. */

@@ -1,7 +1,8 @@
 import "server-only";
-import { createHash } from "node:crypto";
 import { getCachedResultText, putCachedResult, type RevisionRow } from "@/db/queries/builds";
 import type { PartRecord } from "@/db/queries/parts";
+import { getPreviousResultText, getSnapshot, getSolverChange, putSnapshotOnce, putSolverChange, type SolverChange } from "@/db/queries/snapshots";
+import { figureChanges } from "@/lib/builds/solver-change";
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, resolveBuild } from "@/lib/retrofit";
 import { toPartInput } from "@/server/parts/api";
@@ -20,19 +21,22 @@ export type RevisionSolve = {
   buildId: string;
   revision: number;
   solverVersion: string;
+  /** Set when an older solver gave this revision other figures: its version and what moved. */
+  solverChange: SolverChange | null;
   cached: boolean;
   evaluation: BuildEvaluation;
 };
 
 /**
- * The cache key of a revision's result: the solver version and a fingerprint of the parts
- * as read now (id + last change). A revision is immutable, but a part it names by id can be
- * edited or made private; either gives another key, so a stale answer is never served.
+ * The parts a revision used, as its snapshot keeps them: editing a part in the bin never
+ * moves a saved revision. A revision saved before snapshots were kept gets one now, from the
+ * parts as its owner sees them (the same records its figures were worked out from until now).
  */
-function cacheKey(records: Map<string, PartRecord>): string {
-  const h = createHash("sha256");
-  for (const [id, r] of [...records].sort(([a], [b]) => a.localeCompare(b))) h.update(`${id}@${r.updatedAt.getTime()};`);
-  return `${SOLVER_VERSION}:${h.digest("hex").slice(0, 24)}`;
+export async function revisionPartRecords({ build, revision }: SolveArgs): Promise<Map<string, PartRecord>> {
+  const snapshot = await getSnapshot({ revisionId: revision.id });
+  if (snapshot) return snapshot;
+  const records = await loadDesignParts({ design: revision.design, viewer: { id: build.ownerId, role: "maker" } });
+  return putSnapshotOnce({ revisionId: revision.id, records });
 }
 
 /**
@@ -91,22 +95,40 @@ function roundedForDisplay(value: unknown): unknown {
  * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
  */
 async function solveToText({ build, revision }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation }> {
-  // Parts are read as the build's owner sees them: whoever may see the build (a reviewer,
-  // a class member, a share link) gets the same Budget as its owner, though the owner's
+  // The snapshot holds the parts as the owner saw them: whoever may see the build (a
+  // reviewer, a class member, a share link) gets the owner's Budget, though the owner's
   // private part records themselves stay private (only their effect on the figures shows).
-  const records = await loadDesignParts({ design: revision.design, viewer: { id: build.ownerId, role: "maker" } });
-  const key = cacheKey(records);
+  const records = await revisionPartRecords({ build, revision });
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
-  const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: key });
-  if (hit !== undefined) return { head: { ...base, cached: true }, evaluationJson: hit };
+  const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: SOLVER_VERSION });
+  if (hit !== undefined) {
+    const solverChange = await getSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
+    return { head: { ...base, solverChange, cached: true }, evaluationJson: hit };
+  }
   const evaluation = evaluateRevision({ design: revision.design, records });
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
+  const solverChange = await noteSolverChange(revision.id, evaluation);
   // Written after the answer leaves: a slow or failed cache write costs the next caller a
   // recomputation, never this caller time or an error.
-  void putCachedResult({ revisionId: revision.id, cacheKey: key, resultJson: evaluationJson }).catch((e: unknown) => {
+  void putCachedResult({ revisionId: revision.id, cacheKey: SOLVER_VERSION, resultJson: evaluationJson }).catch((e: unknown) => {
     console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
   });
-  return { head: { ...base, cached: false }, evaluationJson, evaluation };
+  return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation };
+}
+
+/** Compares a fresh result with the last one an older solver gave, and keeps what moved. */
+async function noteSolverChange(revisionId: string, evaluation: BuildEvaluation): Promise<SolverChange | null> {
+  const previous = await getPreviousResultText({ revisionId, solverVersion: SOLVER_VERSION });
+  if (!previous) return null;
+  let before: unknown;
+  try {
+    before = JSON.parse(previous.text);
+  } catch {
+    return null;
+  }
+  const change: SolverChange = { previousVersion: previous.solverVersion, changes: figureChanges(before, evaluation) };
+  await putSolverChange({ revisionId, solverVersion: SOLVER_VERSION, change });
+  return change;
 }
 
 export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {

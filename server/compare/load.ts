@@ -2,7 +2,7 @@ import "server-only";
 import type { RevisionRow } from "@/db/queries/builds";
 import { getComparison } from "@/db/queries/comparisons";
 import type { BuildViewer } from "@/lib/builds/access";
-import { designDiff, figureRows, ladders, warmupSeries } from "@/lib/compare";
+import { designDiff, figureRows, ladders, warmupSeries, withTraces } from "@/lib/compare";
 import { ApiError } from "@/lib/http/api-error";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import { buildDesignSchema, type BuildDesign } from "@/lib/retrofit";
@@ -70,7 +70,7 @@ export async function compareItems({ items, viewer }: { items: readonly CompareI
       problems: (evals[i]?.problems ?? []).filter((p) => p.severity !== "info"),
     })),
     differences: designDiff(designs, (id) => names.get(id)),
-    figures: figureRows(evals),
+    figures: withTraces(figureRows(evals), evals),
     warmups: warmupSeries(evals),
     ladders: scenarioIds.map((id) => ({ scenarioId: id, scenarioName: evals.flatMap((e) => e.scenarios).find((s) => s.id === id)?.name ?? id, columns: ladders(evals, id) })),
   };

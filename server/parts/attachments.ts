@@ -2,6 +2,7 @@ import "server-only";
 import { type AttachmentRecord, getAttachment } from "@/db/queries/part-attachments";
 import { ApiError } from "@/lib/http/api-error";
 import { MAX_ATTACHMENT_BYTES } from "@/lib/attachments";
+import { readBody, type RouteOptions } from "@/server/route";
 import type { PartViewer } from "@/lib/parts";
 import { editablePart, visiblePart } from "./api";
 
@@ -26,40 +27,27 @@ async function attachmentOf(partId: string, id: string): Promise<AttachmentRecor
 // Room for the multipart boundaries and headers around a file at the limit.
 const FORM_OVERHEAD_BYTES = 64 * 1024;
 
-function tooLarge(field: string): ApiError {
-  return new ApiError(`payload_too_large:${field}`, `${field}: the upload is over the 10 MB limit`, field);
+/** The request pipeline's options for a route that takes one uploaded file in `field`. */
+export function uploadLimit(field: string): RouteOptions {
+  return {
+    maxBodyBytes: MAX_ATTACHMENT_BYTES + FORM_OVERHEAD_BYTES,
+    tooLarge: { field, message: `${field}: the upload is over the 10 MB limit` },
+  };
 }
 
 /**
- * Reads a multipart body with one file, stopping as soon as it passes the limit so an
- * oversized upload is never held in memory, and returns the file in `field`.
+ * Reads a multipart body with one file (through the pipeline's streamed limit, so an
+ * oversized upload is never held in memory) and returns the file in `field`.
  */
 export async function readUpload(request: Request, field: string): Promise<File> {
-  const limit = MAX_ATTACHMENT_BYTES + FORM_OVERHEAD_BYTES;
   const type = request.headers.get("content-type") ?? "";
   if (!type.toLowerCase().startsWith("multipart/form-data")) {
     throw new ApiError(`bad_request:${field}`, `${field}: send the file as multipart/form-data in a field named "${field}"`, field);
   }
-  const declared = Number(request.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > limit) throw tooLarge(field);
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  if (request.body) {
-    const reader = request.body.getReader();
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      size += value.byteLength;
-      if (size > limit) {
-        await reader.cancel();
-        throw tooLarge(field);
-      }
-      chunks.push(value);
-    }
-  }
+  const bytes = await readBody(request);
   let form: FormData;
   try {
-    form = await new Response(Buffer.concat(chunks), { headers: { "content-type": type } }).formData();
+    form = await new Response(bytes, { headers: { "content-type": type } }).formData();
   } catch {
     throw new ApiError(`bad_request:${field}`, `${field}: the form data could not be read`, field);
   }
@@ -81,9 +69,18 @@ export function attachmentJson(row: AttachmentRecord) {
 
 export type AttachmentJson = ReturnType<typeof attachmentJson>;
 
-/** PDFs and images open in the browser; the name is ASCII-only plus an RFC 6266 UTF-8 form. */
+/**
+ * Every stored file downloads (Content-Disposition: attachment), except an image, which is
+ * shown inline under a sandboxing policy that lets it be nothing but an image.
+ */
 export function contentDisposition(filename: string, contentType: string): string {
-  const inline = contentType === "application/pdf" || contentType.startsWith("image/");
   const ascii = filename.replace(/[^\x20-\x7e]/g, "_").replace(/["\\]/g, "_");
-  return `${inline ? "inline" : "attachment"}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(filename)}`;
+  return `${isInlineImage(contentType) ? "inline" : "attachment"}; filename="${ascii}"; filename*=UTF-8''${encodeURIComponent(filename)}`;
 }
+
+export function isInlineImage(contentType: string): boolean {
+  return contentType === "image/png" || contentType === "image/jpeg" || contentType === "image/webp";
+}
+
+/** The policy a stored file is served under: no scripts, no forms, no plugins, no framing. */
+export const ATTACHMENT_CSP = "default-src 'none'; img-src 'self'; style-src 'unsafe-inline'; sandbox; frame-ancestors 'none'";

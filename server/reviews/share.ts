@@ -3,6 +3,7 @@ import { getBuild, getRevision } from "@/db/queries/builds";
 import { findShareLinkByHash } from "@/db/queries/shares";
 import { getUserById } from "@/db/queries/users";
 import { ApiError } from "@/lib/http/api-error";
+import { withholdUnpublished } from "@/lib/reviews/publish";
 import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
 import type { BuildEvaluation } from "@/lib/retrofit";
 import { loadDesignParts } from "@/server/builds/load";
@@ -36,15 +37,18 @@ export async function openShare({ token }: { token: string }): Promise<SharedBud
   const build = owner ? await getBuild({ id: link.buildId, viewer: { id: owner.id, role: owner.role } }) : undefined;
   const revision = build ? await getRevision({ buildId: build.id, number: link.revisionNumber }) : undefined;
   if (!owner || !build || !revision) throw unknown;
-  const parts = await loadDesignParts({ design: revision.design, viewer: null });
+  // The parts as the owner sees them: the evaluation may quote any of these; only public
+  // ones are published through a link, the rest are withheld from what it carries.
+  const parts = await loadDesignParts({ design: revision.design, viewer: { id: owner.id, role: owner.role } });
+  const unpublished = [...parts.values()].filter((p) => p.visibility !== "public").map((p) => ({ id: p.id, name: p.name }));
   const solved = await solveRevision({ build, revision });
   return {
     build: { id: build.id, title: build.title, summary: build.summary, ownerName: build.ownerName, variantNote: build.variantNote },
-    revision: { number: revision.number, note: revision.note, createdAt: revision.createdAt, design: revision.design },
+    revision: { number: revision.number, note: withholdUnpublished(revision.note, unpublished), createdAt: revision.createdAt, design: revision.design },
     parts: [...parts.values()]
       .filter((p) => p.visibility === "public")
       .map((p) => ({ id: p.id, kind: p.kind, name: p.name, provenance: p.provenance, specs: p.specs, costEur: p.costEur })),
     expiresAt: link.expiresAt,
-    result: solved.evaluation,
+    result: withholdUnpublished(solved.evaluation, unpublished),
   };
 }

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { Client, signedIn, uniqueEmail } from "../support/http";
 import { withTestDb } from "../support/db";
-import { minimalPdf } from "../support/pdf";
+import { minimalPdf, minimalPng } from "../support/pdf";
 
 let owner: Client;
 let other: Client;
@@ -120,8 +120,7 @@ describe("attachments: refused uploads write nothing", () => {
   });
 
   it("accepts a PNG and refuses a form without a file", async () => {
-    const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 13]);
-    const r = await owner.send("POST", `/api/v1/parts/${sharedId}/attachments`, form(png, "photo.pdf"));
+    const r = await owner.send("POST", `/api/v1/parts/${sharedId}/attachments`, form(minimalPng(), "photo.pdf"));
     expect(r.status).toBe(201);
     expect((r.body.attachment as AttachmentJson).filename).toBe("photo.png");
     const empty = await owner.send("POST", `/api/v1/parts/${sharedId}/attachments`, new FormData());
@@ -130,6 +129,33 @@ describe("attachments: refused uploads write nothing", () => {
     const json = await owner.post(`/api/v1/parts/${sharedId}/attachments`, { file: "x" });
     expect(json.status).toBe(400);
     expect(json.body.error?.path).toBe("file");
+  });
+
+  it("refuses polyglots: PDF or JPEG magic that goes on as a web page, and a cut-off PDF", async () => {
+    const html = "<!DOCTYPE html><html><body><script>alert(document.cookie)</script></body></html>";
+    const pdfThenHtml = new TextEncoder().encode(`%PDF-1.4\n${html}\n%%EOF\n`);
+    const jpegThenHtml = new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 0, 16, ...new TextEncoder().encode(`JFIF\0${html}`), 0xff, 0xd9]);
+    const pdfWithHtml = new Uint8Array([...minimalPdf().slice(0, 20), ...new TextEncoder().encode(`% ${html}\n`), ...minimalPdf().slice(20)]);
+    const cut = minimalPdf().slice(0, 60);
+    const before = await attachmentRows(sharedId);
+    for (const [bytes, name] of [[pdfThenHtml, "a.pdf"], [jpegThenHtml, "b.jpg"], [pdfWithHtml, "c.pdf"], [cut, "d.pdf"]] as const) {
+      const r = await owner.send("POST", `/api/v1/parts/${sharedId}/attachments`, form(bytes, name));
+      expect(r.status, name).toBe(400);
+      expect(r.body.error?.path).toBe("file");
+    }
+    expect(await attachmentRows(sharedId)).toBe(before);
+  });
+
+  it("serves a PDF as a download and an image inline under a sandboxing policy", async () => {
+    const pdf = await owner.send("POST", `/api/v1/parts/${sharedId}/attachments`, form(minimalPdf(), "sheet.pdf"));
+    const png = await owner.send("POST", `/api/v1/parts/${sharedId}/attachments`, form(minimalPng(), "photo.png", "image/png"));
+    const pdfRes = await owner.fetchRaw("GET", (pdf.body.attachment as AttachmentJson).url);
+    expect(pdfRes.headers.get("content-disposition")).toMatch(/^attachment;/);
+    const pngRes = await owner.fetchRaw("GET", (png.body.attachment as AttachmentJson).url);
+    expect(pngRes.headers.get("content-disposition")).toMatch(/^inline;/);
+    expect(pngRes.headers.get("content-security-policy")).toContain("sandbox");
+    expect(pngRes.headers.get("content-security-policy")).toContain("default-src 'none'");
+    expect(pngRes.headers.get("x-content-type-options")).toBe("nosniff");
   });
 
   it("deleting the part removes its attachments", async () => {

@@ -172,10 +172,15 @@ describe("parts: who sees what", () => {
     expect(kind.body.error?.path).toBe("kind");
   });
 
-  it("only an admin marks a part verified", async () => {
-    expect((await owner.patch(`/api/v1/parts/${publicId}/verify`, { verified: true })).status).toBe(403);
-    expect((await anonymous.patch(`/api/v1/parts/${publicId}/verify`, { verified: true })).status).toBe(401);
-    const r = await admin.patch(`/api/v1/parts/${publicId}/verify`, { verified: true });
+  it("only an admin marks a part verified, and only with what it was checked against", async () => {
+    const check = { verified: true, against: "Tape maker's datasheet, 2022 edition, page 2" };
+    expect((await owner.patch(`/api/v1/parts/${publicId}/verify`, check)).status).toBe(403);
+    expect((await anonymous.patch(`/api/v1/parts/${publicId}/verify`, check)).status).toBe(401);
+    // The strap is an estimate: there is nothing to check it against until it cites a datasheet.
+    expect((await admin.patch(`/api/v1/parts/${publicId}/verify`, check)).status).toBe(400);
+    expect((await owner.patch(`/api/v1/parts/${publicId}`, { provenance: "datasheet", provenanceNote: "tape maker's datasheet" })).status).toBe(200);
+    expect((await admin.patch(`/api/v1/parts/${publicId}/verify`, { verified: true })).body.error?.path).toBe("against");
+    const r = await admin.patch(`/api/v1/parts/${publicId}/verify`, check);
     expect(r.status).toBe(200);
     expect((r.body.part as PartJson).verified).toBe(true);
     expect((await admin.patch(`/api/v1/parts/${publicId}/verify`, { verified: "yes" })).body.error?.path).toBe("verified");

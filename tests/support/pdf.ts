@@ -19,3 +19,8 @@ export function minimalPdf(): Uint8Array {
   body += `trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
   return new TextEncoder().encode(body);
 }
+
+/** A valid 1×1 greyscale PNG (ISO/IEC 15948: signature, IHDR, IDAT, IEND), for image uploads. */
+export function minimalPng(): Uint8Array {
+  return new Uint8Array(Buffer.from("iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAQAAAC1HAwCAAAAC0lEQVR42mNkYAAAAAYAAjCB0C8AAAAASUVORK5CYII=", "base64"));
+}

@@ -6,13 +6,15 @@ import type { JsonObject } from "@/components/builds/design-state";
 import { HeatPathEditor } from "@/components/builds/heat-path-editor";
 import { MembersPanel } from "@/components/builds/members-panel";
 import { HeatPathPreview } from "@/components/budget/heat-path-preview";
+import { PartsChangedNotice } from "@/components/builds/parts-changed-notice";
 import { loadBuildPage } from "@/server/builds/load";
+import { partChangesSince } from "@/server/builds/part-changes";
 
 export const metadata = { title: "Heat path" };
 
 export default async function HeatPathPage({ params }: { params: Promise<{ id: string }> }) {
   const { user, build, revision } = await loadBuildPage(params);
-  const history = await listRevisions({ buildId: build.id });
+  const [history, partChanges] = await Promise.all([listRevisions({ buildId: build.id }), partChangesSince({ build, revision })]);
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_16rem]">
       <div className="space-y-4">
@@ -22,6 +24,7 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
         </div>
         {build.variantNote && <p className="text-sm">Variant: <span className="rounded bg-ember-soft px-1.5 text-ember">{build.variantNote}</span></p>}
         <BuildNav buildId={build.id} current="heat-path" />
+        <PartsChangedNotice buildId={build.id} revision={revision.number} design={revision.design} changes={partChanges} canEdit={build.access.canEdit} />
         <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
         <section className="rounded-lg border border-line bg-white/60 p-4">
           <h2 className="mb-2 font-semibold">What the build means thermally</h2>

@@ -6,7 +6,9 @@ import { PartActions } from "@/components/parts/part-actions";
 import { PartFields } from "@/components/parts/part-fields";
 import type { CurveKind } from "@/lib/curves";
 import { kindDefinition } from "@/lib/parts";
+import { getPartVerification } from "@/db/queries/part-verifications";
 import { loadPartPage } from "@/server/parts/api";
+import { formatMoney } from "@/lib/units/figures";
 
 export const metadata = { title: "Part" };
 
@@ -14,6 +16,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const { user, id, part } = await loadPartPage(params);
   const prefs = { length: user.lengthUnits, temperature: user.temperatureUnit } as const;
   const def = kindDefinition(part.kind);
+  const verification = part.verified ? await getPartVerification({ partId: part.id }) : null;
   const curves = (def.curveKinds as readonly CurveKind[]).flatMap((kind) => {
     const curve = part.curves[kind] as { points: { x: number; y: number }[] } | undefined;
     return curve ? [{ kind, points: curve.points }] : [];
@@ -28,12 +31,19 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
         <p className="flex flex-wrap gap-2 text-xs">
           <span className="rounded bg-ember-soft px-2 py-0.5 text-ember">{PROVENANCE_LABELS[part.provenance]}</span>
           <span className="rounded bg-paper-deep px-2 py-0.5">{VISIBILITY_LABELS[part.visibility]}</span>
-          {part.verified && <span className="rounded bg-ok/10 px-2 py-0.5 text-ok">Verified</span>}
           <span className="text-ink-soft">by {part.owner.displayName}</span>
-          {part.costEur !== null && <span className="text-ink-soft">· {part.costEur.toFixed(2)} EUR</span>}
+          {part.costEur !== null && <span className="text-ink-soft">· {formatMoney(part.costEur)}</span>}
         </p>
         {part.provenanceNote && <p className="max-w-3xl text-sm text-ink-soft">Source: {part.provenanceNote}</p>}
-        <PartActions id={part.id} name={part.name} canEdit={part.canEdit} isAdmin={user.role === "admin"} verified={part.verified} />
+        {verification ? (
+          <p className="max-w-3xl text-sm" data-testid="verification">
+            <span className="mr-2 rounded bg-ok/10 px-2 py-0.5 text-xs text-ok">Verified</span>
+            {`Verified against ${verification.against}${verification.attachment ? ` (attached: ${verification.attachment.filename})` : ""}, by ${verification.byName} on ${verification.at.toISOString().slice(0, 10)}.`}
+          </p>
+        ) : (
+          part.provenance === "estimate" && <p className="max-w-3xl text-xs text-ink-soft">An estimate: nobody has checked these values against a datasheet or a measurement.</p>
+        )}
+        <PartActions id={part.id} name={part.name} canEdit={part.canEdit} isAdmin={user.role === "admin"} verified={part.verified} provenance={part.provenance} />
       </header>
       <section aria-labelledby="figures-heading" className="space-y-3">
         <h2 id="figures-heading" className="text-lg font-medium">Figures</h2>

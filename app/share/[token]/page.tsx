@@ -4,6 +4,7 @@ import { designDiff } from "@/lib/compare";
 import { ApiError } from "@/lib/http/api-error";
 import { buildDesignSchema } from "@/lib/retrofit";
 import { openShare } from "@/server/reviews/share";
+import { formatMoney } from "@/lib/units/figures";
 
 export const metadata: Metadata = { title: "Shared budget", robots: { index: false, follow: false } };
 
@@ -64,7 +65,7 @@ export default async function SharedPage({ params }: { params: Promise<{ token: 
                   <td className="py-1 pr-3">{p.kind}</td>
                   <td className="py-1 pr-3">{p.name}</td>
                   <td className="py-1 pr-3">{p.provenance}</td>
-                  <td className="py-1">{p.costEur === null ? "–" : `€${p.costEur.toFixed(2)}`}</td>
+                  <td className="py-1">{formatMoney(p.costEur)}</td>
                 </tr>
               ))}
             </tbody>

@@ -3,8 +3,8 @@ import { describe, expect, it } from "vitest";
 import { POST as steady } from "@/app/api/v1/solve/steady/route";
 import { POST as transient } from "@/app/api/v1/solve/transient/route";
 
-const post = (handler: (r: Request) => Promise<Response>, body: string, path: string) =>
-  handler(new Request(`http://127.0.0.1:3000/api/v1/solve/${path}`, { method: "POST", headers: { "content-type": "application/json" }, body }));
+const post = (handler: (r: Request, context: unknown) => Promise<Response>, body: string, path: string) =>
+  handler(new Request(`http://127.0.0.1:3000/api/v1/solve/${path}`, { method: "POST", headers: { "content-type": "application/json" }, body }), {});
 
 const good = {
   ambientC: 25,
@@ -47,8 +47,8 @@ describe("POST /api/v1/solve/steady", () => {
     expect(Math.abs(body.energyBalanceW as number)).toBeLessThan(7e-6);
   });
 
-  it("bad JSON is 400 bad_request:json", async () => {
-    await expectError(await post(steady, "{nodes:", "steady"), 400, "bad_request:json", "");
+  it("bad JSON is 400 naming the subject", async () => {
+    await expectError(await post(steady, "{nodes:", "steady"), 400, "bad_request:network", "");
   });
 
   it("a body over 1 MB is 413", async () => {

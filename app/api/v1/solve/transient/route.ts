@@ -1,9 +1,13 @@
 import { solveTransient, transientRequestSchema } from "@/lib/thermal";
-import { handleSolve } from "../_shared/handle-solve";
+import { json, readJson, route } from "@/server/route";
 
 export const runtime = "nodejs";
 
-/** POST `{ network, durationS, stepS, initialC?, thresholds? }`; answers the warm-up curves. */
-export async function POST(request: Request): Promise<Response> {
-  return handleSolve(request, transientRequestSchema, "transient", ({ network, ...options }) => solveTransient(network, options));
-}
+/** POST `{ network, durationS, stepS, initialC?, thresholds? }`; answers the warm-up curves. Computes only, so any origin may call it. */
+export const POST = route(
+  async (request) => {
+    const { network, ...options } = await readJson(request, transientRequestSchema, "transient");
+    return json(solveTransient(network, options));
+  },
+  { stateless: true },
+);

@@ -1,5 +1,5 @@
 import { createBuild } from "@/db/queries/builds";
-import { forkBuildSchema } from "@/lib/builds/api-schemas";
+import { forkBuildSchema, MAX_TITLE_CHARS } from "@/lib/builds/api-schemas";
 import { collectPartIds } from "@/lib/builds/part-ids";
 import { requireUser } from "@/server/auth/session";
 import { loadBuild, loadDesignParts, loadRevision } from "@/server/builds/load";
@@ -17,9 +17,17 @@ export const POST = route<{ params: Promise<{ id: string }> }>(async (request, {
   const hidden = partIds.filter((id) => !visible.has(id));
   if (hidden.length) throw new ApiError("forbidden:part", `This build uses parts that are private to their owner (${hidden.join(", ")}); it cannot be copied.`);
   const isVariant = input.variantNote !== undefined && build.access.isOwner;
+  const title = input.title ?? (isVariant ? `${build.title} — ${input.variantNote}` : `${build.title} (copy)`);
+  if (title.length > MAX_TITLE_CHARS) {
+    throw new ApiError(
+      "bad_request:fork",
+      `title: the copy's title would be "${title.slice(0, 40)}…", ${title.length} characters; titles hold at most ${MAX_TITLE_CHARS}. Give the copy a shorter title.`,
+      "title",
+    );
+  }
   const created = await createBuild({
     ownerId: user.id,
-    title: input.title ?? (isVariant ? `${build.title} — ${input.variantNote}` : `${build.title} (copy)`),
+    title,
     summary: build.summary,
     visibility: "private",
     design: revision.design,

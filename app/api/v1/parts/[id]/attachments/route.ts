@@ -1,8 +1,8 @@
 import { createAttachment, listAttachments } from "@/db/queries/part-attachments";
 import { ApiError } from "@/lib/http/api-error";
-import { ATTACHMENT_TYPES, describeRefusedType, MAX_ATTACHMENT_BYTES, sanitiseFilename, sniffAttachmentType } from "@/lib/attachments";
+import { ATTACHMENT_TYPES, inspectAttachment, MAX_ATTACHMENT_BYTES, sanitiseFilename } from "@/lib/attachments";
 import { requireUser } from "@/server/auth/session";
-import { attachmentJson, readUpload } from "@/server/parts/attachments";
+import { attachmentJson, readUpload, uploadLimit } from "@/server/parts/attachments";
 import { currentViewer, editablePart, viewerOf, visiblePart } from "@/server/parts/api";
 import { json, route } from "@/server/route";
 import { newObjectKey, putObject } from "@/server/storage";
@@ -26,8 +26,9 @@ export const POST = route<Context>(async (request, { params }) => {
   if (bytes.byteLength > MAX_ATTACHMENT_BYTES) {
     throw new ApiError("payload_too_large:file", `file: ${file.name || "the file"} is over the 10 MB limit`, "file");
   }
-  const type = sniffAttachmentType(bytes);
-  if (!type) throw new ApiError("bad_request:file", `file: ${describeRefusedType(bytes)}`, "file");
+  const inspection = await inspectAttachment(bytes);
+  if (!inspection.ok) throw new ApiError("bad_request:file", `file: ${inspection.message}`, "file");
+  const { type } = inspection;
   const { contentType } = ATTACHMENT_TYPES[type];
   const key = newObjectKey(id);
   await putObject({ key, body: bytes, contentType });
@@ -40,4 +41,4 @@ export const POST = route<Context>(async (request, { params }) => {
     sizeBytes: bytes.byteLength,
   });
   return json({ attachment: attachmentJson(row) }, 201);
-});
+}, uploadLimit("file"));

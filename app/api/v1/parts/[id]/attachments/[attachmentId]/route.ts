@@ -1,7 +1,7 @@
 import { deleteAttachment } from "@/db/queries/part-attachments";
 import { ApiError } from "@/lib/http/api-error";
 import { requireUser } from "@/server/auth/session";
-import { contentDisposition, editableAttachment, visibleAttachment } from "@/server/parts/attachments";
+import { ATTACHMENT_CSP, contentDisposition, editableAttachment, visibleAttachment } from "@/server/parts/attachments";
 import { currentViewer, viewerOf } from "@/server/parts/api";
 import { json, route } from "@/server/route";
 import { deleteObject, getObjectStream } from "@/server/storage";
@@ -19,7 +19,7 @@ export const GET = route<Context>(async (_request, { params }) => {
     "content-disposition": contentDisposition(row.filename, row.contentType),
     "x-content-type-options": "nosniff",
     // A stored file is data, never a page: no scripts, no forms, even if a viewer opens it inline.
-    "content-security-policy": "sandbox",
+    "content-security-policy": ATTACHMENT_CSP,
     "cache-control": "private, no-store",
   };
   if (object.length !== undefined) headers["content-length"] = String(object.length);

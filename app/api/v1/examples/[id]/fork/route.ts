@@ -1,0 +1,20 @@
+import { requireUser } from "@/server/auth/session";
+import { compareHref, copyRevision } from "@/server/classes/copy";
+import { solveExample } from "@/server/classes/examples";
+import { loadExample } from "@/server/classes/load";
+import { json, route } from "@/server/route";
+
+/** One click: the example's revision becomes a build of the caller's, and Side by side lines them up. */
+export const POST = route<{ params: Promise<{ id: string }> }>(async (_request, { params }) => {
+  const user = await requireUser();
+  const { example } = await loadExample({ id: (await params).id, viewer: user });
+  const { build, revision } = await solveExample(example);
+  const created = await copyRevision({
+    revision,
+    user,
+    title: `${example.title} (my fork)`,
+    summary: build.summary,
+    note: `Forked from the worked example "${example.title}" (revision ${revision.number} of "${build.title}")`,
+  });
+  return json({ build: created, compareHref: compareHref({ buildId: build.id, revision: revision.number }, { buildId: created.id, revision: created.revision }) }, 201);
+});

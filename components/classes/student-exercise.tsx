@@ -1,0 +1,37 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { errorMessage, useClassAction } from "./use-class-action";
+
+/** A student's side of an exercise: start (own copy), open it, hand in its current revision. */
+export function StudentExercise({ exerciseId, myCopy, currentRevision, dueAt, archived }: { exerciseId: string; myCopy: string | null; currentRevision: number | null; dueAt: string; archived: boolean }) {
+  const router = useRouter();
+  const start = useClassAction<{ build: { id: string } }>(`/api/v1/exercises/${exerciseId}/start`, "POST", { refresh: false });
+  const handin = useClassAction(`/api/v1/exercises/${exerciseId}/handins`);
+  const overdue = new Date(dueAt).getTime() < Date.now();
+  if (!myCopy) {
+    return (
+      <div className="no-print space-y-1 text-sm">
+        <button type="button" disabled={archived || start.isPending} onClick={() => start.mutate(undefined, { onSuccess: (r) => router.push(`/builds/${r.build.id}`) })} className="rounded bg-ember px-3 py-1 text-white disabled:opacity-40">
+          Start (make my own copy)
+        </button>
+        {start.isError && <p role="alert" className="text-over">{errorMessage(start.error)}</p>}
+      </div>
+    );
+  }
+  return (
+    <div className="no-print space-y-1 text-sm">
+      <div className="flex flex-wrap items-center gap-2">
+        <Link href={`/builds/${myCopy}`} className="rounded border border-line px-3 py-1 hover:border-ember">Open my copy</Link>
+        <Link href={`/builds/${myCopy}/budget`} className="rounded border border-line px-3 py-1 hover:border-ember">Its Budget</Link>
+        <button type="button" disabled={archived || handin.isPending} onClick={() => handin.mutate({ buildId: myCopy })} className="rounded bg-ember px-3 py-1 text-white disabled:opacity-40">
+          Hand in revision {currentRevision ?? ""}
+        </button>
+      </div>
+      <p className="text-xs text-ink-soft">{overdue ? "The due date has passed: a hand-in now is marked late." : "You may hand in again before the due date; the last one counts."}</p>
+      {handin.isSuccess && <p role="status" className="text-ok">Handed in.</p>}
+      {handin.isError && <p role="alert" className="text-over">{errorMessage(handin.error)}</p>}
+    </div>
+  );
+}

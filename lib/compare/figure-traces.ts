@@ -1,0 +1,57 @@
+import type { BuildEvaluation } from "@/lib/retrofit";
+import { driveTrace, limitTimeTrace, nodeBalanceTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
+import type { Trace } from "@/lib/thermal";
+import type { FigureRow } from "./figures";
+
+/**
+ * The derivation behind each figure of Side by side, per column: a place's temperature
+ * opens to its heat flows, a headroom to its subtraction, a runtime to its division, and so on.
+ * Figures nothing derives (a verdict) have none.
+ */
+export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildEvaluation[]): (Trace | null)[] {
+  // "mode:high/temperature:driver board": the scenario, then what (a place may hold a "/").
+  const slash = row.key.indexOf("/");
+  const scope = slash < 0 ? row.key : row.key.slice(0, slash);
+  const what = slash < 0 ? "" : row.key.slice(slash + 1);
+  return evals.map((e) => {
+    if (scope === "build") {
+      const el = e.electrical;
+      if (what === "capacity") return el.pack?.capacityC.trace ?? null;
+      if (what === "energy") return el.pack?.energyWh.trace ?? null;
+      if (what === "charge-time") return el.charge?.totalHours.trace ?? null;
+      if (what === "charger-heat") return el.charge?.lossW.trace ?? null;
+      return null;
+    }
+    const s = e.scenarios.find((x) => x.id === scope);
+    if (!s) return null;
+    const colon = what.indexOf(":");
+    const kind = colon < 0 ? what : what.slice(0, colon);
+    const arg = colon < 0 ? "" : what.slice(colon + 1);
+    const t = s.thermal;
+    switch (kind) {
+      case "temperature": {
+        const node = t?.nodes.find((n) => n.place === arg);
+        return t && node ? nodeBalanceTrace(t, node.id, s.network?.ambientC ?? 25) : null;
+      }
+      case "headroom":
+        return t?.limits.find((l) => l.id === arg)?.trace ?? null;
+      case "time": {
+        const place = t?.limits.find((l) => l.id === arg)?.place ?? arg;
+        return s.warmup ? limitTimeTrace(s.warmup, arg, place) : null;
+      }
+      case "flux":
+        return s.mode ? totalFluxTrace(s.mode) : null;
+      case "runtime":
+        return s.mode?.runtime?.trace ?? null;
+      case "drive":
+        return s.mode ? driveTrace(s.mode) : null;
+      default:
+        return null;
+    }
+  });
+}
+
+/** Every row with its derivations beside its values. */
+export function withTraces<R extends FigureRow>(rows: readonly R[], evals: readonly BuildEvaluation[]): (R & { traces: (Trace | null)[] })[] {
+  return rows.map((r) => ({ ...r, traces: figureTraces(r, evals) }));
+}

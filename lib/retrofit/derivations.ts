@@ -1,0 +1,132 @@
+import type { Trace } from "@/lib/thermal";
+import type { ModeFigures } from "./scenario-mode";
+import type { ThermalResult, Warmup } from "./scenario";
+import { formatDuration } from "@/lib/units/figures";
+import { q, trace } from "./trace";
+
+/** The ambient node's id in every network (lib/thermal reserves it). */
+const AMBIENT = "ambient";
+
+const BALANCE_SOURCE =
+  'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., §1.3 (conservation of energy) and §3.1.3 (the thermal circuit, q = ΔT/R) — section numbers from memory, check against a copy';
+
+/**
+ * How a place's temperature follows from the heat flows at the solution: every link that
+ * touches the node with the watts it carries and its resistance there, so that
+ * T = T_other + q·R holds for each, and what comes in plus what is made there goes out.
+ * Each link's own trace (formula, inputs, source) is a part of this one.
+ */
+export function nodeBalanceTrace(thermal: Pick<ThermalResult, "nodes" | "links" | "temperaturesC">, nodeId: string, ambientC: number): Trace | null {
+  const node = thermal.nodes.find((n) => n.id === nodeId);
+  const t = thermal.temperaturesC[nodeId];
+  if (!node || t === undefined) return null;
+  const placeOf = (id: string) => (id === AMBIENT ? "ambient air" : (thermal.nodes.find((n) => n.id === id)?.place ?? id));
+  const tempOf = (id: string) => (id === AMBIENT ? ambientC : (thermal.temperaturesC[id] ?? ambientC));
+  const touching = thermal.links.filter((l) => l.from === nodeId || l.to === nodeId);
+  const inputs: Trace["inputs"] = [];
+  const intermediates: Trace["intermediates"] = [];
+  let outW = 0;
+  let inW = 0;
+  touching.forEach((l, i) => {
+    // Watts leaving this node along the link (negative: arriving).
+    const leaving = l.from === nodeId ? l.watts : -l.watts;
+    const other = l.from === nodeId ? l.to : l.from;
+    const k = i + 1;
+    inputs.push(q(`T${k}`, `${placeOf(other)} (other end of: ${l.place})`, tempOf(other), "°C"));
+    inputs.push(q(`R${k}`, `${l.place}, resistance at the solution`, l.kelvinPerWatt, "K/W"));
+    intermediates.push(q(`q${k}`, leaving >= 0 ? `leaves to ${placeOf(other)}` : `arrives from ${placeOf(other)}`, Math.abs(leaving), "W"));
+    if (leaving >= 0) outW += leaving;
+    else inW -= leaving;
+  });
+  const made = outW - inW;
+  intermediates.push(q("q_out", "heat leaving, all links", outW, "W"), q("q_in", "heat arriving, all links", inW, "W"), q("P", "heat made here (q_out − q_in)", Math.abs(made) < 1e-9 ? 0 : made, "W"));
+  return trace({
+    element: "node-balance",
+    formula: `Heat balance at ${node.place}`,
+    equation: touching.length ? `T = T_k + q_k·R_k for each link k; P + Σ q_in = Σ q_out` : "T = T_ambient (no links)",
+    inputs,
+    intermediates,
+    result: q("T", `${node.place} temperature`, t, "°C"),
+    source: BALANCE_SOURCE,
+    notes: [
+      "Each q is the heat the link carries at the solution and R its resistance there (convection and radiation depend on the temperatures reached); every link's own derivation follows.",
+    ],
+    parts: touching.map((l) => l.trace),
+  });
+}
+
+const ADDS = "common practice (power and light of identical emitters driven alike add up)";
+
+/** Drive power into the emitters: N emitters at the power each one takes. */
+export function driveTrace(mode: Pick<ModeFigures, "driveW" | "emitterPower">): Trace {
+  const one = mode.emitterPower.value ?? 0;
+  const n = one > 0 ? Math.round(mode.driveW / one) : 0;
+  return trace({
+    element: "drive",
+    formula: "Electrical power into the emitters",
+    equation: "P_drive = N·P_emitter",
+    inputs: [q("N", "emitters", n, "1"), q("P_emitter", "power of one emitter", one, "W")],
+    result: q("P_drive", "drive power", mode.driveW, "W"),
+    source: ADDS,
+    parts: [mode.emitterPower.trace],
+  });
+}
+
+/** Light of all emitters at their operating junction temperature. */
+export function totalFluxTrace(mode: Pick<ModeFigures, "totalFluxLm" | "fluxPerEmitter">): Trace | null {
+  if (mode.totalFluxLm === null || !mode.fluxPerEmitter || mode.fluxPerEmitter.value === null || mode.fluxPerEmitter.value <= 0) return null;
+  const one = mode.fluxPerEmitter.value;
+  return trace({
+    element: "flux",
+    formula: "Light of every emitter, hot",
+    equation: "Φ = N·Φ_emitter",
+    inputs: [q("N", "emitters", Math.round(mode.totalFluxLm / one), "1"), q("Φ_emitter", "flux of one emitter at its junction temperature", one, "lm")],
+    result: q("Φ", "total flux", mode.totalFluxLm, "lm"),
+    source: ADDS,
+    parts: [mode.fluxPerEmitter.trace],
+  });
+}
+
+const WARMUP_SOURCE =
+  'the warm-up from ambient, the heat network\'s transient solved step by step (implicit Euler); method as in Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., §5.10 (finite-difference transient) — section from memory, check against a copy';
+
+/** When a place first reaches its limit in the warm-up (or that it does not within it). */
+export function limitTimeTrace(w: Pick<Warmup, "durationS" | "crossings">, limitId: string, place: string): Trace | null {
+  const c = w.crossings.find((x) => x.limitId === limitId);
+  if (!c) return null;
+  return trace({
+    element: "limit-time",
+    formula: `Time for ${place} to reach its limit`,
+    equation: "t: T(t) = T_limit, T(0) = T_ambient",
+    inputs: [q("T_limit", `${place} limit`, c.limitC, "°C"), q("t_run", "length of the warm-up worked out", w.durationS, "s")],
+    result: q("t", "time to the limit", c.timeS ?? w.durationS, "s"),
+    source: WARMUP_SOURCE,
+    notes: c.timeS === null ? [`Not reached within the warm-up (${formatDuration(w.durationS)}).`] : [],
+  });
+}
+
+/** The largest current any mode draws from the pack. */
+export function peakPackCurrentTrace(modes: readonly { name: string; packCurrentA: number | null }[]): Trace | null {
+  const drawn = modes.filter((m): m is { name: string; packCurrentA: number } => m.packCurrentA !== null);
+  if (drawn.length === 0) return null;
+  return trace({
+    element: "peak-current",
+    formula: "Largest pack current of any mode",
+    equation: "I_peak = max(I_mode)",
+    inputs: drawn.map((m, i) => q(`I${i + 1}`, `pack current in mode "${m.name}"`, m.packCurrentA, "A")),
+    result: q("I_peak", "peak pack current", Math.max(...drawn.map((m) => m.packCurrentA)), "A"),
+    source: "common practice (the protection must carry the heaviest mode's draw)",
+  });
+}
+
+/** A figure taken as the part's author entered it (a rating, a trip current). */
+export function enteredTrace(what: string, partName: string, value: number, unit: string): Trace {
+  return trace({
+    element: "entered",
+    formula: what,
+    equation: `${what} = part rating`,
+    inputs: [],
+    result: q("x", what, value, unit),
+    source: `as entered by the part's author: ${partName}`,
+  });
+}

@@ -34,6 +34,7 @@ export function partFromFit(input: { name: string; visibility: "private" | "shar
       ratedAirflow: run.air === "still" ? "natural" : "forced",
       ratedPowerW: fit.heatW,
       ratedAmbientC: fit.ambientC,
+      heatCapacityJPerK: c.value,
       ...(run.conditions.material !== undefined ? { material: run.conditions.material } : {}),
       ...(run.conditions.finish !== undefined ? { finish: run.conditions.finish } : {}),
       ...(run.conditions.massKg !== undefined ? { massKg: run.conditions.massKg } : {}),

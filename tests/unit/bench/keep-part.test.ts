@@ -21,6 +21,9 @@ describe("keeping a fit as a heatsink part", () => {
     expect(part.specs.ratedAmbientC).toBeCloseTo(22, 9);
     expect(part.specs.ratedAirflow).toBe("natural");
     expect(part.specs.massKg).toBeCloseTo(0.1, 12);
+    // The fitted capacity goes with the part (here from the mass: 0.1 kg × 900 J/(kg·K) of 6063).
+    expect(part.specs.heatCapacityJPerK).toBeCloseTo(fit.heatCapacityJPerK.value, 9);
+    expect(part.specs.heatCapacityJPerK).toBeGreaterThan(80);
     expect(part.provenanceNote).toMatch(/^Measured: fitted from the bench run “Salvaged sink” of 2026-11-30 at 7\.00 W of heat, 22\.0 °C ambient, upright, still air\. R = \d\.\d\d K\/W \(95 % interval \d\.\d\d–\d\.\d\d K\/W\); heat capacity 90\.\d J\/K \(from the mass\)/);
   });
 });

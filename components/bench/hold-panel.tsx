@@ -2,6 +2,7 @@
 
 import Link from "next/link";
 import type { BuildHold } from "@/server/bench/hold";
+import { CalibratePanel } from "./calibrate-panel";
 import { FitChart, type ChartSeries } from "./fit-chart";
 
 /** A difference with its sign, never "−0.0". */
@@ -11,7 +12,7 @@ function signedK(x: number): string {
 }
 
 /** On the Budget: the measured warm-up of the finished lamp against the model's, place by place. */
-export function HoldPanel({ hold }: { hold: BuildHold }) {
+export function HoldPanel({ hold, calibrate }: { hold: BuildHold; calibrate: { nextRevision: number } | null }) {
   const series: ChartSeries[] = hold.result.places.flatMap((p) => [
     { label: `${p.place}, measured`, kind: "readings" as const, points: p.measured },
     { label: `${p.place}, predicted`, kind: "curve" as const, points: p.predicted },
@@ -33,6 +34,7 @@ export function HoldPanel({ hold }: { hold: BuildHold }) {
         </tbody>
       </table>
       {hold.result.unmatched.length > 0 && <p className="text-xs text-ink-soft">No place in the model for: {hold.result.unmatched.join(", ")}.</p>}
+      {calibrate && <CalibratePanel runId={hold.run.id} nextRevision={calibrate.nextRevision} />}
     </section>
   );
 }

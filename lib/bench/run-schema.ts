@@ -54,3 +54,9 @@ export const keepPartSchema = z.strictObject({
   name: z.string({ error: "required" }).trim().min(1, "give the part a name").max(120, "at most 120 characters"),
   visibility: z.enum(["private", "shared", "public"], { error: "must be private, shared or public" }).default("private"),
 });
+
+/** The body of POST /api/v1/bench/runs/[id]/calibration. */
+export const calibrationRequestSchema = z.strictObject({
+  /** false (the default): work the calibration out and show it; true: save it as a new revision of the build. */
+  save: z.boolean({ error: "must be true or false" }).default(false),
+});

@@ -2,8 +2,8 @@ import "server-only";
 import type { RevisionRow } from "@/db/queries/builds";
 import type { FitResult } from "@/lib/bench/fit";
 import type { BuildViewer } from "@/lib/builds/access";
-import { loadDesignParts, type LoadedBuild } from "@/server/builds/load";
-import { evaluateRevision } from "@/server/builds/solve";
+import type { LoadedBuild } from "@/server/builds/load";
+import { evaluateRevision, revisionPartRecords } from "@/server/builds/solve";
 import { evidenceForPart } from "./load";
 
 export interface MeasuredSinkEffect {
@@ -29,7 +29,8 @@ function heatsinkPartId(design: unknown): string | undefined {
 export async function measuredSinkEffect({ build, revision, viewer }: { build: LoadedBuild; revision: RevisionRow; viewer: BuildViewer }): Promise<MeasuredSinkEffect | null> {
   const partId = heatsinkPartId(revision.design);
   if (!partId) return null;
-  const records = await loadDesignParts({ design: revision.design, viewer: { id: build.ownerId, role: "maker" } });
+  // The parts as the revision keeps them (its snapshot), as its Budget is worked out from.
+  const records = await revisionPartRecords({ build, revision });
   const record = records.get(partId);
   if (!record || record.kind !== "heatsink" || record.provenance !== "measured" || record.specs.rating !== "declared") return null;
   const runs = await evidenceForPart({ partId, viewer });

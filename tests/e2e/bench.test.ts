@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ARTEFACTS, launch, signInThroughForm } from "../support/browser";
 import { BASE_URL } from "../support/http";
+import type { BuildEvaluation } from "@/lib/retrofit";
 
 let session: Awaited<ReturnType<typeof launch>>;
 
@@ -74,12 +75,20 @@ describe("Bench runs in chromium", () => {
     await page.screenshot({ path: `${ARTEFACTS}/bench-budget-measured.png`, fullPage: true });
 
     // A warm-up of the finished build, read at the sink and the wall: the Budget overlays it on the prediction.
-    const warmup = [2, 6, 10, 15, 20, 30].flatMap((min) => [
-      { tS: `${min} min`, tempC: 20 + 30 * (1 - Math.exp(-min / 8)), place: "heatsink" },
-      { tS: `${min} min`, tempC: 20 + 12 * (1 - Math.exp(-min / 10)), place: "housing wall" },
-    ]);
+    // The "lamp" is the model's own warm-up of its highest mode running 10 % cooler in its rise
+    // (readings rounded to 0.1 °C, as a thermocouple meter shows them).
+    const solved = (await (await page.request.post(`${BASE_URL}/api/v1/builds/${buildId}/solve`, { data: {}, headers: { origin: BASE_URL } })).json()) as { evaluation: BuildEvaluation };
+    const mode = solved.evaluation.scenarios.filter((s) => s.kind === "mode" && s.warmup).at(-1)!;
+    const ambientC = solved.evaluation.scenarios[0]?.network?.ambientC ?? 20;
+    const warmup = ["heatsink", "housing wall"].flatMap((place) => {
+      const node = mode.thermal!.nodes.find((n) => n.place === place)!;
+      return [2, 6, 10, 15, 20, 30, 40].map((min) => {
+        const i = mode.warmup!.timesS.findIndex((t) => t >= min * 60);
+        return { tS: mode.warmup!.timesS[i]!, tempC: Math.round((ambientC + 0.9 * (mode.warmup!.temperaturesC[node.id]![i]! - ambientC)) * 10) / 10, place };
+      });
+    });
     const held = await page.request.post(`${BASE_URL}/api/v1/bench/runs`, {
-      data: { title: `${title} lantern warm-up`, powered: { kind: "build", buildId }, conditions: { ambientC: 20, volts: "7.4 V", amps: "0.9 A" }, readings: warmup },
+      data: { title: `${title} lantern warm-up`, powered: { kind: "build", buildId, mode: mode.name }, conditions: { ambientC, volts: "7.4 V", amps: "0.9 A" }, readings: warmup },
       headers: { origin: BASE_URL },
     });
     expect(held.status()).toBe(201);
@@ -88,5 +97,19 @@ describe("Bench runs in chromium", () => {
     await expect.poll(() => page.getByTestId("hold-verdict").textContent()).toMatch(/^The model (ran (hotter|colder) than the lamp by \d+\.\d K at the|and the lamp agree)/);
     await page.getByTestId("overlay-chart").waitFor();
     await page.getByTestId("bench-overlay").screenshot({ path: `${ARTEFACTS}/bench-budget-overlay.png` });
+
+    // Calibrate: the sink is measured, so the least certain figure is the inside air's; the lamp ran cooler, so more heat goes through it.
+    await page.getByRole("button", { name: "Calibrate the model to this run" }).click();
+    await page.getByTestId("calibration-result").waitFor({ timeout: 60_000 });
+    const factorText = (await page.getByTestId("calibration-factor").textContent()) ?? "";
+    expect(factorText).toMatch(/× \d\.\d\d \(95 % interval \d\.\d\d–\d\.\d\d\); the misfit falls from \d+\.\d K to \d+\.\d K\./);
+    expect(await page.getByTestId("calibration-result").textContent()).toMatch(/Least certain figure: the inside air's coefficient\./);
+    expect(Number(/× (\d\.\d\d)/.exec(factorText)?.[1])).toBeGreaterThan(1);
+    await page.getByTestId("bench-overlay").screenshot({ path: `${ARTEFACTS}/bench-calibration.png` });
+    await page.getByRole("button", { name: "Save as revision 2" }).click();
+    await page.getByTestId("calibration-saved").waitFor();
+    await page.getByTestId("calibration-note").waitFor();
+    await expect.poll(() => page.getByText("Budget · revision 2").count()).toBe(1);
+    await page.screenshot({ path: `${ARTEFACTS}/bench-budget-calibrated.png`, fullPage: true });
   });
 });

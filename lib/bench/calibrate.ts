@@ -101,7 +101,7 @@ export function calibrateBuild(input: { build: ResolvedBuild; run: CalibrationRu
   if (!choice) throw new CalibrationError("The build has no housing, so there is no heat path to calibrate.");
   // Any earlier calibration is replaced: the fit starts from the model as it stands without it.
   const { calibration: previous, ...uncalibrated } = input.build;
-  const base: ResolvedBuild = { ...uncalibrated, environment: { ...input.build.environment, ambientC: run.ambientC }, pack: { ...input.build.pack, charger: undefined } };
+  const base: ResolvedBuild = { ...uncalibrated, environment: { ...input.build.environment, ambientC: run.ambientC } };
   const modes = input.build.driver.part?.specs.modes.map((m) => m.name) ?? [];
   const mode = modes.find((m) => run.mode !== undefined && m.toLowerCase() === run.mode.toLowerCase()) ?? modes[modes.length - 1];
   if (!mode) throw new CalibrationError("The build has no driver mode to compare the run with.");

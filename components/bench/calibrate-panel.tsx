@@ -35,7 +35,7 @@ export function CalibratePanel({ runId, nextRevision }: { runId: string; nextRev
             Fitted to this run (mode “{c.mode}”, {c.readingCount} readings at {c.places.join(", ")}): × {f2(c.factor)}
             {c.low !== null && c.high !== null ? ` (95 % interval ${f2(c.low)}–${f2(c.high)})` : " (not pinned down by this run)"}; the misfit falls from {c.rmsBeforeK.toFixed(1)} K to {c.rmsAfterK.toFixed(1)} K.
           </p>
-          <p className="text-ink-soft">Calibrated: {c.verdictAfter}</p>
+          <p className="text-ink-soft">With this factor {c.verdictAfter.charAt(0).toLowerCase()}{c.verdictAfter.slice(1)}</p>
           {c.warnings.map((w) => (
             <p key={w} role="alert" className="text-over">{w}</p>
           ))}

@@ -9,6 +9,8 @@ export interface ChartSeries {
   points: { tS: number; tempC: number }[];
   /** Readings are dots, model curves are lines. */
   kind: "readings" | "curve";
+  /** Colour by this index (so a place's readings and its prediction match); by position when absent. */
+  colour?: number;
 }
 
 /** Readings against time with the fitted (or predicted) warm-up drawn through them. */
@@ -16,8 +18,8 @@ export function FitChart({ series, testId = "bench-chart" }: { series: ChartSeri
   const datasets = series.map((s, i) => ({
     label: s.label,
     data: s.points.map((p) => ({ x: p.tS / 60, y: p.tempC })),
-    borderColor: SERIES_COLOURS[i % SERIES_COLOURS.length],
-    backgroundColor: SERIES_COLOURS[i % SERIES_COLOURS.length],
+    borderColor: SERIES_COLOURS[(s.colour ?? i) % SERIES_COLOURS.length],
+    backgroundColor: SERIES_COLOURS[(s.colour ?? i) % SERIES_COLOURS.length],
     showLine: s.kind === "curve",
     pointRadius: s.kind === "readings" ? 2.5 : 0,
     borderWidth: s.kind === "curve" ? 2 : 0,

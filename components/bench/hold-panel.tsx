@@ -13,9 +13,10 @@ function signedK(x: number): string {
 
 /** On the Budget: the measured warm-up of the finished lamp against the model's, place by place. */
 export function HoldPanel({ hold, calibrate }: { hold: BuildHold; calibrate: { nextRevision: number } | null }) {
-  const series: ChartSeries[] = hold.result.places.flatMap((p) => [
-    { label: `${p.place}, measured`, kind: "readings" as const, points: p.measured },
-    { label: `${p.place}, predicted`, kind: "curve" as const, points: p.predicted },
+  // A place's readings (dots) and its prediction (line) share a colour.
+  const series: ChartSeries[] = hold.result.places.flatMap((p, i) => [
+    { label: `${p.place}, measured`, kind: "readings" as const, points: p.measured, colour: i },
+    { label: `${p.place}, predicted`, kind: "curve" as const, points: p.predicted, colour: i },
   ]);
   return (
     <section className="space-y-2 rounded-lg border border-line bg-white/60 p-3 text-sm" data-testid="bench-overlay">

@@ -30,6 +30,7 @@ const LABELS: Record<string, string> = {
   material: "Material",
   finish: "Finish",
   readings: "Readings",
+  mode: "Driver mode",
 };
 
 /** A refusal in words: the reading by its number, the field by its label; never a schema path. */
@@ -42,6 +43,7 @@ function describe(err: ApiClientError): string {
 }
 
 function fieldOf(path: string): string {
+  if (path === "powered.mode") return "mode";
   const key = path.replace(/^conditions\./, "").split(/[.[]/)[0] ?? "";
   return key;
 }
@@ -78,15 +80,16 @@ export function RecordRun({ powered }: { powered: PoweredOption[] }) {
     return {
       title: s("title"),
       powered: s("powered"),
+      mode: s("mode"),
       visibility: s("visibility"),
       air: s("air"),
       conditions: { ambientC: s("ambientC"), ...heat, massKg: opt("massKg"), material: opt("material"), finish: opt("finish"), orientation: s("orientation") },
     };
   }
 
-  const poweredBody = (v: string) => {
+  const poweredBody = (v: string, mode: string) => {
     const [kind, id] = v.split(":");
-    return kind === "part" ? { kind: "part", partId: id } : kind === "build" ? { kind: "build", buildId: id } : { kind: "none" };
+    return kind === "part" ? { kind: "part", partId: id } : kind === "build" ? { kind: "build", buildId: id, ...(mode ? { mode } : {}) } : { kind: "none" };
   };
 
   function onFit(e: FormEvent<HTMLFormElement>) {
@@ -102,7 +105,7 @@ export function RecordRun({ powered }: { powered: PoweredOption[] }) {
     fit.reset();
     const c = conditionsOf(form);
     save.mutate(
-      { title: c.title, visibility: c.visibility, air: c.air, powered: poweredBody(c.powered), conditions: c.conditions, readings: (readings ?? []).map((r) => ({ tS: r.tS, tempC: r.tempC, place: r.place ?? "heatsink" })) },
+      { title: c.title, visibility: c.visibility, air: c.air, powered: poweredBody(c.powered, c.mode), conditions: c.conditions, readings: (readings ?? []).map((r) => ({ tS: r.tS, tempC: r.tempC, place: r.place ?? "heatsink" })) },
       { onSuccess: (answer) => router.push(answer.run.url) },
     );
   }
@@ -123,6 +126,7 @@ export function RecordRun({ powered }: { powered: PoweredOption[] }) {
             </select>
             <span className="mt-0.5 block text-xs text-ink-soft">An emitter part gives its heat fraction; a build makes this a warm-up to hold the build against.</span>
           </label>
+          <Field name="mode" label="Driver mode" placeholder="high" error={errorFor("mode")} hint="For a build's warm-up: the mode it ran in (blank: its highest). Name each reading's place as the Budget does: heatsink, housing wall, driver board…" />
         </div>
         <fieldset className="space-y-2">
           <legend className="text-sm font-medium">Heat input</legend>

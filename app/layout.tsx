@@ -8,6 +8,11 @@ import "./globals.css";
 export const metadata: Metadata = {
   title: { default: "Sinkwise", template: "%s · Sinkwise" },
   description: "Thermal budget of an LED retrofit: emitter, driver, cells and charger in the real housing.",
+  // Our own icon (public/): a finned heatsink under a warm emitter.
+  icons: {
+    icon: [{ url: "/favicon.ico", sizes: "16x16 32x32 48x48" }, { url: "/icon.svg", type: "image/svg+xml" }, { url: "/icon-192.png", sizes: "192x192", type: "image/png" }],
+    apple: "/apple-touch-icon.png",
+  },
 };
 
 export default function RootLayout({ children }: { children: ReactNode }) {

@@ -147,6 +147,8 @@ export const builds = mysqlTable(
     currentRevision: int("current_revision").notNull().default(1),
     createdAt: datetime("created_at", { fsp: 3 }).notNull(),
     updatedAt: datetime("updated_at", { fsp: 3 }).notNull(),
+    /** Set when the owner archives the build: out of the lists, kept for what points at it. */
+    archivedAt: datetime("archived_at", { fsp: 3 }),
   },
   (t) => [
     index("build_owner_updated_idx").on(t.ownerId, t.updatedAt),

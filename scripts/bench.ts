@@ -3,6 +3,7 @@ import { benchBuilds } from "./bench-builds";
 import { benchFit } from "./bench-fit";
 import { benchPages } from "./bench-pages";
 import { benchParts } from "./bench-parts";
+import { benchPreview } from "./bench-preview";
 import { benchRetrofit } from "./bench-retrofit";
 import { benchThermal } from "./bench-thermal";
 
@@ -11,6 +12,7 @@ async function main(): Promise<void> {
   await benchRetrofit();
   await benchParts();
   await benchBuilds();
+  await benchPreview();
   await benchFit();
   await benchPages();
 }

@@ -174,7 +174,7 @@ export async function readJson<T extends z.ZodType>(request: Request, schema: T,
     throw new ApiError(`bad_request:${subject}`, `${path ? `${path}: ` : ""}the text holds a broken character (a lone UTF-16 surrogate); type it again.`, path);
   }
   const parsed = schema.safeParse(value);
-  if (!parsed.success) throw fromZodError(parsed.error, subject);
+  if (!parsed.success) throw fromZodError(parsed.error, subject, value);
   return parsed.data;
 }
 

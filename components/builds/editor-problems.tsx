@@ -1,6 +1,17 @@
 "use client";
 
+import { designLabels } from "@/lib/messages";
 import type { Problem, Severity } from "@/lib/retrofit";
+
+/** "driver.modes[2]" → ["driver", "modes", 2]. */
+export function pathKeys(field: string): (string | number)[] {
+  return field.split(/\.|\[|\]/).filter((k) => k !== "").map((k) => (/^\d+$/.test(k) ? Number(k) : k));
+}
+
+/** The on-screen name of what a problem is about, never its machine path. */
+export function problemLabel(field: string): string {
+  return designLabels(pathKeys(field)) ?? "The build as a whole";
+}
 
 /**
  * Where the editor shows an evaluation problem: the problem names a slot of the design
@@ -15,6 +26,7 @@ const RULES: readonly (readonly [prefix: string, editorPath: string])[] = [
   ["lightEngine.count", "lightEngine.count"],
   ["lightEngine.interface", "lightEngine.interface"],
   ["lightEngine.heatsink", "lightEngine.heatsink"],
+  ["lightEngine.wiring", "lightEngine.wiring"],
   ["lightEngine.mount", "lightEngine.mount.kind"],
   ["driver.cooling", "driver.cooling.kind"],
   // The driver's part, its modes and the modes the build selects are all picked with the Driver.
@@ -30,6 +42,10 @@ const RULES: readonly (readonly [prefix: string, editorPath: string])[] = [
   ["pack", "pack.cell"],
   ["environment.ambientC", "environment.ambientC"],
   ["environment.contact", "environment.contact"],
+  ["environment.orientation", "environment.orientation"],
+  ["environment.air", "environment.air.kind"],
+  ["housingShape.form", "housingShape.form"],
+  ["costs.comparableNewLightEur", "costs.comparableNewLightEur"],
 ];
 
 function matches(field: string, prefix: string): boolean {
@@ -77,19 +93,20 @@ export function FieldProblems({ problems }: { problems?: readonly Problem[] }) {
 }
 
 /** Above the editor: the state of the check and the problems no field stands for. */
-export function ProblemsSummary({ revision, status, problems, total, errorMessage }: { revision: number; status: "pending" | "error" | "success"; problems: readonly Problem[]; total: number; errorMessage?: string }) {
-  if (status === "pending") return <p className="text-xs text-ink-soft">Checking revision {revision}…</p>;
-  if (status === "error") return <p className="text-xs text-tight">Revision {revision} could not be checked: {errorMessage ?? "no answer"}.</p>;
+export function ProblemsSummary({ revision, status, problems, total, errorMessage, unsaved = false }: { revision: number; status: "pending" | "error" | "success"; problems: readonly Problem[]; total: number; errorMessage?: string; unsaved?: boolean }) {
+  const what = unsaved ? "The unsaved draft" : `Revision ${revision} as saved`;
+  if (status === "pending") return <p className="text-xs text-ink-soft">Checking {unsaved ? "the unsaved draft" : `revision ${revision}`}…</p>;
+  if (status === "error") return <p className="text-xs text-tight">{what} could not be checked: {errorMessage ?? "no answer"}.</p>;
   return (
     <section aria-label="Problems found" data-testid="editor-problems" className="text-sm">
       <p className="text-xs text-ink-soft">
-        {total === 0 ? `Revision ${revision} as saved: no problems found.` : `Revision ${revision} as saved: ${total} problem${total === 1 ? "" : "s"}, shown next to the fields they concern${problems.length ? " or listed here" : ""}.`}
+        {total === 0 ? `${what}: no problems found.` : `${what}: ${total} problem${total === 1 ? "" : "s"}, shown next to the fields they concern${problems.length ? " or listed here" : ""}.`}
       </p>
       {problems.length > 0 && (
         <ul className="mt-1 space-y-0.5 rounded border border-line bg-white/60 px-3 py-2">
           {problems.map((p) => (
             <li key={`${p.severity}|${p.field}|${p.message}`} data-testid="unplaced-problem" className={`text-xs ${SEVERITY_CLASS[p.severity]}`}>
-              <span className="font-mono text-ink-soft">{p.field}</span>: {p.message}
+              <span className="font-medium">{problemLabel(p.field)}</span>: {p.message}
             </li>
           ))}
         </ul>

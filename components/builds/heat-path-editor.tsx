@@ -3,13 +3,16 @@
 import { useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { type ReactNode, useMemo, useState } from "react";
+import { type ReactNode, useEffect, useMemo, useState } from "react";
 import { useSolve } from "@/components/budget/use-solve";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
-import { placeProblems, ProblemsSummary } from "./editor-problems";
+import { editorFieldFor, placeProblems, ProblemsSummary } from "./editor-problems";
+import { LiveCheck } from "./live-check";
+import { useDesignPreview } from "./use-design-preview";
+import { DESIGN_LABELS, type DesignField } from "@/lib/retrofit/design-labels";
 
 const MATERIAL_CHOICES = materialOptions().map((m) => [m.value, m.label] as const);
 
@@ -25,39 +28,107 @@ function Section({ title, children, note }: { title: string; children: ReactNode
   );
 }
 
-/** The Heat path editor: every slot from the Parts bin, every number with its unit. */
+/** Every field the editor can show; conditional ones (reflector, breeze) only when their kind is picked. */
+const EDITOR_FIELDS: readonly DesignField[] = [
+  "housing", "housingShape.form", "lightEngine.emitter", "lightEngine.count", "lightEngine.wiring", "lightEngine.interface", "lightEngine.heatsink",
+  "lightEngine.mount.kind", "lightEngine.mount.interface", "lightEngine.mount.contactAreaM2", "lightEngine.mount.reflector.material",
+  "lightEngine.mount.reflector.thicknessM", "lightEngine.mount.reflector.lengthM", "lightEngine.mount.reflector.meanCircumferenceM",
+  "lightEngine.mount.reflector.rimContactAreaM2", "driver.part", "driver.cooling.kind", "driver.cooling.interface", "driver.cooling.spreader",
+  "driver.cooling.adhesive", "pack.cell", "pack.series", "pack.parallel", "pack.protection", "pack.charger", "pack.chargerCount",
+  "environment.ambientC", "environment.orientation", "environment.air.kind", "environment.air.speedMPerS", "environment.contact",
+  "costs.comparableNewLightEur",
+];
+
+/** Design paths as the API names them ("design.pack.chargerCount" → "pack.chargerCount"). */
+const designPath = (path: string) => path.replace(/^design\./, "").replace(/\[(\d+)\]/g, ".$1");
+
+/** The on-screen field a validation message belongs to: the longest field path it starts with, else the field for its slot. */
+function fieldForIssue(path: string, fields: readonly string[]): string | null {
+  const p = designPath(path);
+  const hit = [...fields].sort((a, b) => b.length - a.length).find((f) => p === f || p.startsWith(`${f}.`));
+  return hit ?? editorFieldFor(p);
+}
+
+/**
+ * The Heat path editor: every slot from the Parts bin, every number with its unit. What is
+ * on screen is checked as it is edited (the preview route evaluates the unsaved draft and
+ * writes nothing); saving makes the revision.
+ */
 export function HeatPathEditor({ buildId, title, revision, design: initial, canEdit }: Props) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [design, setDesign] = useState<JsonObject>(initial);
   const [note, setNote] = useState("");
-  const [error, setError] = useState<{ path: string; message: string } | null>(null);
+  const [saveIssues, setSaveIssues] = useState<readonly { path: string; message: string }[]>([]);
   const [saved, setSaved] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
-  // The checks are of the saved revision: what is on screen may differ until it is saved.
+  const [scrollTick, setScrollTick] = useState(0);
+  // What the last saved revision holds, as edited here (the server stores it in SI units).
+  const [savedJson, setSavedJson] = useState(() => JSON.stringify(initial));
+  const dirty = JSON.stringify(design) !== savedJson;
   const solved = useSolve(buildId, revision);
-  const problems = useMemo(() => solved.data?.evaluation.problems ?? [], [solved.data]);
+  const preview = useDesignPreview(buildId, design, dirty && canEdit);
+  const live = dirty && canEdit;
+  const evaluation = live ? (preview.answer?.valid ? preview.answer.evaluation : null) : (solved.data?.evaluation ?? null);
+  const problems = useMemo(() => evaluation?.problems ?? [], [evaluation]);
   const placed = useMemo(() => placeProblems(problems), [problems]);
+  const liveIssues = useMemo(() => (live && preview.answer && !preview.answer.valid ? preview.answer.issues : []), [live, preview.answer]);
+
+  // Every field rendered registers its path here, so a message finds the field it concerns.
+  const fields: string[] = [];
+  const issues = [...liveIssues, ...saveIssues];
+  const placedIssues = new Map<string, string[]>();
+  const unplacedIssues: string[] = [];
+  const placeIssues = () => {
+    placedIssues.clear();
+    unplacedIssues.length = 0;
+    for (const i of issues) {
+      const target = fieldForIssue(i.path, fields);
+      if (target && fields.includes(target)) placedIssues.set(target, [...(placedIssues.get(target) ?? []), i.message]);
+      else unplacedIssues.push(i.message);
+    }
+  };
+
+  useEffect(() => {
+    if (scrollTick === 0) return;
+    const first = document.querySelector<HTMLElement>("[data-field-error='true']");
+    if (first) {
+      first.scrollIntoView({ block: "center", behavior: "smooth" });
+      first.querySelector<HTMLElement>("input, select")?.focus({ preventScroll: true });
+    }
+  }, [scrollTick]);
 
   const change = (path: string, value: Json | undefined) => {
     setDesign((d) => setPath(d, path, value));
     setSaved(null);
+    setSaveIssues([]);
   };
-  const errorAt = (path: string) => (error && error.path === `design.${path}` ? error.message.replace(/^[^:]*: /, "") : undefined);
-  const f = (path: string, label: string) => ({ design, path, label, onChange: change, error: errorAt(path), problems: placed.byField.get(path), disabled: !canEdit });
+  const f = (path: DesignField) => {
+    fields.push(path);
+    // Issues inside a typed-in part go to its own fields (InlinePart); the rest to this field.
+    const inside = (i: { path: string }) => designPath(i.path).startsWith(`${path}.inline.`) || designPath(i.path) === `${path}.name`;
+    const mine = issues.filter((i) => fieldForIssue(i.path, EDITOR_FIELDS) === path && !inside(i)).map((i) => i.message);
+    return { design, path, label: DESIGN_LABELS[path], onChange: change, error: mine.length ? mine.join("; ") : undefined, problems: placed.byField.get(path), disabled: !canEdit, issues: issues.filter(inside) };
+  };
   const kindOf = (path: string) => String(getPath(design, `${path}.kind`) ?? "");
 
   async function save() {
+    if (liveIssues.length > 0) {
+      setScrollTick((t) => t + 1);
+      return;
+    }
     setBusy(true);
-    setError(null);
+    setSaveIssues([]);
     try {
       const r = await fetchJson<{ build: { currentRevision: number } }>(`/api/v1/builds/${buildId}`, { method: "PATCH", body: { design, note } });
       setSaved(`Saved as revision ${r.build.currentRevision}.`);
+      setSavedJson(JSON.stringify(design));
       setNote("");
       await queryClient.invalidateQueries({ queryKey: ["build", buildId] });
       router.refresh();
     } catch (e) {
-      setError(e instanceof ApiClientError ? { path: e.path, message: e.message } : { path: "", message: "Could not save." });
+      setSaveIssues([e instanceof ApiClientError ? { path: e.path, message: e.message } : { path: "", message: "Could not save: the server did not answer. Try again." }]);
+      setScrollTick((t) => t + 1);
     } finally {
       setBusy(false);
     }
@@ -66,6 +137,74 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   const mountKind = kindOf("lightEngine.mount") || "in-housing-air";
   const coolingKind = kindOf("driver.cooling") || "floating";
   const airKind = kindOf("environment.air") || "still";
+
+  const sections = (
+    <>
+      <Section title="Housing" note="The shell the heat must finally cross. Sealed housings trap their air.">
+        <PartSelect kind="housing" {...f("housing")} />
+        <ChoiceSelect choices={[["box", "Box (lantern)"], ["tube", "Tube (torch, headlamp)"]]} {...f("housingShape.form")} />
+      </Section>
+      <Section title="Light engine" note="Emitters on their board, the interface, the heatsink and how it is mounted.">
+        <PartSelect kind="emitter" {...f("lightEngine.emitter")} />
+        <IntInput min={1} max={64} {...f("lightEngine.count")} />
+        <ChoiceSelect choices={[["series", "In series"], ["parallel", "In parallel"]]} {...f("lightEngine.wiring")} />
+        <PartSelect kind="interface" {...f("lightEngine.interface")} />
+        <PartSelect kind="heatsink" {...f("lightEngine.heatsink")} />
+        <ChoiceSelect
+          choices={[["in-housing-air", "Heatsink in the housing's air"], ["pressed-to-wall", "Heatsink pressed to the housing wall"], ["through-reflector", "Heat through the reflector to the rim"]]}
+          {...f("lightEngine.mount.kind")}
+          onChange={(_p, v) => change("lightEngine.mount", v === "through-reflector" ? { kind: v, reflector: { material: MATERIAL_CHOICES[0]?.[0] ?? "" } } : { kind: v ?? "in-housing-air" })}
+        />
+        {mountKind === "pressed-to-wall" && <PartSelect kind="interface" {...f("lightEngine.mount.interface")} />}
+        {mountKind === "pressed-to-wall" && <UnitInput unitHint="e.g. 9 cm²" quantity="area" {...f("lightEngine.mount.contactAreaM2")} />}
+        {mountKind === "through-reflector" && (
+          <>
+            <ChoiceSelect choices={MATERIAL_CHOICES} {...f("lightEngine.mount.reflector.material")} />
+            <UnitInput unitHint="e.g. 0.5 mm" quantity="length" {...f("lightEngine.mount.reflector.thicknessM")} />
+            <UnitInput unitHint="sink to rim, e.g. 30 mm" quantity="length" {...f("lightEngine.mount.reflector.lengthM")} />
+            <UnitInput unitHint="e.g. 12 cm" quantity="length" {...f("lightEngine.mount.reflector.meanCircumferenceM")} />
+            <UnitInput unitHint="e.g. 4 cm²" quantity="area" {...f("lightEngine.mount.reflector.rimContactAreaM2")} />
+            <PartSelect kind="interface" {...f("lightEngine.mount.interface")} />
+          </>
+        )}
+      </Section>
+      <Section title="Driver" note="Small drivers dump heat through their ground plane; floating free in a closed housing they run hot.">
+        <PartSelect kind="driver" {...f("driver.part")} />
+        <ChoiceSelect
+          choices={[["floating", "Floating free in the housing air"], ["ground-plane-to-wall", "Ground plane pressed to the housing"], ["strapped", "Strapped to the housing (spreader + adhesive)"]]}
+          {...f("driver.cooling.kind")}
+          onChange={(_p, v) => change("driver.cooling", { kind: v ?? "floating" })}
+        />
+        {coolingKind === "ground-plane-to-wall" && <PartSelect kind="interface" {...f("driver.cooling.interface")} />}
+        {coolingKind === "strapped" && <PartSelect kind="spreader" {...f("driver.cooling.spreader")} />}
+        {coolingKind === "strapped" && <PartSelect kind="interface" {...f("driver.cooling.adhesive")} />}
+      </Section>
+      <Section title="Pack and charging" note="Parallel cells add capacity at the same voltage; join them only at equal voltage.">
+        <PartSelect kind="cell" {...f("pack.cell")} />
+        <IntInput min={1} max={16} {...f("pack.series")} />
+        <IntInput min={1} max={32} {...f("pack.parallel")} />
+        <PartSelect kind="protection" {...f("pack.protection")} />
+        <PartSelect kind="charger" {...f("pack.charger")} />
+        <IntInput min={1} max={16} {...f("pack.chargerCount")} />
+      </Section>
+      <Section title="Where and how it is used">
+        <UnitInput unitHint="e.g. 25 °C or 77 °F" quantity="temperature" {...f("environment.ambientC")} />
+        <ChoiceSelect choices={[["upright", "Held upright"], ["lying", "Lying on its side"]]} {...f("environment.orientation")} />
+        <ChoiceSelect
+          choices={[["still", "Still air"], ["breeze", "A breeze"]]}
+          {...f("environment.air.kind")}
+          onChange={(_p, v) => change("environment.air", v === "breeze" ? { kind: "breeze", speedMPerS: 1 } : { kind: "still" })}
+        />
+        {airKind === "breeze" && <IntInput min={1} max={30} {...f("environment.air.speedMPerS")} />}
+        <ChoiceSelect
+          choices={[["touch-1s", "Touched briefly (1 s)"], ["grip-10s", "Gripped (10 s)"], ["hold-1min", "Held (1 min)"], ["hold-10min", "Held (10 min)"], ["hold-8h", "Worn / held for hours"]]}
+          {...f("environment.contact")}
+        />
+        <IntInput min={0} max={100000} {...f("costs.comparableNewLightEur")} />
+      </Section>
+    </>
+  );
+  placeIssues();
 
   return (
     <div className="space-y-4" data-testid="heat-path-editor">
@@ -76,82 +215,39 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
       )}
       <ProblemsSummary
         revision={revision}
-        status={solved.status}
+        unsaved={live}
+        status={live ? (preview.status === "error" ? "error" : preview.answer ? "success" : "pending") : solved.status}
         problems={placed.unplaced}
-        total={problems.filter((p) => p.severity !== "info").length}
-        errorMessage={solved.error?.message}
+        total={problems.filter((p) => p.severity !== "info").length + issues.length}
+        errorMessage={live ? (preview.error ?? undefined) : solved.error?.message}
       />
-      <Section title="Housing" note="The shell the heat must finally cross. Sealed housings trap their air.">
-        <PartSelect kind="housing" {...f("housing", "Housing")} />
-        <ChoiceSelect choices={[["box", "Box (lantern)"], ["tube", "Tube (torch, headlamp)"]]} {...f("housingShape.form", "Shape")} />
-      </Section>
-      <Section title="Light engine" note="Emitters on their board, the interface, the heatsink and how it is mounted.">
-        <PartSelect kind="emitter" {...f("lightEngine.emitter", "Emitter")} />
-        <IntInput min={1} max={64} {...f("lightEngine.count", "Emitter count")} />
-        <ChoiceSelect choices={[["series", "In series"], ["parallel", "In parallel"]]} {...f("lightEngine.wiring", "Wiring")} />
-        <PartSelect kind="interface" {...f("lightEngine.interface", "Board → heatsink interface")} />
-        <PartSelect kind="heatsink" {...f("lightEngine.heatsink", "Heatsink")} />
-        <ChoiceSelect
-          choices={[["in-housing-air", "Heatsink in the housing's air"], ["pressed-to-wall", "Heatsink pressed to the housing wall"], ["through-reflector", "Heat through the reflector to the rim"]]}
-          {...f("lightEngine.mount.kind", "Mounting")}
-          onChange={(_p, v) => change("lightEngine.mount", v === "through-reflector" ? { kind: v, reflector: { material: MATERIAL_CHOICES[0]?.[0] ?? "" } } : { kind: v ?? "in-housing-air" })}
+      {unplacedIssues.length > 0 && (
+        <ul role="alert" className="space-y-0.5 rounded border border-over/40 bg-white px-3 py-2 text-sm text-over" data-testid="unplaced-issues">
+          {unplacedIssues.map((m) => <li key={m}>{m}</li>)}
+        </ul>
+      )}
+      {sections}
+      <section className="rounded-lg border border-line bg-white/60 p-4">
+        <h2 className="mb-2 font-semibold">What the build means thermally</h2>
+        <LiveCheck
+          evaluation={evaluation}
+          unsaved={live}
+          revision={revision}
+          checking={live ? preview.status === "checking" : solved.isPending}
+          ambientC={typeof getPath(design, "environment.ambientC") === "number" ? (getPath(design, "environment.ambientC") as number) : 25}
         />
-        {mountKind === "pressed-to-wall" && <PartSelect kind="interface" {...f("lightEngine.mount.interface", "Heatsink → wall interface")} />}
-        {mountKind === "pressed-to-wall" && <UnitInput unitHint="e.g. 9 cm^2" {...f("lightEngine.mount.contactAreaM2", "Contact area with the wall")} />}
-        {mountKind === "through-reflector" && (
-          <>
-            <ChoiceSelect choices={MATERIAL_CHOICES} {...f("lightEngine.mount.reflector.material", "Reflector material")} />
-            <UnitInput unitHint="e.g. 0.5 mm" {...f("lightEngine.mount.reflector.thicknessM", "Reflector wall thickness")} />
-            <UnitInput unitHint="sink to rim, e.g. 30 mm" {...f("lightEngine.mount.reflector.lengthM", "Reflector path length")} />
-            <UnitInput unitHint="e.g. 12 cm" {...f("lightEngine.mount.reflector.meanCircumferenceM", "Mean circumference")} />
-            <UnitInput unitHint="e.g. 4 cm^2" {...f("lightEngine.mount.reflector.rimContactAreaM2", "Rim contact with the housing")} />
-            <PartSelect kind="interface" {...f("lightEngine.mount.interface", "Rim → housing interface")} />
-          </>
-        )}
-      </Section>
-      <Section title="Driver" note="Small drivers dump heat through their ground plane; floating free in a closed housing they run hot.">
-        <PartSelect kind="driver" {...f("driver.part", "Driver")} />
-        <ChoiceSelect
-          choices={[["floating", "Floating free in the housing air"], ["ground-plane-to-wall", "Ground plane pressed to the housing"], ["strapped", "Strapped to the housing (spreader + adhesive)"]]}
-          {...f("driver.cooling.kind", "Driver cooling")}
-          onChange={(_p, v) => change("driver.cooling", { kind: v ?? "floating" })}
-        />
-        {coolingKind === "ground-plane-to-wall" && <PartSelect kind="interface" {...f("driver.cooling.interface", "Ground plane → wall interface")} />}
-        {coolingKind === "strapped" && <PartSelect kind="spreader" {...f("driver.cooling.spreader", "Strap / spreader")} />}
-        {coolingKind === "strapped" && <PartSelect kind="interface" {...f("driver.cooling.adhesive", "Adhesive")} />}
-      </Section>
-      <Section title="Pack and charging" note="Parallel cells add capacity at the same voltage; join them only at equal voltage.">
-        <PartSelect kind="cell" {...f("pack.cell", "Cell")} />
-        <IntInput min={1} max={16} {...f("pack.series", "Cells in series")} />
-        <IntInput min={1} max={32} {...f("pack.parallel", "Cells in parallel")} />
-        <PartSelect kind="protection" {...f("pack.protection", "Protection")} />
-        <PartSelect kind="charger" {...f("pack.charger", "Charger")} />
-        <IntInput min={1} max={16} {...f("pack.chargerCount", "Chargers in parallel")} />
-      </Section>
-      <Section title="Where and how it is used">
-        <UnitInput unitHint="e.g. 25 °C or 77 °F" {...f("environment.ambientC", "Ambient temperature")} />
-        <ChoiceSelect choices={[["upright", "Held upright"], ["lying", "Lying on its side"]]} {...f("environment.orientation", "Orientation")} />
-        <ChoiceSelect
-          choices={[["still", "Still air"], ["breeze", "A breeze"]]}
-          {...f("environment.air.kind", "Air")}
-          onChange={(_p, v) => change("environment.air", v === "breeze" ? { kind: "breeze", speedMPerS: 1 } : { kind: "still" })}
-        />
-        {airKind === "breeze" && <IntInput min={1} max={30} {...f("environment.air.speedMPerS", "Breeze speed (m/s)")} />}
-        <ChoiceSelect
-          choices={[["touch-1s", "Touched briefly (1 s)"], ["grip-10s", "Gripped (10 s)"], ["hold-1min", "Held (1 min)"], ["hold-10min", "Held (10 min)"], ["hold-8h", "Worn / held for hours"]]}
-          {...f("environment.contact", "Hand contact")}
-        />
-        <IntInput min={0} max={100000} {...f("costs.comparableNewLightEur", "Price of a comparable new light (€)")} />
-      </Section>
+      </section>
       {canEdit && (
-        <div className="no-print sticky bottom-0 flex flex-wrap items-center gap-3 border-t border-line bg-paper/95 py-3">
+        // Solid and in the flow at the end of the editor: it sticks to the bottom while
+        // scrolling, and fields keep a scroll margin so one in focus is never under it.
+        <div className="no-print sticky bottom-0 z-10 flex flex-wrap items-center gap-3 border-t border-line bg-paper py-3 shadow-[0_-4px_8px_rgba(0,0,0,0.06)]" data-testid="save-bar">
           <input value={note} onChange={(e) => setNote(e.target.value)} placeholder="What changed (optional)" aria-label="Revision note" className="w-72 rounded border border-line bg-white px-2 py-1.5 text-sm" />
-          <button type="button" onClick={save} disabled={busy} className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90 disabled:opacity-50">
+          <button type="button" onClick={save} disabled={busy || !dirty} className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90 disabled:opacity-50">
             {busy ? "Saving…" : `Save as revision ${revision + 1}`}
           </button>
-          <Link href={`/builds/${buildId}/budget`} className="text-sm text-ink-soft hover:text-ember">Open the Budget of “{title}”</Link>
+          {dirty ? <span className="text-xs text-ember" data-testid="unsaved-note">Unsaved changes: the figures are of the draft.</span> : <Link href={`/builds/${buildId}/budget`} className="text-sm text-ink-soft hover:text-ember">Open the Budget of “{title}”</Link>}
           {saved && <span role="status" className="text-sm text-ok">{saved}</span>}
-          {error && <span role="alert" className="text-sm text-over">{error.message}</span>}
+          {issues.length > 0 && <span role="alert" className="text-sm text-over">{issues.length === 1 ? "One field needs attention" : `${issues.length} fields need attention`}: see the message beside it.</span>}
         </div>
       )}
     </div>

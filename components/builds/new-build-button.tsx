@@ -3,21 +3,32 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
+import { STARTING_POINT_INFO, STARTING_POINTS, startingDesign, type StartingPoint } from "@/lib/starter";
 
-/** Starts an empty build (defaults: 25 °C, still air, held for a minute) and opens its editor. */
+/**
+ * Starts a build from a starting point (a kind of light with every slot filled from the
+ * starter bin, values marked as estimates) or empty, and opens its Heat path editor.
+ */
 export function NewBuildButton() {
   const router = useRouter();
   const [title, setTitle] = useState("");
+  const [point, setPoint] = useState<StartingPoint | "empty">("torch");
   const [error, setError] = useState<string | null>(null);
   const [open, setOpen] = useState(false);
+  const [busy, setBusy] = useState(false);
 
   async function create() {
     setError(null);
+    setBusy(true);
     try {
-      const r = await fetchJson<{ build: { id: string } }>("/api/v1/builds", { method: "POST", body: { title, design: { lightEngine: {} } } });
+      const design = point === "empty" ? { lightEngine: {} } : startingDesign(point);
+      const name = title.trim() || (point === "empty" ? "" : STARTING_POINT_INFO[point].title);
+      const note = point === "empty" ? "First revision" : `Started as a ${STARTING_POINT_INFO[point].label.toLowerCase()} from the starter bin`;
+      const r = await fetchJson<{ build: { id: string } }>("/api/v1/builds", { method: "POST", body: { title: name, design, note } });
       router.push(`/builds/${r.build.id}`);
     } catch (e) {
       setError(e instanceof ApiClientError ? e.message : "Could not create the build.");
+      setBusy(false);
     }
   }
 
@@ -29,22 +40,42 @@ export function NewBuildButton() {
     );
   }
   return (
-    <div className="flex items-start gap-2">
-      <label className="text-sm">
-        <span className="sr-only">Title of the new build</span>
+    <div className="w-full max-w-xl space-y-3 rounded-lg border border-line bg-white p-4" data-testid="new-build">
+      <fieldset>
+        <legend className="mb-2 text-sm font-medium">Start from</legend>
+        <div className="grid gap-2 sm:grid-cols-2">
+          {STARTING_POINTS.map((p) => (
+            <label key={p} className={`block cursor-pointer rounded border p-2 text-sm ${point === p ? "border-ember bg-ember-soft/40" : "border-line"}`}>
+              <input type="radio" name="starting-point" value={p} checked={point === p} onChange={() => setPoint(p)} className="mr-1.5" />
+              <span className="font-medium">{STARTING_POINT_INFO[p].label}</span>
+              <span className="mt-0.5 block text-xs text-ink-soft">{STARTING_POINT_INFO[p].description}</span>
+            </label>
+          ))}
+          <label className={`block cursor-pointer rounded border p-2 text-sm ${point === "empty" ? "border-ember bg-ember-soft/40" : "border-line"}`}>
+            <input type="radio" name="starting-point" value="empty" checked={point === "empty"} onChange={() => setPoint("empty")} className="mr-1.5" />
+            <span className="font-medium">Empty build</span>
+            <span className="mt-0.5 block text-xs text-ink-soft">Every slot empty; pick parts from your Parts bin.</span>
+          </label>
+        </div>
+        <p className="mt-2 text-xs text-ink-soft">Starting points use generic parts from the starter bin: typical values, estimates only. Change what differs in your build.</p>
+      </fieldset>
+      <label className="block text-sm">
+        <span className="mb-1 block font-medium">Title of the new build</span>
         <input
-          autoFocus
           value={title}
           onChange={(e) => setTitle(e.target.value)}
-          placeholder="e.g. Square lantern, 2 cells"
+          placeholder={point === "empty" ? "e.g. Square lantern, 2 cells" : STARTING_POINT_INFO[point].title}
           aria-label="Title of the new build"
-          className="w-64 rounded border border-line bg-white px-3 py-2"
+          className="w-full rounded border border-line bg-white px-3 py-2"
         />
         {error && <span role="alert" className="mt-1 block text-over">{error}</span>}
       </label>
-      <button type="button" onClick={create} className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90">
-        Create
-      </button>
+      <div className="flex gap-2">
+        <button type="button" onClick={create} disabled={busy} className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90 disabled:opacity-50">
+          {busy ? "Creating…" : "Create"}
+        </button>
+        <button type="button" onClick={() => setOpen(false)} className="px-2 text-sm text-ink-soft hover:text-ember">Cancel</button>
+      </div>
     </div>
   );
 }

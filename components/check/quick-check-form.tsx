@@ -7,27 +7,32 @@ import { formatAgainstLimit, formatFigure, formatHeadroom } from "@/lib/units/fi
 import { TraceView } from "@/components/budget/trace-view";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { FINISHES, materialOptions } from "@/lib/parts";
+import { labelFor, labelsForSubject } from "@/lib/messages";
 import type { QuickCheckResult } from "@/lib/retrofit";
+import { QUICK_CHECK_LABELS } from "@/lib/retrofit/quick-check-labels";
+
+const checkLabel = (field: string) => labelFor(field.split(/\.|\[|\]/).filter(Boolean), labelsForSubject("check"));
 
 const MATERIALS = materialOptions();
 
-type Field = { name: string; label: string; placeholder: string; hint?: string };
+type Field = { name: string; label: string; placeholder: string; hint?: string; empty?: boolean };
 
+const L = QUICK_CHECK_LABELS;
 const GEOMETRY: Field[] = [
-  { name: "baseLengthM", label: "Base length (along the fins)", placeholder: "60 mm" },
-  { name: "baseWidthM", label: "Base width", placeholder: "60 mm" },
-  { name: "baseThicknessM", label: "Base thickness", placeholder: "5 mm" },
-  { name: "finCount", label: "Fin count", placeholder: "8" },
-  { name: "finHeightM", label: "Fin height", placeholder: "30 mm" },
-  { name: "finThicknessM", label: "Fin thickness", placeholder: "1.5 mm" },
-  { name: "finSpacingM", label: "Gap between fins", placeholder: "6.5 mm" },
+  { name: "baseLengthM", label: L["sink.geometry.baseLengthM"], placeholder: "60 mm", hint: "Salvaged sinks: typically 20–100 mm" },
+  { name: "baseWidthM", label: L["sink.geometry.baseWidthM"], placeholder: "60 mm", hint: "Salvaged sinks: typically 20–100 mm" },
+  { name: "baseThicknessM", label: L["sink.geometry.baseThicknessM"], placeholder: "5 mm", hint: "Typically 2–8 mm" },
+  { name: "finCount", label: L["sink.geometry.finCount"], placeholder: "8", hint: "0 for a flat plate" },
+  { name: "finHeightM", label: L["sink.geometry.finHeightM"], placeholder: "30 mm", hint: "Above the base; typically 10–40 mm" },
+  { name: "finThicknessM", label: L["sink.geometry.finThicknessM"], placeholder: "1.5 mm", hint: "Typically 0.5–2 mm" },
+  { name: "finSpacingM", label: L["sink.geometry.finSpacingM"], placeholder: "worked out from width, count and thickness", hint: "Leave empty to have it worked out; if you give it, it is checked against the base width", empty: true },
 ];
 
 function Input({ f, error }: { f: Field; error?: string }) {
   return (
     <label className="block text-sm">
       <span className="mb-1 block font-medium">{f.label}</span>
-      <input name={f.name} placeholder={f.placeholder} defaultValue={f.placeholder} aria-label={f.label} className="w-full rounded border border-line bg-white px-2 py-1.5" />
+      <input name={f.name} placeholder={f.placeholder} defaultValue={f.empty ? "" : f.placeholder} aria-label={f.label} aria-invalid={error ? true : undefined} className="w-full rounded border border-line bg-white px-2 py-1.5" />
       {f.hint && !error && <span className="mt-0.5 block text-xs text-ink-soft">{f.hint}</span>}
       {error && <span role="alert" className="mt-0.5 block text-xs text-over">{error}</span>}
     </label>
@@ -39,7 +44,7 @@ export function QuickCheckForm() {
   const [mode, setMode] = useState<"declared" | "geometry">("declared");
   const check = useMutation({ mutationFn: (body: unknown) => fetchJson<QuickCheckResult>("/api/v1/check", { method: "POST", body }) });
   const err = check.error instanceof ApiClientError ? check.error : null;
-  const errorFor = (path: string) => (err && err.path === path ? err.message.replace(/^[^:]*: /, "") : undefined);
+  const errorFor = (path: string) => (err && err.path === path ? err.message : undefined);
 
   function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -52,7 +57,7 @@ export function QuickCheckForm() {
         : {
             geometry: {
               rating: "geometry",
-              ...Object.fromEntries(GEOMETRY.map((g) => [g.name, g.name === "finCount" ? Number(s(g.name)) : s(g.name)])),
+              ...Object.fromEntries(GEOMETRY.map((g) => [g.name, s(g.name)])),
               material: s("material"),
               finish: s("finish"),
             },
@@ -73,10 +78,10 @@ export function QuickCheckForm() {
     <div className="grid gap-6 lg:grid-cols-[1fr_1fr]">
       <form onSubmit={onSubmit} noValidate className="space-y-4 rounded-lg border border-line bg-white/60 p-4">
         <div className="grid gap-3 sm:grid-cols-2">
-          <Input f={{ name: "heatWatts", label: "Heat from the emitter", placeholder: "7 W", hint: "Electrical power × heat fraction (often 60–80 % for white LEDs)" }} error={errorFor("heatWatts")} />
-          <Input f={{ name: "ambientC", label: "Ambient", placeholder: "25 °C" }} error={errorFor("ambientC")} />
-          <Input f={{ name: "rthJspKPerW", label: "Rth junction → solder point", placeholder: "2.5 K/W", hint: "From the emitter's datasheet" }} error={errorFor("rthJspKPerW")} />
-          <Input f={{ name: "maxTjC", label: "Maximum junction temperature", placeholder: "125 °C" }} error={errorFor("maxTjC")} />
+          <Input f={{ name: "heatWatts", label: L.heatWatts, placeholder: "7 W", hint: "Electrical power × heat fraction (often 60–80 % for white LEDs)" }} error={errorFor("heatWatts")} />
+          <Input f={{ name: "ambientC", label: L.ambientC, placeholder: "25 °C", hint: "Indoors about 20–25 °C; a summer car 40–60 °C" }} error={errorFor("ambientC")} />
+          <Input f={{ name: "rthJspKPerW", label: L.rthJspKPerW, placeholder: "2.5 K/W", hint: "From the emitter's datasheet; typically 1–10 K/W" }} error={errorFor("rthJspKPerW")} />
+          <Input f={{ name: "maxTjC", label: L.maxTjC, placeholder: "125 °C", hint: "White LEDs: typically 125–150 °C" }} error={errorFor("maxTjC")} />
         </div>
         <fieldset className="space-y-3">
           <legend className="text-sm font-medium">Heatsink</legend>
@@ -85,7 +90,7 @@ export function QuickCheckForm() {
             <label><input type="radio" name="mode" checked={mode === "geometry"} onChange={() => setMode("geometry")} /> Measured geometry</label>
           </div>
           {mode === "declared" ? (
-            <Input f={{ name: "declaredKPerW", label: "Sink-to-air resistance", placeholder: "4 K/W", hint: "Check that the figure is for still air: sellers often quote it with a fan." }} error={errorFor("sink.declaredKPerW")} />
+            <Input f={{ name: "declaredKPerW", label: L["sink.declaredKPerW"], placeholder: "4 K/W", hint: "Check that the figure is for still air: sellers often quote it with a fan." }} error={errorFor("sink.declaredKPerW")} />
           ) : (
             <div className="grid gap-3 sm:grid-cols-2">
               {GEOMETRY.map((g) => <Input key={g.name} f={g} error={errorFor(`sink.geometry.${g.name}`)} />)}
@@ -108,7 +113,7 @@ export function QuickCheckForm() {
           <legend className="mb-1 text-sm font-medium">Interface (optional)</legend>
           <label className="block text-sm"><span className="mb-1 block">Bond line</span><input name="bondLineM" placeholder="50 um" aria-label="Bond line" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
           <label className="block text-sm"><span className="mb-1 block">Conductivity</span><input name="conductivityWPerMK" placeholder="3 W/(m K)" aria-label="Conductivity" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
-          <label className="block text-sm"><span className="mb-1 block">Contact area</span><input name="contactAreaM2" placeholder="2.5 cm^2" aria-label="Contact area" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
+          <label className="block text-sm"><span className="mb-1 block">Contact area</span><input name="contactAreaM2" placeholder="2.5 cm²" aria-label="Contact area" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
         </fieldset>
         <button type="submit" className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90" disabled={check.isPending}>
           {check.isPending ? "Working…" : "Check it"}
@@ -130,12 +135,18 @@ export function QuickCheckForm() {
               <dt className="text-ink-soft">Junction</dt><dd className="font-medium">{formatAgainstLimit(r.tjC, r.maxTjC, "max", "temperature").value}</dd>
               <dt className="text-ink-soft">Solder point</dt><dd>{formatFigure(r.solderPointC, "temperature")}</dd>
               <dt className="text-ink-soft">Heatsink</dt><dd>{formatFigure(r.sinkC, "temperature")}</dd>
+              {r.finGapM !== null && (
+                <>
+                  <dt className="text-ink-soft">Gap between fins</dt>
+                  <dd data-testid="fin-gap">{formatFigure(r.finGapM, "length")} {r.finGapWorkedOut ? "(worked out from width, count and thickness)" : "(from the base width; checked against the gap you gave)"}</dd>
+                </>
+              )}
               <dt className="text-ink-soft">Sink-to-air, this sink</dt><dd>{formatFigure(r.sinkKPerW, "thermalResistance")}</dd>
               <dt className="text-ink-soft">Needed for the budget (10 K margin)</dt><dd>{r.requiredForBudgetKPerW === null ? "–" : `≤ ${formatFigure(r.requiredForBudgetKPerW, "thermalResistance")}`}</dd>
               <dt className="text-ink-soft">Needed to just reach the limit</dt><dd>{r.requiredForLimitKPerW === null ? "–" : `≤ ${formatFigure(r.requiredForLimitKPerW, "thermalResistance")}`}</dd>
             </dl>
             {r.problems.length > 0 && (
-              <ul className="list-disc pl-5 text-xs text-ink-soft">{r.problems.map((p, i) => <li key={i}>{p.field}: {p.message}</li>)}</ul>
+              <ul className="list-disc pl-5 text-xs text-ink-soft">{r.problems.map((p, i) => <li key={i}>{checkLabel(p.field)}: {p.message}</li>)}</ul>
             )}
             <details className="rounded border border-line bg-white p-3">
               <summary className="cursor-pointer text-sm font-medium">How these numbers were worked out</summary>

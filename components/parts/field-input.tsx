@@ -1,7 +1,7 @@
 "use client";
 
 import type { UseFormRegister } from "react-hook-form";
-import { inputUnitLabel, materialOptions, type FieldDef } from "@/lib/parts";
+import { fieldHint, inputUnitLabel, materialOptions, type FieldDef, type PartKind } from "@/lib/parts";
 import { QUANTITY_INFO } from "@/lib/units";
 import type { PartFormValues } from "./form-values";
 import { inputClass } from "./labels";
@@ -9,7 +9,8 @@ import { inputClass } from "./labels";
 const MATERIALS = materialOptions();
 
 /** One specs field: label, input, the unit a bare number means, help and the inline error. */
-export function FieldInput({ field, register, error, note }: { field: FieldDef; register: UseFormRegister<PartFormValues>; error?: string; note?: string }) {
+export function FieldInput({ kind, field, register, error, note }: { kind: PartKind; field: FieldDef; register: UseFormRegister<PartFormValues>; error?: string; note?: string }) {
+  const hint = fieldHint(kind, field.key);
   const id = `specs-${field.key}`;
   const name = `specs.${field.key}` as const;
   const unit = inputUnitLabel(field);
@@ -35,7 +36,8 @@ export function FieldInput({ field, register, error, note }: { field: FieldDef; 
       </select>
     );
   } else {
-    const placeholder = field.type === "quantity" ? QUANTITY_INFO[field.quantity].example : "";
+    // The field's own typical value, not the unit's generic example.
+    const placeholder = hint?.placeholder ?? (field.type === "quantity" ? QUANTITY_INFO[field.quantity].example : "");
     control = <input {...common} {...register(name)} type="text" inputMode={field.type === "quantity" ? "decimal" : undefined} placeholder={placeholder} autoComplete="off" />;
   }
   return (
@@ -48,7 +50,10 @@ export function FieldInput({ field, register, error, note }: { field: FieldDef; 
         {control}
         {unit && <span id={`${id}-unit`} className="min-w-12 font-mono text-xs text-ink-soft">{unit}</span>}
       </div>
-      <p id={`${id}-help`} className="text-xs text-ink-soft">{field.help}</p>
+      <p id={`${id}-help`} className="text-xs text-ink-soft">
+        {field.help}
+        {hint?.typical && <span className="block">Typical: {hint.typical}.</span>}
+      </p>
       {error && (
         <p id={`${id}-error`} role="alert" className="text-xs text-over">{error}</p>
       )}

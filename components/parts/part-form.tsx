@@ -119,7 +119,7 @@ export function PartForm({ kind, part, prefs }: { kind: PartKind; part?: PartDto
         <legend className="px-1 text-sm font-semibold">{def.label} figures</legend>
         <p className="text-xs text-ink-soft sm:col-span-2">Type a value with its unit (“0.8 in”, “45 g”, “2.5 K/W”); a bare number is in the unit shown beside the field.</p>
         {fields.map((field) => (
-          <FieldInput key={field.key} field={field} register={register} error={errorAt(errors, `specs.${field.key}`)} note={notes.get(field.key)} />
+          <FieldInput key={field.key} kind={kind} field={field} register={register} error={errorAt(errors, `specs.${field.key}`)} note={notes.get(field.key)} />
         ))}
       </fieldset>
 

@@ -1,8 +1,8 @@
 import "server-only";
-import { and, desc, eq, ne, or, sql } from "drizzle-orm";
+import { and, desc, eq, isNull, like, ne, or, sql } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
 import { db } from "../client";
-import { buildMembers, buildRevisions, builds, reviews, revisionParts, solveCache, users } from "../schema";
+import { buildMembers, buildRevisions, builds, exercises, handins, reviews, revisionParts, solveCache, users, workedExamples } from "../schema";
 import { snapshotPartsInTx } from "./snapshots";
 import { classReaderSql } from "./classwork";
 import { newId } from "./users";
@@ -18,6 +18,7 @@ export interface BuildSummary {
   variantNote: string | null;
   currentRevision: number;
   updatedAt: Date;
+  archivedAt: Date | null;
 }
 
 export interface RevisionRow {
@@ -41,6 +42,7 @@ const summaryColumns = {
   variantNote: builds.variantNote,
   currentRevision: builds.currentRevision,
   updatedAt: builds.updatedAt,
+  archivedAt: builds.archivedAt,
 };
 
 // MariaDB keeps JSON as LONGTEXT: the driver returns text.
@@ -48,24 +50,33 @@ function parseJson(value: unknown): unknown {
   return typeof value === "string" ? JSON.parse(value) : value;
 }
 
-/** The viewer's own builds and the ones shared with them (members first, then shared). */
-export async function listBuilds({ viewer }: { viewer: { id: string; role: string } }): Promise<{ mine: BuildSummary[]; shared: BuildSummary[] }> {
-  const mine = await db()
+const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+/**
+ * The viewer's own builds and the ones shared with them (members first, then shared);
+ * `q` keeps those whose title contains it. Archived builds are listed apart (`archived`:
+ * the viewer's own) and left out of the shared list.
+ */
+export async function listBuilds({ viewer, q }: { viewer: { id: string; role: string }; q?: string }): Promise<{ mine: BuildSummary[]; shared: BuildSummary[]; archived: BuildSummary[] }> {
+  const titleMatch = q ? like(builds.title, `%${escapeLike(q)}%`) : undefined;
+  const own = await db()
     .select(summaryColumns)
     .from(builds)
     .innerJoin(users, eq(users.id, builds.ownerId))
-    .where(eq(builds.ownerId, viewer.id))
+    .where(and(eq(builds.ownerId, viewer.id), titleMatch))
     .orderBy(desc(builds.updatedAt))
     .limit(500);
+  const mine = own.filter((b) => b.archivedAt === null);
+  const archived = own.filter((b) => b.archivedAt !== null);
   const shared = await db()
     .select(summaryColumns)
     .from(builds)
     .innerJoin(users, eq(users.id, builds.ownerId))
     .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer.id)))
-    .where(and(ne(builds.ownerId, viewer.id), or(eq(builds.visibility, "shared"), eq(buildMembers.userId, viewer.id))))
+    .where(and(ne(builds.ownerId, viewer.id), isNull(builds.archivedAt), titleMatch, or(eq(builds.visibility, "shared"), eq(buildMembers.userId, viewer.id))))
     .orderBy(desc(builds.updatedAt))
     .limit(500);
-  return { mine, shared };
+  return { mine, shared, archived };
 }
 
 /** A build with the viewer's access; undefined when it does not exist or may not be seen. */
@@ -178,6 +189,27 @@ export async function updateBuildMeta({ id, title, summary, visibility }: { id: 
   const set = { ...(title !== undefined && { title }), ...(summary !== undefined && { summary }), ...(visibility !== undefined && { visibility }) };
   if (Object.keys(set).length === 0) return;
   await db().update(builds).set({ ...set, updatedAt: new Date() }).where(eq(builds.id, id));
+}
+
+/** Archives (or brings back) a build: it leaves the lists but keeps every revision. */
+export async function setBuildArchived({ id, archived }: { id: string; archived: boolean }): Promise<void> {
+  await db().update(builds).set({ archivedAt: archived ? new Date() : null }).where(eq(builds.id, id));
+}
+
+/**
+ * What points at a build's revisions from outside it (reviews): such a build is archived
+ * rather than destroyed, so what was checked stays.
+ */
+export async function buildReferences({ id }: { id: string }): Promise<{ reviews: number; classwork: number }> {
+  const count = (r: { n: number }[]) => Number(r[0]?.n ?? 0);
+  const n = sql<number>`count(*)`;
+  const [rv, ex, st, hi] = await Promise.all([
+    db().select({ n }).from(reviews).where(eq(reviews.buildId, id)),
+    db().select({ n }).from(workedExamples).where(eq(workedExamples.buildId, id)),
+    db().select({ n }).from(exercises).where(eq(exercises.starterBuildId, id)),
+    db().select({ n }).from(handins).where(eq(handins.buildId, id)),
+  ]);
+  return { reviews: count(rv), classwork: count(ex) + count(st) + count(hi) };
 }
 
 /** Deletes a build; its revisions, part usage and cached results go with it (cascade). */

@@ -23,6 +23,8 @@ export const updateBuildSchema = z.strictObject({
   visibility: visibility.optional(),
   design: buildDesignSchema.optional(),
   note: z.string().trim().max(500).default(""),
+  /** Owner only: true takes the build out of the lists (it keeps every revision), false brings it back. */
+  archived: z.boolean({ error: "Archived is yes or no." }).optional(),
 });
 
 export const forkBuildSchema = z.strictObject({
@@ -38,3 +40,6 @@ export const solveBuildSchema = z.strictObject({
 
 export type CreateBuildInput = z.infer<typeof createBuildSchema>;
 export type UpdateBuildInput = z.infer<typeof updateBuildSchema>;
+
+/** The live editor's draft: any JSON; the preview validates it as a design and reports every issue. */
+export const previewDesignSchema = z.strictObject({ design: z.unknown() });

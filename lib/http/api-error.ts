@@ -1,4 +1,5 @@
-import { z } from "zod";
+import type { z } from "zod";
+import { labelsForSubject, machinePath, plainIssues } from "@/lib/messages";
 
 /**
  * One place that maps an error code to an HTTP status. Codes look like
@@ -39,15 +40,15 @@ export class ApiError extends Error {
   }
 }
 
-/** Formats a zod issue path (`nodes.2.id`) the way our error bodies name fields. */
-export function formatIssuePath(path: readonly PropertyKey[]): string {
-  return path.map((p) => (typeof p === "number" ? `[${p}]` : String(p))).join(".").replace(/\.\[/g, "[");
-}
+/** Formats a zod issue path (`nodes.2.id` → `nodes[2].id`) the way our error bodies name fields. */
+export const formatIssuePath = machinePath;
 
-/** Turns the first zod issue into an ApiError that names the field. */
-export function fromZodError(error: z.ZodError, subject: string): ApiError {
-  const issue = error.issues[0];
-  const path = issue ? formatIssuePath(issue.path) : "";
-  const message = issue ? `${path ? `${path}: ` : ""}${issue.message}` : "Invalid input";
-  return new ApiError(`bad_request:${subject}`, message, path);
+/**
+ * Turns a validation error into an ApiError: the message names the field by its label on
+ * screen in plain words (lib/messages), the path keeps the machine path of the first issue.
+ * `body` lets the labels depend on what was sent (a part's kind).
+ */
+export function fromZodError(error: z.ZodError, subject: string, body?: unknown): ApiError {
+  const first = plainIssues(error, labelsForSubject(subject, body))[0];
+  return new ApiError(`bad_request:${subject}`, first?.message ?? "The request could not be read.", first?.path ?? "");
 }

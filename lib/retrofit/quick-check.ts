@@ -8,6 +8,7 @@ import { joint } from "./compile/joints";
 import { requiredLinkResistance } from "./inverse";
 import { verdictFor, type Verdict } from "./limits";
 import { ProblemList, type Problem } from "./problems";
+import { checkFinFit, derivedFinGap, fillFinGap } from "./quick-check-fins";
 import { q, trace } from "./trace";
 
 /** Junction limit used when the caller gives none: 125 °C, a common rating of white LEDs (common practice; many allow 150 °C). */
@@ -18,11 +19,21 @@ export const QUICK_CHECK_DEFAULT_MAX_TJ_C = 125;
  * declared K/W or its geometry (the heatsink part's fields); an interface and Rth(j-sp)
  * are optional.
  */
+/** A sink by its geometry; `gapWorkedOut` is set when the gap between fins was left empty (see quick-check-fins.ts). */
+const geometrySinkSchema = z.preprocess(
+  fillFinGap,
+  z
+    .strictObject({ geometry: KIND_DEFINITIONS.heatsink.specsSchema, gapWorkedOut: z.boolean().optional() })
+    .superRefine((s, ctx) => {
+      if (s.geometry.rating === "geometry") checkFinFit(s.geometry, s.gapWorkedOut !== true, ctx, ["geometry"]);
+    }),
+);
+
 export const quickCheckInputSchema = z.strictObject({
   heatWatts: unitField("power", { gt: 0, max: 500 }),
   sink: z.union([
     z.strictObject({ declaredKPerW: unitField("thermalResistance", { gt: 0, max: 1000 }) }),
-    z.strictObject({ geometry: KIND_DEFINITIONS.heatsink.specsSchema }),
+    geometrySinkSchema,
   ]),
   interface: z.strictObject({ areaM2: unitField("area", { gt: 0, max: 0.1 }), specs: KIND_DEFINITIONS.interface.specsSchema }).optional(),
   rthJspKPerW: unitField("thermalResistance", { gt: 0, max: 1000, required: false }),
@@ -46,9 +57,32 @@ export interface QuickCheckResult {
   network: Network | null;
   traces: Trace[];
   problems: Problem[];
+  /** The gap between fins the model used (from width, count and thickness), m; null without fins or for a declared sink. */
+  finGapM: number | null;
+  /** True when the gap was left empty and worked out; false when it was given (and checked against the width). */
+  finGapWorkedOut: boolean;
 }
 
 const MARGIN_K = 10;
+
+/** The gap between fins as the model uses it; a given gap far from it is reported, never silently dropped. */
+function finGapOf(input: QuickCheckInput, problems: ProblemList): { finGapM: number | null; finGapWorkedOut: boolean } {
+  if (!("geometry" in input.sink) || input.sink.geometry.rating !== "geometry") return { finGapM: null, finGapWorkedOut: false };
+  const g = input.sink.geometry;
+  const workedOut = input.sink.gapWorkedOut === true;
+  const used = derivedFinGap(g.baseWidthM, g.finCount, g.finThicknessM ?? 0);
+  if (used === null) return { finGapM: null, finGapWorkedOut: workedOut };
+  const given = g.finSpacingM;
+  if (!workedOut && given !== undefined && Math.abs(given - used) > Math.max(0.1 * used, 0.0003)) {
+    const mm = (m: number) => `${Number((m * 1000).toPrecision(3))} mm`;
+    problems.add(
+      "sink.geometry.finSpacingM",
+      `you gave ${mm(given)}, but ${g.finCount} fins ${mm(g.finThicknessM ?? 0)} thick across ${mm(g.baseWidthM)} leave gaps of ${mm(used)}; the check uses ${mm(used)} — measure the width or the gap again`,
+      "warning",
+    );
+  }
+  return { finGapM: used, finGapWorkedOut: workedOut };
+}
 
 export function quickCheck(input: QuickCheckInput): QuickCheckResult {
   const problems = new ProblemList();
@@ -69,7 +103,8 @@ export function quickCheck(input: QuickCheckInput): QuickCheckResult {
     "declaredKPerW" in input.sink
       ? compileSinkToAir(b, { rating: "declared", sinkToAirKPerW: input.sink.declaredKPerW, ratedAirflow: "natural" }, "ambient", "sink", input.ambientC)
       : compileSinkToAir(b, input.sink.geometry, "ambient", "sink.geometry", input.ambientC);
-  const empty: QuickCheckResult = { tjC: null, solderPointC: null, sinkC: null, maxTjC: maxTj, headroomK: null, verdict: null, sinkKPerW: null, requiredForLimitKPerW: null, requiredForBudgetKPerW: null, network: null, traces: [], problems: [] };
+  const gap = finGapOf(input, problems);
+  const empty: QuickCheckResult = { tjC: null, solderPointC: null, sinkC: null, maxTjC: maxTj, headroomK: null, verdict: null, sinkKPerW: null, requiredForLimitKPerW: null, requiredForBudgetKPerW: null, network: null, traces: [], problems: [], ...gap };
   if (!sinkOut) return { ...empty, problems: problems.list };
   const network = b.network([{ node: "junction", watts: input.heatWatts }]);
   try {
@@ -94,6 +129,7 @@ export function quickCheck(input: QuickCheckInput): QuickCheckResult {
       network,
       traces,
       problems: problems.list,
+      ...gap,
     };
   } catch (err) {
     if (!isThermalInputError(err)) throw err;

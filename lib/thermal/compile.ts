@@ -1,3 +1,4 @@
+import { labelFor } from "@/lib/messages/plain-issues";
 import { toKelvin } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
@@ -18,7 +19,7 @@ export const formatPath = (path: readonly (string | number)[]): string =>
 export function assertReferences(network: Network): Map<string, number> {
   const { issues, index } = checkReferences(network);
   const issue = issues[0];
-  if (issue) throw new ThermalInputError("bad_request:network", `${formatPath(issue.path)}: ${issue.message}`, formatPath(issue.path));
+  if (issue) throw new ThermalInputError("bad_request:network", `${labelFor(issue.path)}: ${issue.message}`, formatPath(issue.path));
   return index;
 }
 

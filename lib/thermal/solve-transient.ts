@@ -1,3 +1,4 @@
+import { labelFor } from "@/lib/messages/plain-issues";
 import { compileNetwork, formatPath } from "./compile";
 import { NETWORK_LIMITS, toKelvin, ZERO_CELSIUS_K } from "./constants";
 import { ThermalInputError } from "./errors";
@@ -38,7 +39,7 @@ export interface TransientSolverSettings {
 /** Fills defaults and turns the caller's options into one complete object in kelvin, solver order. */
 function resolveOptions(network: Network, solverIndex: Int32Array, options: TransientOptions, settings: TransientSolverSettings): ResolvedTransientOptions {
   const issue = transientIssues({ network, ...options }, { maxSteps: NETWORK_LIMITS.maxTransientSteps, maxValues: NETWORK_LIMITS.maxTransientValues })[0];
-  if (issue) throw new ThermalInputError("bad_request:transient", `${formatPath(issue.path)}: ${issue.message}`, formatPath(issue.path));
+  if (issue) throw new ThermalInputError("bad_request:transient", `${labelFor(issue.path)}: ${issue.message}`, formatPath(issue.path));
   const initialK = new Float64Array(network.nodes.length);
   const init = options.initialC;
   network.nodes.forEach((node, i) => {

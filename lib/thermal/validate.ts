@@ -42,7 +42,7 @@ export function checkReferences(network: NetworkRefs): { issues: ReferenceIssue[
     if (id === ambient) {
       issues.push({ message: `node id "${ambient}" is reserved for the fixed ambient node`, path: ["nodes", i, "id"] });
     } else if (seen.has(id)) {
-      issues.push({ message: `duplicate node id "${id}" (also nodes[${seen.get(id)}])`, path: ["nodes", i, "id"] });
+      issues.push({ message: `duplicate node id "${id}" (also node ${(seen.get(id) ?? 0) + 1})`, path: ["nodes", i, "id"] });
     } else seen.set(id, i);
   }
   for (let i = 0; i < links.length; i++) {

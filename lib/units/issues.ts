@@ -1,4 +1,5 @@
 import type { z } from "zod";
+import { plainIssues } from "@/lib/messages/plain-issues";
 
 export interface FieldError {
   /** "specs.massKg", "points[3].x"; "" for the whole value. */
@@ -15,9 +16,9 @@ export function formatPath(path: readonly PropertyKey[]): string {
   }, "");
 }
 
-/** Flattens a zod error into path + message pairs, in the order zod found them. */
+/** Flattens a zod error into path + problem pairs in plain words (lib/messages), in the order zod found them. */
 export function fieldErrors(error: z.ZodError): FieldError[] {
-  return error.issues.map((issue) => ({ path: formatPath(issue.path), message: issue.message }));
+  return plainIssues(error).map((issue) => ({ path: issue.path, message: issue.problem }));
 }
 
 /** "points[3].x: must be greater than the previous x (25)". */

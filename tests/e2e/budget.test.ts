@@ -21,6 +21,7 @@ describe("a retrofit from Parts bin records to its Budget, in chromium", () => {
     const page = await session.browser.newPage();
     await signInThroughForm(page, "maker@sinkwise.test");
     await page.getByRole("button", { name: "New build" }).click();
+    await page.getByRole("radio", { name: /Empty build/ }).check();
     await page.getByLabel("Title of the new build").fill(`E2E lantern ${tag}`);
     await page.getByRole("button", { name: "Create" }).click();
     await page.getByTestId("heat-path-editor").waitFor();
@@ -81,6 +82,7 @@ describe("a retrofit from Parts bin records to its Budget, in chromium", () => {
     const page = await session.browser.newPage();
     await signInThroughForm(page, "maker@sinkwise.test");
     await page.getByRole("button", { name: "New build" }).click();
+    await page.getByRole("radio", { name: /Empty build/ }).check();
     await page.getByLabel("Title of the new build").fill(`E2E bad unit ${tag}`);
     await page.getByRole("button", { name: "Create" }).click();
     await page.getByTestId("heat-path-editor").waitFor();

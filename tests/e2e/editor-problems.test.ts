@@ -49,4 +49,37 @@ describe("the Heat path editor shows the evaluation's problems by their fields, 
     await page.screenshot({ path: `${ARTEFACTS}/editor-problems.png`, fullPage: true });
     await page.locator("fieldset", { has: cellField }).screenshot({ path: `${ARTEFACTS}/editor-problems-pack.png` });
   });
+
+  it("checks the unsaved draft live, puts a bad value's message next to its field in plain words, and saves nothing", async () => {
+    const maker = await signedIn("maker@sinkwise.test");
+    const page = await session.browser.newPage();
+    await signInThroughForm(page, "maker@sinkwise.test");
+    await page.goto(`${BASE_URL}/builds/${buildId}`);
+    await page.getByTestId("live-verdict").waitFor({ timeout: 30_000 });
+    expect(await page.getByTestId("live-state").textContent()).toContain("as saved");
+    // One cell instead of two: the pack now suits the driver; the draft is checked before saving.
+    await page.getByRole("spinbutton", { name: "Cells in series", exact: true }).fill("1");
+    await page.getByTestId("live-state").filter({ hasText: "Unsaved draft" }).waitFor({ timeout: 30_000 });
+    const cellField = page.locator("label").filter({ has: page.getByRole("combobox", { name: "Cell", exact: true }) });
+    await cellField.getByTestId("field-problem").filter({ hasText: "outside the driver's input range" }).waitFor({ state: "detached", timeout: 30_000 });
+    // A fraction where a whole number belongs: the message sits under the field, named by its label.
+    await page.getByRole("spinbutton", { name: "Chargers in parallel", exact: true }).fill("2.5");
+    const chargers = page.locator("[data-field='pack.chargerCount']");
+    await chargers.getByText("Chargers in parallel: must be a whole number").waitFor({ timeout: 30_000 });
+    await page.evaluate(() => window.scrollTo(0, 0));
+    await page.getByRole("button", { name: /Save as revision/ }).click();
+    // The first field in error is scrolled into view, above the save bar.
+    await page.waitForFunction(() => {
+      const el = document.querySelector("[data-field-error='true']");
+      const bar = document.querySelector("[data-testid='save-bar']");
+      if (!el || !bar) return false;
+      const r = el.getBoundingClientRect();
+      return r.top >= 0 && r.bottom <= bar.getBoundingClientRect().top;
+    }, undefined, { timeout: 10_000 });
+    await page.screenshot({ path: `${ARTEFACTS}/editor-live-error.png` });
+    const text = (await page.getByTestId("heat-path-editor").textContent()) ?? "";
+    expect(text).not.toMatch(/NaN|design\.pack|Invalid input|expected int/);
+    const after = await maker.get(`/api/v1/builds/${buildId}`);
+    expect((after.body.build as { currentRevision: number }).currentRevision).toBe(1);
+  });
 });

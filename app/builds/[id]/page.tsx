@@ -5,7 +5,6 @@ import { BuildReviews } from "@/components/reviews/build-reviews";
 import type { JsonObject } from "@/components/builds/design-state";
 import { HeatPathEditor } from "@/components/builds/heat-path-editor";
 import { MembersPanel } from "@/components/builds/members-panel";
-import { HeatPathPreview } from "@/components/budget/heat-path-preview";
 import { PartsChangedNotice } from "@/components/builds/parts-changed-notice";
 import { loadBuildPage } from "@/server/builds/load";
 import { partChangesSince } from "@/server/builds/part-changes";
@@ -26,10 +25,6 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
         <BuildNav buildId={build.id} current="heat-path" />
         <PartsChangedNotice buildId={build.id} revision={revision.number} design={revision.design} changes={partChanges} canEdit={build.access.canEdit} />
         <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
-        <section className="rounded-lg border border-line bg-white/60 p-4">
-          <h2 className="mb-2 font-semibold">What the build means thermally</h2>
-          <HeatPathPreview buildId={build.id} revision={revision.number} ambientC={(revision.design as { environment?: { ambientC?: number } }).environment?.ambientC ?? 25} />
-        </section>
       </div>
       <aside className="space-y-4">
         <BuildActions buildId={build.id} isOwner={build.access.isOwner} />

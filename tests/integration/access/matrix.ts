@@ -133,6 +133,7 @@ export const MATRIX: Row[] = [
   { route: "GET /api/v1/builds/[id]/shares", path: (w) => `/api/v1/builds/${w.build}/shares`, expect: [401, 200, 404, 403, 404, 404, 403] },
   { route: "POST /api/v1/builds/[id]/shares", path: (w) => `/api/v1/builds/${w.build}/shares`, body: () => ({ expiresInDays: 1 }), expect: [401, 201, 404, 403, 404, 404, 403] },
   { route: "DELETE /api/v1/builds/[id]/shares/[shareId]", path: async (w) => { const s = await w.fresh.share(); return `/api/v1/builds/${s.buildId}/shares/${s.id}`; }, expect: [401, 200, 404, 404, 404, 404, 403] },
+  { route: "POST /api/v1/builds/[id]/preview", path: (w) => `/api/v1/builds/${w.build}/preview`, body: () => ({ design: { lightEngine: { count: 1 } } }), expect: [401, 200, 404, 403, 404, 404, 403] },
   { route: "POST /api/v1/builds/[id]/solve", path: (w) => `/api/v1/builds/${w.build}/solve`, body: () => ({}), expect: [401, 200, 404, 200, 404, 404, 200] },
   { route: "GET /api/v1/builds/[id]/variants", path: (w) => `/api/v1/builds/${w.build}/variants`, expect: [401, 200, 404, 200, 404, 404, 200] },
   { route: "GET /api/v1/share/[token]", path: (w) => `/api/v1/share/${w.share.token}`, expect: same(200) },

@@ -63,7 +63,7 @@ describe("POST /api/v1/solve/steady", () => {
       [{ ...good, nodes: [...good.nodes, { id: "ambient" }] }, "nodes[3].id", 'node id "ambient" is reserved'],
       [{ ...good, links: [{ ...good.links[2], areaM2: 0 }, ...good.links.slice(1)] }, "links[0].areaM2", "positive"],
       [{ ...good, links: [...good.links.slice(0, 4), { ...good.links[4], emissivity: 1.2 }] }, "links[4].emissivity", "emissivity must be in (0, 1]"],
-      [{ ...good, ambientC: "25" }, "ambientC", "expected number"],
+      [{ ...good, ambientC: "25" }, "ambientC", "Ambient: must be a number"],
     ];
     for (const [body, path, fragment] of cases) {
       const e = await expectError(await post(steady, JSON.stringify(body), "steady"), 400, "bad_request:network", path);

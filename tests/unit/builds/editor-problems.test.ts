@@ -22,7 +22,7 @@ describe("editor problems: which field a problem is shown under", () => {
   });
 
   it("matches prefixes only at a segment boundary and leaves the rest unplaced", () => {
-    expect(editorFieldFor("housingShape.form")).toBeNull();
+    expect(editorFieldFor("housingShape.characteristicLengthM")).toBeNull();
     expect(editorFieldFor("lightEngine.footprintM2")).toBeNull();
     expect(editorFieldFor("result.scenarios[0].thermal")).toBeNull();
   });

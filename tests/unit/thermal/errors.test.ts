@@ -25,8 +25,8 @@ function thrown(f: () => unknown): ThermalInputError {
 describe("bad input to the library (callers that skip the schema get the same messages)", () => {
   it("unknown node, duplicate id, reserved ambient, self link, source on ambient", () => {
     const e1 = thrown(() => solveSteady({ ...base, links: [...base.links, { from: "a", to: "zz", type: "resistance", kelvinPerWatt: 1 }] }));
-    expect([e1.code, e1.path, e1.message]).toEqual(["bad_request:network", "links[2].to", 'links[2].to: link names unknown node "zz"']);
-    expect(thrown(() => solveSteady({ ...base, nodes: [...base.nodes, { id: "a" }] })).message).toBe('nodes[2].id: duplicate node id "a" (also nodes[0])');
+    expect([e1.code, e1.path, e1.message]).toEqual(["bad_request:network", "links[2].to", 'Link 3 › to: link names unknown node "zz"']);
+    expect(thrown(() => solveSteady({ ...base, nodes: [...base.nodes, { id: "a" }] })).message).toBe('Node 3 › id: duplicate node id "a" (also node 1)');
     expect(thrown(() => solveSteady({ ...base, nodes: [...base.nodes, { id: "ambient" }] })).path).toBe("nodes[2].id");
     expect(thrown(() => solveSteady({ ...base, links: [...base.links, { from: "a", to: "a", type: "resistance", kelvinPerWatt: 1 }] })).message).toContain("to itself");
     expect(thrown(() => solveSteady({ ...base, sources: [{ node: "ambient", watts: 1 }] })).path).toBe("sources[0].node");

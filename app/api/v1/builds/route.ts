@@ -4,9 +4,10 @@ import { requireUser } from "@/server/auth/session";
 import { assertDesignParts } from "@/server/builds/load";
 import { json, readJson, route } from "@/server/route";
 
-export const GET = route(async () => {
+export const GET = route(async (request) => {
   const user = await requireUser();
-  return json(await listBuilds({ viewer: user }));
+  const q = new URL(request.url).searchParams.get("q")?.trim().slice(0, 160) || undefined;
+  return json(await listBuilds({ viewer: user, q }));
 });
 
 export const POST = route(async (request) => {

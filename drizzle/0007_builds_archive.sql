@@ -1,0 +1,1 @@
+ALTER TABLE `build` ADD `archived_at` datetime(3);

@@ -1,0 +1,23 @@
+/** The Quick check form's labels; messages about its fields use the same words. */
+export const QUICK_CHECK_LABELS = {
+  heatWatts: "Heat from the emitter",
+  ambientC: "Ambient",
+  rthJspKPerW: "Rth junction → solder point",
+  maxTjC: "Maximum junction temperature",
+  sink: "Heatsink",
+  "sink.declaredKPerW": "Sink-to-air resistance",
+  "sink.geometry": "Heatsink geometry",
+  "sink.geometry.baseLengthM": "Base length (along the fins)",
+  "sink.geometry.baseWidthM": "Base width (across the fins)",
+  "sink.geometry.baseThicknessM": "Base thickness",
+  "sink.geometry.finCount": "Fin count",
+  "sink.geometry.finHeightM": "Fin height",
+  "sink.geometry.finThicknessM": "Fin thickness",
+  "sink.geometry.finSpacingM": "Gap between fins",
+  "sink.geometry.material": "Material",
+  "sink.geometry.finish": "Finish",
+  interface: "Interface",
+  "interface.areaM2": "Contact area",
+  "interface.specs.bondLineM": "Bond line",
+  "interface.specs.conductivityWPerMK": "Conductivity",
+} as const;

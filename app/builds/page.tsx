@@ -49,7 +49,7 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
   const { mine, shared, archived } = await listBuilds({ viewer: user, q });
   return (
     <div className="space-y-8">
-      <div className="flex items-center gap-4">
+      <div className="flex items-start gap-4">
         <h1 className="text-2xl font-semibold">Builds</h1>
         <div className="ml-auto">
           <NewBuildButton />

@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { problemLabel } from "@/lib/messages";
 import { CautionsPanel } from "./cautions-panel";
 import { DeratingCharts } from "./derating-charts";
 import { ElectricalPanel } from "./electrical-panel";
@@ -46,7 +47,7 @@ export function BudgetReport({ evaluation, ambientC, unit = "C" }: { evaluation:
           <h2 className="mb-1 font-medium">What Sinkwise could not settle</h2>
           <ul className="list-disc space-y-0.5 pl-5">
             {errors.map((p, i) => (
-              <li key={i}><span className="font-mono text-xs">{p.field}</span>: {p.message}</li>
+              <li key={i}><span className="font-medium">{problemLabel(p.field)}</span>: {p.message}</li>
             ))}
           </ul>
         </section>

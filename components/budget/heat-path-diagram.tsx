@@ -24,10 +24,10 @@ export function HeatPathDiagram({ scenario, ambientC, unit }: { scenario: Scenar
       {links.map((l, i) => {
         const y1 = y(l.from);
         const y2 = y(l.to);
-        const x = 250 + (i % 8) * 42;
+        const x = 290 + (i % 8) * 36;
         return (
           <g key={l.index}>
-            <path d={`M 220 ${y1} C ${x} ${y1}, ${x} ${y2}, 220 ${y2}`} fill="none" stroke="#c2410c" strokeOpacity={0.55} strokeWidth={Math.min(6, 1 + Math.abs(l.watts))} />
+            <path d={`M 260 ${y1} C ${x} ${y1}, ${x} ${y2}, 260 ${y2}`} fill="none" stroke="#c2410c" strokeOpacity={0.55} strokeWidth={Math.min(6, 1 + Math.abs(l.watts))} />
             <title>{`${l.place}: ${formatFigure(l.watts, "power")}, ${formatFigure(l.kelvinPerWatt, "thermalResistance")}`}</title>
           </g>
         );
@@ -36,9 +36,9 @@ export function HeatPathDiagram({ scenario, ambientC, unit }: { scenario: Scenar
         const c = n.id === "ambient" ? ambientC : (t.temperaturesC[n.id] ?? ambientC);
         return (
           <g key={n.id}>
-            <rect x={10} y={y(n.id) - 16} width={210} height={32} rx={5} fill="white" stroke={heatColour(c, ambientC, hottest)} strokeWidth={2} />
+            <rect x={10} y={y(n.id) - 16} width={250} height={32} rx={5} fill="white" stroke={heatColour(c, ambientC, hottest)} strokeWidth={2} />
             <text x={20} y={y(n.id) + 4} fontSize={12} fill="#2b2520">{n.place}</text>
-            <text x={212} y={y(n.id) + 4} fontSize={12} textAnchor="end" fill="#6b6158">{formatFigure(c, "temperature", { temperatureUnit: unit })}</text>
+            <text x={252} y={y(n.id) + 4} fontSize={12} textAnchor="end" fill="#6b6158">{formatFigure(c, "temperature", { temperatureUnit: unit })}</text>
           </g>
         );
       })}

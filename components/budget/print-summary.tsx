@@ -2,6 +2,7 @@ import { formatAgainstLimit, formatDuration, formatFigure as fig, formatHeadroom
 import { driveTrace, nodeBalanceTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
 import { limitLabel, VERDICT_STYLE } from "./format";
 import { Traceable } from "./trace-view";
+import { problemLabel } from "@/lib/messages";
 import type { Evaluation } from "./types";
 
 /** The one-page report: every scenario's limits, the modes, the electrical side, the cautions. */
@@ -74,7 +75,7 @@ export function PrintSummary({ evaluation, title, revision, owner }: { evaluatio
         <section>
           <h2 className="mb-1 font-semibold">Open problems</h2>
           <ul className="list-disc pl-5">
-            {evaluation.problems.filter((p) => p.severity === "error").map((p, i) => <li key={i}>{p.field}: {p.message}</li>)}
+            {evaluation.problems.filter((p) => p.severity === "error").map((p, i) => <li key={i}>{problemLabel(p.field)}: {p.message}</li>)}
           </ul>
         </section>
       )}

@@ -32,7 +32,7 @@ export function BuildRowActions({ id, title, archived }: { id: string; title: st
   }
   const rename = () => call(async () => (await fetchJson(`/api/v1/builds/${id}`, { method: "PATCH", body: { title: name } }), null));
   const archive = (value: boolean) => call(async () => (await fetchJson(`/api/v1/builds/${id}`, { method: "PATCH", body: { archived: value } }), null));
-  const remove = () => call(async () => (await fetchJson<{ message?: string }>(`/api/v1/builds/${id}`, { method: "DELETE" })).message ?? null);
+  const remove = () => call(async () => (await fetchJson<{ message?: string }>(`/api/v1/builds/${id}`, { method: "DELETE" })).message ?? `“${title}” was deleted.`);
 
   return (
     <span className="flex flex-wrap items-center gap-3 text-sm" data-testid="build-row-actions">

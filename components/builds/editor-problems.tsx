@@ -1,17 +1,9 @@
 "use client";
 
-import { designLabels } from "@/lib/messages";
+import { pathKeys, problemLabel } from "@/lib/messages";
 import type { Problem, Severity } from "@/lib/retrofit";
 
-/** "driver.modes[2]" → ["driver", "modes", 2]. */
-export function pathKeys(field: string): (string | number)[] {
-  return field.split(/\.|\[|\]/).filter((k) => k !== "").map((k) => (/^\d+$/.test(k) ? Number(k) : k));
-}
-
-/** The on-screen name of what a problem is about, never its machine path. */
-export function problemLabel(field: string): string {
-  return designLabels(pathKeys(field)) ?? "The build as a whole";
-}
+export { pathKeys, problemLabel };
 
 /**
  * Where the editor shows an evaluation problem: the problem names a slot of the design

@@ -5,6 +5,9 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { type ReactNode, useEffect, useMemo, useState } from "react";
 import { useSolve } from "@/components/budget/use-solve";
+import { VERDICT_STYLE } from "@/components/budget/format";
+import { useMe } from "@/components/shell/use-me";
+import { formatHeadroom } from "@/lib/units/figures";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
@@ -72,6 +75,13 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   const evaluation = live ? (preview.answer?.valid ? preview.answer.evaluation : null) : (solved.data?.evaluation ?? null);
   const problems = useMemo(() => evaluation?.problems ?? [], [evaluation]);
   const placed = useMemo(() => placeProblems(problems), [problems]);
+  const checking = live ? preview.status === "checking" : solved.isPending;
+  const me = useMe();
+  // The nearest limit over every case, for the save bar: the verdict stays in sight while editing.
+  const worst = useMemo(() => {
+    const limits = (evaluation?.scenarios ?? []).flatMap((s) => s.thermal?.limits ?? []);
+    return limits.reduce<(typeof limits)[number] | null>((w, l) => (w === null || l.headroomK < w.headroomK ? l : w), null);
+  }, [evaluation]);
   const liveIssues = useMemo(() => (live && preview.answer && !preview.answer.valid ? preview.answer.issues : []), [live, preview.answer]);
 
   // Every field rendered registers its path here, so a message finds the field it concerns.
@@ -227,13 +237,13 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         </ul>
       )}
       {sections}
-      <section className="rounded-lg border border-line bg-white/60 p-4">
+      <section id="live-check" className="scroll-mt-20 rounded-lg border border-line bg-white/60 p-4">
         <h2 className="mb-2 font-semibold">What the build means thermally</h2>
         <LiveCheck
           evaluation={evaluation}
           unsaved={live}
           revision={revision}
-          checking={live ? preview.status === "checking" : solved.isPending}
+          checking={checking}
           ambientC={typeof getPath(design, "environment.ambientC") === "number" ? (getPath(design, "environment.ambientC") as number) : 25}
         />
       </section>
@@ -245,6 +255,11 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
           <button type="button" onClick={save} disabled={busy || !dirty} className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90 disabled:opacity-50">
             {busy ? "Saving…" : `Save as revision ${revision + 1}`}
           </button>
+          <a href="#live-check" className="flex items-center gap-1.5 text-sm text-ink-soft hover:text-ember" data-testid="bar-verdict" title="What the build means thermally, below">
+            <span>{live ? "Draft" : `Revision ${revision}`}:</span>
+            <span className={`rounded border px-1.5 text-xs font-semibold ${VERDICT_STYLE[evaluation?.verdict ?? ""] ?? "border-line"}`}>{evaluation?.verdict ?? (checking ? "checking…" : liveIssues.length > 0 ? "fix the marked fields" : "not worked out yet")}</span>
+            {worst && <span className="text-xs">headroom {formatHeadroom(worst.headroomK, { temperatureUnit: me.data?.temperatureUnit ?? "C" })} ({worst.place})</span>}
+          </a>
           {dirty ? <span className="text-xs text-ember" data-testid="unsaved-note">Unsaved changes: the figures are of the draft.</span> : <Link href={`/builds/${buildId}/budget`} className="text-sm text-ink-soft hover:text-ember">Open the Budget of “{title}”</Link>}
           {saved && <span role="status" className="text-sm text-ok">{saved}</span>}
           {issues.length > 0 && <span role="alert" className="text-sm text-over">{issues.length === 1 ? "One field needs attention" : `${issues.length} fields need attention`}: see the message beside it.</span>}

@@ -3,7 +3,8 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
-import { fieldHint, inputUnitLabel, kindDefinition, materialOptions, type FieldDef, type PartKind } from "@/lib/parts";
+import { fieldHint, inputUnitLabel, placeholderText, kindDefinition, materialOptions, type FieldDef, type PartKind } from "@/lib/parts";
+import { STARTER_PARTS } from "@/lib/starter";
 import { formatQuantity, METRIC_PREFERENCES } from "@/lib/units";
 import type { Json, JsonObject } from "./design-state";
 
@@ -30,6 +31,14 @@ function ModesInput({ modes, onChange, issueAt, disabled }: { modes: ModeRow[]; 
     <div className="col-span-full space-y-1 text-sm">
       <span className="block font-medium">Modes</span>
       {issueAt("modes") && <span role="alert" className="block text-xs text-over">{issueAt("modes")}</span>}
+      {modes.length > 0 && (
+        <div className="grid grid-cols-[1fr_1fr_1fr_auto] gap-2 text-xs text-ink-soft" aria-hidden>
+          <span>Name</span>
+          <span>Current into the LEDs</span>
+          <span>Efficiency</span>
+          <span className="invisible">Remove</span>
+        </div>
+      )}
       {modes.map((m, i) => (
         <div key={i} className="grid grid-cols-[1fr_1fr_1fr_auto] items-start gap-2" data-field={`mode-${i}`}>
           <input aria-label={`Mode ${i + 1} name`} placeholder="high" value={String(m.name ?? "")} onChange={(e) => set(i, "name", e.target.value)} className={inputClass} disabled={disabled} />
@@ -58,6 +67,8 @@ export function InlinePart({ kind, slotPath, slot, onChange, issues, disabled }:
   // A part just started is open to type in; a filled one (a starting point's) stays folded until asked.
   const [open, setOpen] = useState(Object.keys(inline).length === 0);
   const hasIssues = issues.some((i) => i.path.replace(/^design\./, "").startsWith(`${slotPath}.`));
+  // A starter-bin part keeps its name until the maker changes it.
+  const fromStarter = STARTER_PARTS.some((p) => p.kind === kind && p.name === slot.name);
   const variant = def.discriminator ? String(inline[def.discriminator] ?? "") : undefined;
   const fields = def.fields.filter((f) => f.variant === undefined || f.variant === variant);
   const rel = (p: string) => p.replace(/\[(\d+)\]/g, ".$1");
@@ -93,7 +104,7 @@ export function InlinePart({ kind, slotPath, slot, onChange, issues, disabled }:
     >
       <summary className="cursor-pointer text-sm">
         <span className="font-medium">{String(slot.name ?? "") || `New ${def.label.toLowerCase()}`}</span>
-        <span className="text-ink-soft"> · typed in here{hasIssues ? " · needs attention" : ""}</span>
+        <span className="text-ink-soft"> · {fromStarter ? "from the starter bin, an estimate: open to change it" : "typed in here"}{hasIssues ? " · needs attention" : ""}</span>
       </summary>
       <p className="my-2 text-xs text-ink-soft">
         It travels with this build. The same checks as the Parts bin apply; what you leave empty stays empty.
@@ -122,7 +133,7 @@ export function InlinePart({ kind, slotPath, slot, onChange, issues, disabled }:
               </select>
             );
           } else {
-            control = <input aria-label={label} aria-invalid={error ? true : undefined} inputMode={f.type === "quantity" ? "decimal" : undefined} placeholder={hint?.placeholder} value={shown(f, value)} onChange={(e) => setField(f.key, e.target.value.trim() === "" ? undefined : e.target.value)} className={inputClass} disabled={disabled} />;
+            control = <input aria-label={label} aria-invalid={error ? true : undefined} inputMode={f.type === "quantity" ? "decimal" : undefined} placeholder={placeholderText(hint)} value={shown(f, value)} onChange={(e) => setField(f.key, e.target.value.trim() === "" ? undefined : e.target.value)} className={inputClass} disabled={disabled} />;
           }
           const unit = inputUnitLabel(f);
           return (

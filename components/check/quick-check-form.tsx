@@ -111,9 +111,9 @@ export function QuickCheckForm() {
         </fieldset>
         <fieldset className="grid gap-3 sm:grid-cols-3">
           <legend className="mb-1 text-sm font-medium">Interface (optional)</legend>
-          <label className="block text-sm"><span className="mb-1 block">Bond line</span><input name="bondLineM" placeholder="50 um" aria-label="Bond line" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
-          <label className="block text-sm"><span className="mb-1 block">Conductivity</span><input name="conductivityWPerMK" placeholder="3 W/(m K)" aria-label="Conductivity" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
-          <label className="block text-sm"><span className="mb-1 block">Contact area</span><input name="contactAreaM2" placeholder="2.5 cm²" aria-label="Contact area" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
+          <label className="block text-sm"><span className="mb-1 block">Bond line</span><input name="bondLineM" placeholder="e.g. 50 µm" aria-label="Bond line" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
+          <label className="block text-sm"><span className="mb-1 block">Conductivity</span><input name="conductivityWPerMK" placeholder="e.g. 3 W/(m·K)" aria-label="Conductivity" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
+          <label className="block text-sm"><span className="mb-1 block">Contact area</span><input name="contactAreaM2" placeholder="e.g. 2.5 cm²" aria-label="Contact area" className="w-full rounded border border-line bg-white px-2 py-1.5" /></label>
         </fieldset>
         <button type="submit" className="rounded bg-ember px-4 py-2 text-sm font-medium text-white hover:opacity-90" disabled={check.isPending}>
           {check.isPending ? "Working…" : "Check it"}

@@ -1,7 +1,7 @@
 "use client";
 
 import type { UseFormRegister } from "react-hook-form";
-import { fieldHint, inputUnitLabel, materialOptions, type FieldDef, type PartKind } from "@/lib/parts";
+import { fieldHint, inputUnitLabel, materialOptions, placeholderText, type FieldDef, type PartKind } from "@/lib/parts";
 import { QUANTITY_INFO } from "@/lib/units";
 import type { PartFormValues } from "./form-values";
 import { inputClass } from "./labels";
@@ -37,7 +37,7 @@ export function FieldInput({ kind, field, register, error, note }: { kind: PartK
     );
   } else {
     // The field's own typical value, not the unit's generic example.
-    const placeholder = hint?.placeholder ?? (field.type === "quantity" ? QUANTITY_INFO[field.quantity].example : "");
+    const placeholder = placeholderText(hint, field.type === "quantity" ? QUANTITY_INFO[field.quantity].example : "");
     control = <input {...common} {...register(name)} type="text" inputMode={field.type === "quantity" ? "decimal" : undefined} placeholder={placeholder} autoComplete="off" />;
   }
   return (

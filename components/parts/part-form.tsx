@@ -128,6 +128,13 @@ export function PartForm({ kind, part, prefs }: { kind: PartKind; part?: PartDto
           <legend className="px-1 text-sm font-semibold">Modes</legend>
           <p className="text-xs text-ink-soft">Output is a current (“2.8 A”, “350 mA”) or a power (“3 W”); efficiency is output ÷ input power.</p>
           {errorAt(errors, "specs.modes") && <p role="alert" className="text-xs text-over">{errorAt(errors, "specs.modes")}</p>}
+          {modes.fields.length > 0 && (
+            <div className="flex gap-2 text-xs text-ink-soft" aria-hidden>
+              <span className="w-32">Name</span>
+              <span className="w-32">Output</span>
+              <span className="w-28">Efficiency</span>
+            </div>
+          )}
           {modes.fields.map((row, index) => {
             const outputError = errorAt(errors, `specs.modes.${index}.outputCurrentA`) ?? errorAt(errors, `specs.modes.${index}.outputPowerW`);
             const rowErrors = [errorAt(errors, `specs.modes.${index}.name`), outputError, errorAt(errors, `specs.modes.${index}.efficiency`)].filter(Boolean);

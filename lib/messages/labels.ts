@@ -86,10 +86,23 @@ export const designLabels: LabelResolver = (path) => {
     if (kind && rest[0] === "partId") return label;
     if (kind && rest[0] === "name") return `${label} › Name`;
     if (kind && rest[0] === "costEur") return `${label} › Cost (EUR)`;
+    // An evaluation names a part's figure by its key ("driver.part.maxBoardTempC").
+    const spec = kind ? partSpecsLabel(rest, kind) : null;
+    if (spec) return `${label} › ${spec}`;
     return `${label} › ${labelFor(rest)}`;
   }
   return null;
 };
+
+/** "driver.modes[2]" → ["driver", "modes", 2]. */
+export function pathKeys(field: string): (string | number)[] {
+  return field.split(/\.|\[|\]/).filter((k) => k !== "").map((k) => (/^\d+$/.test(k) ? Number(k) : k));
+}
+
+/** The on-screen name of what an evaluation problem is about ("Driver › Max board temperature"), never its machine path. */
+export function problemLabel(field: string): string {
+  return designLabels(pathKeys(field)) ?? "The build as a whole";
+}
 
 /** Bodies that carry a design ({ title, design }) or a build file ({ build: { design } }). */
 const buildLabels: LabelResolver = (path) => {

@@ -40,7 +40,7 @@ export const FIELD_HINTS: Readonly<Record<PartKind, Readonly<Record<string, Fiel
     finCount: { placeholder: "9", typical: "0 (flat plate) to about 40" },
     finHeightM: { placeholder: "15 mm", typical: "8–40 mm" },
     finThicknessM: { placeholder: "1 mm", typical: "0.5–2 mm" },
-    finSpacingM: { placeholder: "4 mm", typical: "3–10 mm; below 5 mm fins choke in still air" },
+    finSpacingM: { placeholder: "leave empty: worked out", typical: "3–10 mm; below 5 mm fins choke in still air" },
     emissivity: { placeholder: "0.8", typical: "bare aluminium 0.05–0.1; anodised 0.8–0.9" },
     massKg: { placeholder: "40 g", typical: "10–400 g" },
   },
@@ -66,7 +66,7 @@ export const FIELD_HINTS: Readonly<Record<PartKind, Readonly<Record<string, Fiel
     chargeEndVoltageV: { placeholder: "4.2 V", typical: "Li-ion 4.2 V; LiFePO4 3.65 V" },
     cutoffVoltageV: { placeholder: "2.5 V", typical: "Li-ion 2.5–3.0 V" },
     capacityCoulomb: { placeholder: "3000 mAh", typical: "18650: 2000–3500 mAh; 21700: 4000–5000 mAh" },
-    internalResistanceOhm: { placeholder: "45 mOhm", typical: "20–80 mΩ new" },
+    internalResistanceOhm: { placeholder: "45 mΩ", typical: "20–80 mΩ new" },
     massKg: { placeholder: "47 g", typical: "18650 about 45 g; 21700 about 70 g" },
     chargeTempMinC: { placeholder: "0 °C", typical: "about 0 °C (no charging below freezing)" },
     chargeTempMaxC: { placeholder: "45 °C", typical: "about 45 °C" },
@@ -90,4 +90,13 @@ export const FIELD_HINTS: Readonly<Record<PartKind, Readonly<Record<string, Fiel
 
 export function fieldHint(kind: PartKind, key: string): FieldHint | undefined {
   return FIELD_HINTS[kind][key];
+}
+
+/**
+ * The placeholder as shown: an example value reads "e.g. 100 °C", so an empty field never
+ * looks filled in; a hint in words ("empty: worked out") is shown as it is.
+ */
+export function placeholderText(hint: FieldHint | undefined, fallbackExample = ""): string {
+  const text = hint?.placeholder ?? fallbackExample;
+  return /^[-−\d.]/.test(text) ? `e.g. ${text}` : text;
 }

@@ -20,5 +20,5 @@ export { partListQuerySchema, partPatchSchema, verifySchema, partImportSchema, s
 export type { PartListQuery, PartSort, PartPatch, PartImportRequest } from "./api-schemas";
 export { canEditPart, canSeePart } from "./access";
 export type { PartViewer } from "./access";
-export { FIELD_HINTS, fieldHint } from "./field-hints";
+export { FIELD_HINTS, fieldHint, placeholderText } from "./field-hints";
 export type { FieldHint } from "./field-hints";

@@ -1,4 +1,5 @@
 import type { z } from "zod";
+import { workedOutFinGap } from "@/lib/parts/kinds/heatsink";
 import { parseQuantity } from "@/lib/units";
 
 /**
@@ -26,11 +27,7 @@ const num = (v: unknown, quantity: "length" | "count"): number | null => {
 const emptyValue = (v: unknown) => v === undefined || v === null || (typeof v === "string" && v.trim() === "");
 
 /** Worked-out gap between n fins of thickness t on a base of width w, or null when they do not fit. */
-export function derivedFinGap(w: number, n: number, t: number): number | null {
-  if (n < 2) return null;
-  const gap = (w - n * t) / (n - 1);
-  return gap > 0 ? gap : null;
-}
+export const derivedFinGap = workedOutFinGap;
 
 /**
  * Before the heatsink's own checks: an empty gap is filled with the worked-out one, so the

@@ -64,7 +64,7 @@ describe("a new maker's first Budget from a starting point, in chromium", () => 
     await fill("Heatsink: Fin count", "12");
     await fill("Heatsink: Fin height", "25 mm");
     await fill("Heatsink: Fin thickness", "1.5 mm");
-    await fill("Heatsink: Fin spacing", "3.8 mm");
+    // The gap between fins is left empty: it is worked out from the width, count and thickness.
     await choose("Heatsink: Material", "aluminium-6063-t5");
 
     // A linear driver: on high it draws 2.8 A from the cell, which is what it drives into the LED.
@@ -86,6 +86,8 @@ describe("a new maker's first Budget from a starting point, in chromium", () => 
     expect(verdictBefore).toBe("tight");
     await expect.poll(async () => (await verdict.textContent())?.trim(), { timeout: 30_000 }).toBe("over budget");
     const verdictAfter = (await verdict.textContent())?.trim();
+    // The save bar keeps the draft's verdict in sight wherever the maker has scrolled to.
+    await expect.poll(async () => (await page.getByTestId("bar-verdict").textContent()) ?? "").toMatch(/^Draft:over budget/);
     const text = (await page.getByTestId("heat-path-editor").textContent()) ?? "";
     expect(text).not.toMatch(/NaN|Invalid input|expected int/);
     await page.screenshot({ path: `${ARTEFACTS}/new-maker-live.png`, fullPage: true });

@@ -23,7 +23,7 @@ export const HEATSINK_FIELDS = [
   { key: "finCount", label: "Fin count", type: "quantity", quantity: "count", required: true, min: 0, max: 500, variant: "geometry", help: "Number of fins; 0 for a flat plate." },
   { key: "finHeightM", label: "Fin height", type: "quantity", quantity: "length", required: false, gt: 0, max: 0.5, variant: "geometry", help: "Fin height above the base." },
   { key: "finThicknessM", label: "Fin thickness", type: "quantity", quantity: "length", required: false, gt: 0, max: 0.05, variant: "geometry", help: "Fin thickness (average, for tapered fins)." },
-  { key: "finSpacingM", label: "Fin spacing", type: "quantity", quantity: "length", required: false, gt: 0, max: 0.2, variant: "geometry", help: "Clear gap between neighbouring fins." },
+  { key: "finSpacingM", label: "Fin spacing", type: "quantity", quantity: "length", required: false, gt: 0, max: 0.2, variant: "geometry", help: "Clear gap between neighbouring fins. Leave it empty to have it worked out from the base width, fin count and fin thickness." },
   { key: "material", label: "Material", type: "material", required: false, help: "Heatsink material from the materials list." },
   { key: "finish", label: "Finish", type: "choice", options: FINISHES, required: false, help: "Surface finish; sets the emissivity unless one is given." },
   { key: "emissivity", label: "Emissivity", type: "quantity", quantity: "fraction", required: false, min: 0, max: 1, help: "Total emissivity of the surface (0–1); overrides the finish." },
@@ -31,17 +31,38 @@ export const HEATSINK_FIELDS = [
   { key: "heatCapacityJPerK", label: "Heat capacity", type: "quantity", quantity: "heatCapacity", required: false, gt: 0, max: 1000000, help: "Heat it takes to warm the sink by 1 K, for warm-up time; measured on the bench or known. Used instead of mass × specific heat when given." },
 ] as const satisfies readonly FieldDef[];
 
-const FIN_FIELDS = ["finHeightM", "finThicknessM", "finSpacingM"] as const;
+const FIN_FIELDS = ["finHeightM", "finThicknessM"] as const;
 
-export const heatsinkSpecsSchema = buildVariantSpecsSchema(HEATSINK_FIELDS, "rating").superRefine((specs, ctx) => {
-  if (specs.rating !== "geometry") return;
-  if (specs.material === undefined) ctx.addIssue({ code: "custom", path: ["material"], message: "required when the heatsink is described by its geometry" });
-  if (specs.finCount > 0) {
-    for (const key of FIN_FIELDS) {
-      if (specs[key] === undefined) ctx.addIssue({ code: "custom", path: [key], message: "required when there are fins" });
+/**
+ * The clear gap between n straight fins of thickness t spread over a base of width w:
+ * (w − n·t) / (n − 1); null when there are fewer than two fins or they do not fit.
+ */
+export function workedOutFinGap(w: number, n: number, t: number): number | null {
+  if (n < 2) return null;
+  const gap = (w - n * t) / (n - 1);
+  return gap > 0 ? gap : null;
+}
+
+/**
+ * A sink described by its geometry: a gap between fins left empty is worked out from the
+ * base width, the fin count and the fin thickness (fins that do not fit on the base are
+ * left without a gap; the evaluation names the fin count).
+ */
+export const heatsinkSpecsSchema = buildVariantSpecsSchema(HEATSINK_FIELDS, "rating")
+  .superRefine((specs, ctx) => {
+    if (specs.rating !== "geometry") return;
+    if (specs.material === undefined) ctx.addIssue({ code: "custom", path: ["material"], message: "required when the heatsink is described by its geometry" });
+    if (specs.finCount > 0) {
+      for (const key of FIN_FIELDS) {
+        if (specs[key] === undefined) ctx.addIssue({ code: "custom", path: [key], message: "required when there are fins" });
+      }
     }
-  }
-});
+  })
+  .transform((specs) => {
+    if (specs.rating !== "geometry" || specs.finSpacingM !== undefined || specs.finCount < 1 || specs.finThicknessM === undefined) return specs;
+    const gap = specs.finCount === 1 ? specs.baseWidthM : workedOutFinGap(specs.baseWidthM, specs.finCount, specs.finThicknessM);
+    return gap === null || gap <= 0 ? specs : { ...specs, finSpacingM: gap };
+  });
 export type HeatsinkSpecs = z.output<typeof heatsinkSpecsSchema>;
 
 export function heatsinkNotes(specs: HeatsinkSpecs): PartNote[] {

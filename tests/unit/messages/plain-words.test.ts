@@ -150,4 +150,10 @@ describe("every editor problem maps to a field label on screen", () => {
     }
     expect(n).toBeGreaterThan(5);
   });
+
+  it("a problem about a part's figure names the slot and the figure as the part's own form labels it", () => {
+    expect(problemLabel("driver.part.maxBoardTempC")).toBe(`Driver › ${KIND_DEFINITIONS.driver.fields.find((f) => f.key === "maxBoardTempC")!.label}`);
+    expect(problemLabel("lightEngine.emitter.maxTjC")).toBe(`Emitter › ${KIND_DEFINITIONS.emitter.fields.find((f) => f.key === "maxTjC")!.label}`);
+    expect(problemLabel("pack.cell.chargeTempMaxC")).toBe(`Cell › ${KIND_DEFINITIONS.cell.fields.find((f) => f.key === "chargeTempMaxC")!.label}`);
+  });
 });

@@ -105,6 +105,17 @@ describe("bad input names the field", () => {
     ]);
     expect(errors({ ...GOOD_PARTS.heatsink, specs: { rating: "declared", sinkToAirKPerW: "8 K/W" } })).toEqual(["specs.ratedAirflow: required"]);
   });
+  it("heatsink: a gap between fins left empty is worked out from the base width, fin count and fin thickness", () => {
+    // 12 fins of 1.5 mm on a 60 mm base leave 42 mm for 11 gaps.
+    const part = parse(withSpecs("heatsink", { baseWidthM: "60 mm", finCount: 12, finThicknessM: "1.5 mm", finSpacingM: undefined }));
+    expect((part.specs as { finSpacingM: number }).finSpacingM).toBeCloseTo(0.042 / 11, 9);
+    // A gap that is given is kept as given.
+    const given = parse(withSpecs("heatsink", { baseWidthM: "60 mm", finCount: 12, finThicknessM: "1.5 mm", finSpacingM: "3 mm" }));
+    expect((given.specs as { finSpacingM: number }).finSpacingM).toBeCloseTo(0.003, 9);
+    // Fins that do not fit get no gap from here.
+    const crowded = parse(withSpecs("heatsink", { baseWidthM: "40 mm", finCount: 12, finThicknessM: "4 mm", finSpacingM: undefined }));
+    expect((crowded.specs as { finSpacingM?: number }).finSpacingM).toBeUndefined();
+  });
   it("interface, spreader, housing: variant, material id, inner vs outer area", () => {
     expect(errors({ ...GOOD_PARTS.interface, specs: { specifiedAs: "perArea", resistancePerAreaKM2PerW: "0.3 K cm^2/W" } })).toEqual([]);
     expect(errors({ ...GOOD_PARTS.interface, specs: { specifiedAs: "perArea" } })).toEqual(["specs.resistancePerAreaKM2PerW: required"]);

@@ -541,6 +541,28 @@ export const handins = mysqlTable(
   (t) => [index("handin_exercise_student_idx").on(t.exerciseId, t.studentId, t.submittedAt), index("handin_build_idx").on(t.buildId)],
 );
 
+/**
+ * A read-only link to a review: the reviewed revision with its verdict and comments. Made by
+ * the review's reviewer or the build's owner; only the SHA-256 of the token is kept.
+ */
+export const reviewShareLinks = mysqlTable(
+  "review_share_link",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    reviewId: varchar("review_id", { length: 40 })
+      .notNull()
+      .references(() => reviews.id, { onDelete: "cascade" }),
+    tokenHash: varchar("token_hash", { length: 64 }).notNull(),
+    createdBy: varchar("created_by", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    expiresAt: datetime("expires_at", { fsp: 3 }),
+    revokedAt: datetime("revoked_at", { fsp: 3 }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [uniqueIndex("review_share_link_token_unique").on(t.tokenHash), index("review_share_link_review_idx").on(t.reviewId, t.createdAt)],
+);
+
 export const BENCH_RUN_VISIBILITIES = ["private", "shared"] as const;
 
 /**

@@ -15,7 +15,12 @@ const RESET_WINDOW_S = 60 * 60;
 const RESET_PER_EMAIL = 3;
 const RESET_PER_CLIENT = 20;
 
-type Limiters = { account: RateLimiterMySQL; address: RateLimiterMySQL; resetEmail: RateLimiterMySQL; resetClient: RateLimiterMySQL };
+// Answer checks: a student trying values one after another could home in on a hidden value;
+// a few dozen tries per question in ten minutes is plenty for honest work.
+const ANSWER_WINDOW_S = 10 * 60;
+const ANSWERS_PER_QUESTION = 20;
+
+type Limiters = { account: RateLimiterMySQL; address: RateLimiterMySQL; resetEmail: RateLimiterMySQL; resetClient: RateLimiterMySQL; answer: RateLimiterMySQL };
 const holder = globalThis as unknown as { sinkwiseLimiters?: Limiters };
 
 function limiters(): Limiters {
@@ -34,6 +39,7 @@ function limiters(): Limiters {
       address: new RateLimiterMySQL({ ...common, keyPrefix: "signin_address", points: PER_ADDRESS }),
       resetEmail: new RateLimiterMySQL({ ...common, keyPrefix: "reset_email", points: RESET_PER_EMAIL, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
       resetClient: new RateLimiterMySQL({ ...common, keyPrefix: "reset_client", points: RESET_PER_CLIENT, duration: RESET_WINDOW_S, blockDuration: RESET_WINDOW_S }),
+      answer: new RateLimiterMySQL({ ...common, keyPrefix: "answer_check", points: ANSWERS_PER_QUESTION, duration: ANSWER_WINDOW_S, blockDuration: ANSWER_WINDOW_S }),
     };
   }
   return holder.sinkwiseLimiters;
@@ -89,3 +95,23 @@ export async function consumeResetRequest(email: string, client: string): Promis
     }
   }
 }
+
+/**
+ * Takes one check from the student's allowance for this question of this example BEFORE the
+ * answer is compared: the database counts atomically, so a burst of guesses gets at most the
+ * allowance checked. Throws 429 when it is used up.
+ */
+export async function consumeAnswerCheck(userId: string, exampleId: string, key: string): Promise<void> {
+  try {
+    await limiters().answer.consume(`${userId}:${exampleId}:${key}`);
+  } catch (err) {
+    if (err instanceof RateLimiterRes) {
+      const minutes = Math.max(1, Math.ceil(err.msBeforeNext / 60_000));
+      throw new ApiError("rate_limited:answer", `Too many answers checked for this value. Work it through again and try in ${minutes} minute${minutes === 1 ? "" : "s"}.`, "value");
+    }
+    throw err;
+  }
+}
+
+/** How many answer checks a student has per question of an example in each ten minutes (for tests and the screen). */
+export const ANSWER_CHECKS = { perQuestion: ANSWERS_PER_QUESTION, windowS: ANSWER_WINDOW_S } as const;

@@ -3,6 +3,7 @@ import { type Candidate, ComparePicker } from "@/components/compare/compare-pick
 import { CompareView } from "@/components/compare/compare-view";
 import { listBuilds } from "@/db/queries/builds";
 import { listComparisons } from "@/db/queries/comparisons";
+import { listReviewsForReviewer } from "@/db/queries/reviews";
 import { ApiError } from "@/lib/http/api-error";
 import { compareQuerySchema, type CompareItem } from "@/lib/reviews/api-schemas";
 import { requirePageUser } from "@/server/auth/session";
@@ -36,8 +37,12 @@ export default async function ComparePage({ searchParams }: { searchParams: Sear
     if (parsed.success) items = parsed.data.items;
     else problem = parsed.error.issues[0]?.message ?? "The list of builds does not read.";
   }
-  const [{ mine, shared }, savedList] = await Promise.all([listBuilds({ viewer: user }), listComparisons({ ownerId: user.id })]);
-  const candidates: Candidate[] = [...mine.map((b) => ({ ...b, mine: true })), ...shared.map((b) => ({ ...b, mine: false }))].map((b) => ({ id: b.id, title: b.title, variantNote: b.variantNote, ownerName: b.ownerName, currentRevision: b.currentRevision, mine: b.mine }));
+  const [{ mine, shared }, savedList, asked] = await Promise.all([listBuilds({ viewer: user }), listComparisons({ ownerId: user.id }), listReviewsForReviewer({ reviewerId: user.id })]);
+  // Builds the viewer was asked to review come first (a private build is listed through its review).
+  const toReview = new Map(asked.map((r) => [r.buildId, r]));
+  const listed: Candidate[] = [...mine.map((b) => ({ ...b, mine: true })), ...shared.map((b) => ({ ...b, mine: false }))].map((b) => ({ id: b.id, title: b.title, variantNote: b.variantNote, ownerName: b.ownerName, currentRevision: b.currentRevision, mine: b.mine, toReview: toReview.has(b.id) }));
+  const onlyByReview: Candidate[] = [...toReview.values()].filter((r) => !listed.some((c) => c.id === r.buildId)).map((r) => ({ id: r.buildId, title: r.buildTitle, variantNote: r.variantNote, ownerName: r.requesterName, currentRevision: r.currentRevision, mine: false, toReview: true }));
+  const candidates = [...onlyByReview, ...listed].sort((a, b) => Number(b.toReview) - Number(a.toReview));
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-baseline gap-3">

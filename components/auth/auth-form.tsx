@@ -32,10 +32,12 @@ export function AuthForm({ action, fields, submitLabel, redirectTo, extra }: Pro
     const data = new FormData(event.currentTarget);
     for (const f of fields) body[f.name] = String(data.get(f.name) ?? "");
     try {
-      const result = await fetchJson<{ message?: string }>(action, { method: "POST", body });
+      const result = await fetchJson<{ message?: string; joinedClasses?: { id: string }[] }>(action, { method: "POST", body });
       if (redirectTo) {
         await queryClient.invalidateQueries();
-        router.push(redirectTo);
+        // Signing in joined a class the address was invited to: open it.
+        const joined = result.joinedClasses ?? [];
+        router.push(joined.length === 1 ? `/classes/${joined[0]!.id}` : joined.length > 1 ? "/classes" : redirectTo);
         router.refresh();
       } else {
         setNotice(result.message ?? "Done.");

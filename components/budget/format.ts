@@ -2,7 +2,8 @@
  * Budget-screen helpers that are not number formatting (verdict colours, the heat scale,
  * limit labels). Every figure is printed by lib/units/figures, the one formatter.
  */
-import type { TemperatureUnit } from "@/lib/units/figures";
+import type { ModeDrive } from "@/lib/parts";
+import { formatFigure, type TemperatureUnit } from "@/lib/units/figures";
 
 export type TempUnit = TemperatureUnit;
 
@@ -35,4 +36,10 @@ export function heatColour(c: number, ambientC: number, limitC: number): string 
 export function limitLabel(l: { place: string; id: string; kind: "max" | "min" }): string {
   if (l.id === "cells-max" || l.id === "cells-min") return `${l.place}, ${l.kind === "max" ? "upper" : "lower"} limit`;
   return l.place;
+}
+
+/** A mode's figure as the maker entered it, for the Drive column: "2.8 A out", "9 W from the battery". */
+export function enteredText(e: ModeDrive | null | undefined): string | null {
+  if (!e) return null;
+  return `${formatFigure(e.value, e.quantity)} ${e.side === "battery" ? "from the battery" : "out"}`;
 }

@@ -1,7 +1,7 @@
 "use client";
 
 import { formatDuration, formatFigure as fig, formatTraced } from "@/lib/units/figures";
-import { VERDICT_STYLE } from "./format";
+import { enteredText, VERDICT_STYLE } from "./format";
 import { driveTrace, limitTimeTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
 import { Traceable } from "./trace-view";
 import type { Evaluation } from "./types";
@@ -14,7 +14,7 @@ export function ModesTable({ evaluation }: { evaluation: Evaluation }) {
       <thead>
         <tr className="border-b border-line text-left text-ink-soft">
           <th className="py-1.5 pr-3 font-medium">Mode</th>
-          <th className="py-1.5 pr-3 font-medium">Drive</th>
+          <th className="py-1.5 pr-3 font-medium" title="The mode's figure as entered, then the power the emitters get">Drive (entered → into the emitters)</th>
           <th className="py-1.5 pr-3 font-medium">Light (hot)</th>
           <th className="py-1.5 pr-3 font-medium">Runtime</th>
           <th className="py-1.5 pr-3 font-medium">First limit</th>
@@ -28,7 +28,10 @@ export function ModesTable({ evaluation }: { evaluation: Evaluation }) {
           return (
           <tr key={m.name} className="border-b border-line/60">
             <td className="py-1.5 pr-3 font-medium">{m.name}</td>
-            <td className="py-1.5 pr-3">{s?.mode ? <Traceable label={fig(m.driveW, "power")} trace={driveTrace(s.mode)} /> : fig(m.driveW, "power")}</td>
+            <td className="py-1.5 pr-3">
+              {enteredText(m.entered) && <span className="text-ink-soft">{enteredText(m.entered)} → </span>}
+              {s?.mode ? <Traceable label={fig(m.driveW, "power")} trace={driveTrace(s.mode)} /> : fig(m.driveW, "power")}
+            </td>
             <td className="py-1.5 pr-3">{s?.mode ? <Traceable label={fig(m.totalFluxLm, "flux")} trace={totalFluxTrace(s.mode)} /> : fig(m.totalFluxLm, "flux")}</td>
             <td className="py-1.5 pr-3">{m.runtime ? <Traceable label={formatTraced(m.runtime)} trace={m.runtime.trace} /> : "–"}</td>
             <td className="py-1.5 pr-3">{m.firstLimitS === null ? "none within the warm-up" : <Traceable label={`${limit?.place ?? m.firstLimit ?? "a limit"} after ${formatDuration(m.firstLimitS)}`} trace={s?.warmup && m.firstLimit ? limitTimeTrace(s.warmup, m.firstLimit, limit?.place ?? m.firstLimit) : null} />}</td>

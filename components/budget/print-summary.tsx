@@ -1,6 +1,6 @@
 import { formatAgainstLimit, formatDuration, formatFigure as fig, formatHeadroom, formatTraced } from "@/lib/units/figures";
 import { driveTrace, nodeBalanceTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
-import { limitLabel, VERDICT_STYLE } from "./format";
+import { enteredText, limitLabel, VERDICT_STYLE } from "./format";
 import { Traceable } from "./trace-view";
 import { problemLabel } from "@/lib/messages";
 import type { Evaluation } from "./types";
@@ -30,7 +30,7 @@ export function PrintSummary({ evaluation, title, revision, owner }: { evaluatio
               return (
               <tr key={m.name} className="border-b border-line/50">
                 <td className="pr-2">{m.name}</td>
-                <td className="pr-2"><Traceable label={fig(m.driveW, "power")} trace={s?.mode ? driveTrace(s.mode) : null} /></td>
+                <td className="pr-2">{enteredText(m.entered) && `${enteredText(m.entered)} → `}<Traceable label={fig(m.driveW, "power")} trace={s?.mode ? driveTrace(s.mode) : null} /></td>
                 <td className="pr-2"><Traceable label={fig(m.totalFluxLm, "flux")} trace={s?.mode ? totalFluxTrace(s.mode) : null} /></td>
                 <td className="pr-2"><Traceable label={formatTraced(m.runtime)} trace={m.runtime?.trace} /></td>
                 <td className="pr-2">{m.firstLimitS === null ? "none in the warm-up" : `${m.firstLimit} after ${formatDuration(m.firstLimitS)}`}</td>

@@ -132,11 +132,14 @@ export function IntInput({ min, max, ...p }: FieldProps & { min: number; max: nu
   );
 }
 
-export function ChoiceSelect({ choices, ...p }: FieldProps & { choices: readonly (readonly [string, string])[] }) {
+/** A choice; with `emptyLabel`, leaving it unset is a choice of its own (the field's default). */
+export function ChoiceSelect({ choices, emptyLabel, hint, ...p }: FieldProps & { choices: readonly (readonly [string, string])[]; emptyLabel?: string; hint?: string }) {
   const value = getPath(p.design, p.path);
+  const fallback = emptyLabel !== undefined ? "" : choices[0]?.[0];
   return (
-    <FieldShell label={p.label} error={p.error} problems={p.problems} field={p.path}>
-      <select aria-label={p.label} className={inputClass} disabled={p.disabled} value={typeof value === "string" ? value : choices[0]?.[0]} onChange={(e) => p.onChange(p.path, e.target.value)}>
+    <FieldShell label={p.label} error={p.error} problems={p.problems} hint={hint} field={p.path}>
+      <select aria-label={p.label} className={inputClass} disabled={p.disabled} value={typeof value === "string" ? value : fallback} onChange={(e) => p.onChange(p.path, e.target.value === "" && emptyLabel !== undefined ? undefined : e.target.value)}>
+        {emptyLabel !== undefined && <option value="">{emptyLabel}</option>}
         {choices.map(([v, l]) => (
           <option key={v} value={v}>{l}</option>
         ))}

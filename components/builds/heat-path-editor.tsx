@@ -10,6 +10,7 @@ import { useMe } from "@/components/shell/use-me";
 import { formatHeadroom } from "@/lib/units/figures";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
+import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-schema";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
 import { editorFieldFor, placeProblems, ProblemsSummary } from "./editor-problems";
@@ -34,7 +35,7 @@ function Section({ title, children, note }: { title: string; children: ReactNode
 /** Every field the editor can show; conditional ones (reflector, breeze) only when their kind is picked. */
 const EDITOR_FIELDS: readonly DesignField[] = [
   "housing", "housingShape.form", "lightEngine.emitter", "lightEngine.count", "lightEngine.wiring", "lightEngine.interface", "lightEngine.heatsink",
-  "lightEngine.mount.kind", "lightEngine.mount.interface", "lightEngine.mount.contactAreaM2", "lightEngine.mount.reflector.material",
+  "lightEngine.finDirection", "lightEngine.mount.kind", "lightEngine.mount.interface", "lightEngine.mount.contactAreaM2", "lightEngine.mount.reflector.material",
   "lightEngine.mount.reflector.thicknessM", "lightEngine.mount.reflector.lengthM", "lightEngine.mount.reflector.meanCircumferenceM",
   "lightEngine.mount.reflector.rimContactAreaM2", "driver.part", "driver.cooling.kind", "driver.cooling.interface", "driver.cooling.spreader",
   "driver.cooling.adhesive", "pack.cell", "pack.series", "pack.parallel", "pack.protection", "pack.charger", "pack.chargerCount",
@@ -160,6 +161,12 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         <ChoiceSelect choices={[["series", "In series"], ["parallel", "In parallel"]]} {...f("lightEngine.wiring")} />
         <PartSelect kind="interface" {...f("lightEngine.interface")} />
         <PartSelect kind="heatsink" {...f("lightEngine.heatsink")} />
+        <ChoiceSelect
+          choices={FIN_DIRECTION_CHOICES}
+          emptyLabel="Along the lamp (vertical upright, level lying)"
+          hint="How the fins stand when the lamp is in use. Air rises through vertical channels; level fins and fins hanging down trap warm air."
+          {...f("lightEngine.finDirection")}
+        />
         <ChoiceSelect
           choices={[["in-housing-air", "Heatsink in the housing's air"], ["pressed-to-wall", "Heatsink pressed to the housing wall"], ["through-reflector", "Heat through the reflector to the rim"]]}
           {...f("lightEngine.mount.kind")}

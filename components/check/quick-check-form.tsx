@@ -9,6 +9,7 @@ import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { FINISHES, materialOptions } from "@/lib/parts";
 import { labelFor, labelsForSubject } from "@/lib/messages";
 import type { QuickCheckResult } from "@/lib/retrofit";
+import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-schema";
 import { QUICK_CHECK_LABELS } from "@/lib/retrofit/quick-check-labels";
 
 const checkLabel = (field: string) => labelFor(field.split(/\.|\[|\]/).filter(Boolean), labelsForSubject("check"));
@@ -53,8 +54,9 @@ export function QuickCheckForm() {
     const opt = (k: string) => (s(k) === "" ? undefined : s(k));
     const sink =
       mode === "declared"
-        ? { declaredKPerW: s("declaredKPerW") }
+        ? { declaredKPerW: s("declaredKPerW"), ratedDeltaK: opt("ratedDeltaK") }
         : {
+            finDirection: s("finDirection"),
             geometry: {
               rating: "geometry",
               ...Object.fromEntries(GEOMETRY.map((g) => [g.name, s(g.name)])),
@@ -90,7 +92,10 @@ export function QuickCheckForm() {
             <label><input type="radio" name="mode" checked={mode === "geometry"} onChange={() => setMode("geometry")} /> Measured geometry</label>
           </div>
           {mode === "declared" ? (
-            <Input f={{ name: "declaredKPerW", label: L["sink.declaredKPerW"], placeholder: "4 K/W", hint: "Check that the figure is for still air: sellers often quote it with a fan." }} error={errorFor("sink.declaredKPerW")} />
+            <div className="grid gap-3 sm:grid-cols-2">
+              <Input f={{ name: "declaredKPerW", label: L["sink.declaredKPerW"], placeholder: "4 K/W", hint: "Check that the figure is for still air: sellers often quote it with a fan." }} error={errorFor("sink.declaredKPerW")} />
+              <Input f={{ name: "ratedDeltaK", label: L["sink.ratedDeltaK"], placeholder: "75 K", empty: true, hint: "The sink-to-air rise the rating holds at; empty: 75 K, a common catalogue basis (from memory). The figure is corrected to the rise your sink reaches." }} error={errorFor("sink.ratedDeltaK")} />
+            </div>
           ) : (
             <div className="grid gap-3 sm:grid-cols-2">
               {GEOMETRY.map((g) => <Input key={g.name} f={g} error={errorFor(`sink.geometry.${g.name}`)} />)}
@@ -105,6 +110,14 @@ export function QuickCheckForm() {
                 <select name="finish" aria-label="Finish" className="w-full rounded border border-line bg-white px-2 py-1.5" defaultValue="as-supplied">
                   {FINISHES.map((f) => <option key={f} value={f}>{f}</option>)}
                 </select>
+              </label>
+              <label className="block text-sm">
+                <span className="mb-1 block font-medium">{L["sink.finDirection"]}</span>
+                <select name="finDirection" aria-label="Fin direction" className="w-full rounded border border-line bg-white px-2 py-1.5" defaultValue="vertical">
+                  {FIN_DIRECTION_CHOICES.map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+                </select>
+                <span className="mt-0.5 block text-xs text-ink-soft">How the fins stand in use: air rises through vertical channels; level fins and fins hanging down trap warm air.</span>
+                {errorFor("sink.finDirection") && <span role="alert" className="mt-0.5 block text-xs text-over">{errorFor("sink.finDirection")}</span>}
               </label>
             </div>
           )}

@@ -1,11 +1,10 @@
 "use client";
 
 import { useState } from "react";
-import { Bar, Line } from "react-chartjs-2";
+import { Line } from "react-chartjs-2";
 import "@/components/budget/chart-setup";
 import { SERIES_COLOURS } from "@/components/budget/chart-setup";
 import type { CompareAnswer } from "./use-compare";
-import { formatFigure } from "@/lib/units/figures";
 
 const columnName = (c: CompareAnswer["columns"][number]) => `${c.variantNote ?? c.title} (r${c.revision})`;
 
@@ -46,48 +45,6 @@ export function OverlaidWarmups({ data }: { data: CompareAnswer }) {
         <Line data={{ datasets }} options={{ maintainAspectRatio: false, parsing: false, scales: { x: { type: "linear", title: { display: true, text: "minutes from switch-on" } }, y: { title: { display: true, text: "°C" } } }, plugins: { legend: { position: "bottom", labels: { boxWidth: 12 } } } }} />
       </div>
       {missing.length > 0 && <p className="text-xs text-ink-soft">No warm-up for: {missing.join(", ")}.</p>}
-    </div>
-  );
-}
-
-/** One temperature ladder per column, on a shared axis, for the chosen scenario. */
-export function SideBySideLadders({ data }: { data: CompareAnswer }) {
-  // Start on the scenario with the largest rise (usually the highest mode).
-  const [id, setId] = useState(() => [...data.ladders].sort((a, b) => Math.max(0, ...b.columns.map((c) => c?.riseK ?? 0)) - Math.max(0, ...a.columns.map((c) => c?.riseK ?? 0)))[0]?.scenarioId ?? "");
-  const ladder = data.ladders.find((l) => l.scenarioId === id);
-  if (!ladder) return <p className="text-sm text-ink-soft">No temperature ladders.</p>;
-  const max = Math.max(1, ...ladder.columns.map((c) => c?.riseK ?? 0));
-  return (
-    <div className="space-y-2">
-      <label className="text-sm">
-        <span className="mr-2 text-ink-soft">Scenario</span>
-        <select value={id} onChange={(e) => setId(e.target.value)} className="rounded border border-line bg-white px-2 py-0.5">
-          {data.ladders.map((l) => (
-            <option key={l.scenarioId} value={l.scenarioId}>{l.scenarioName}</option>
-          ))}
-        </select>
-      </label>
-      <div className="grid gap-3" style={{ gridTemplateColumns: `repeat(${ladder.columns.length}, minmax(0, 1fr))` }} data-testid="compare-ladders">
-        {ladder.columns.map((c, i) => (
-          <figure key={i} className="min-w-0 rounded border border-line bg-white/70 p-2">
-            <figcaption className="mb-1 truncate text-xs font-medium" style={{ color: SERIES_COLOURS[i] }}>{columnName(data.columns[i]!)}</figcaption>
-            {c ? (
-              <div className="h-72">
-                <Bar
-                  data={{
-                    labels: [...c.steps.map((s) => s.place), ...(Math.abs(c.remainderK) > 0.05 ? ["rest"] : [])],
-                    datasets: [{ label: "K", data: [...c.steps.map((s) => s.deltaK), ...(Math.abs(c.remainderK) > 0.05 ? [c.remainderK] : [])], backgroundColor: SERIES_COLOURS[i] }],
-                  }}
-                  options={{ indexAxis: "y", maintainAspectRatio: false, scales: { x: { min: 0, max: Math.ceil(max), title: { display: true, text: "K of the rise above ambient" } }, y: { ticks: { font: { size: 10 } } } }, plugins: { legend: { display: false } } }}
-                />
-              </div>
-            ) : (
-              <p className="text-xs text-ink-soft">No ladder for this scenario.</p>
-            )}
-            {c && <p className="text-xs text-ink-soft">rise {formatFigure(c.riseK, "temperatureDifference")}</p>}
-          </figure>
-        ))}
-      </div>
     </div>
   );
 }

@@ -11,6 +11,26 @@ export interface Candidate {
   ownerName: string;
   currentRevision: number;
   mine: boolean;
+  /** The viewer was asked to review it. */
+  toReview: boolean;
+}
+
+/** A build's family: its title before a variant's " — note" (the variants of a build sit together). */
+const family = (c: Candidate) => c.title.split(" — ")[0]!.trim();
+
+/**
+ * The builds you were asked to review come first, each with its variants beside it; then
+ * the rest by family and title.
+ */
+function ordered(candidates: readonly Candidate[]): Candidate[] {
+  const asked = new Set(candidates.filter((c) => c.toReview).map(family));
+  return [...candidates].sort(
+    (a, b) =>
+      Number(asked.has(family(b))) - Number(asked.has(family(a))) ||
+      family(a).localeCompare(family(b)) ||
+      Number(b.toReview) - Number(a.toReview) ||
+      a.title.localeCompare(b.title),
+  );
 }
 
 /** Pick two to four of your builds and the ones shared with you, each at a revision. */
@@ -25,13 +45,14 @@ export function ComparePicker({ candidates, selected }: { candidates: Candidate[
     <details className="no-print rounded-lg border border-line bg-white/60 p-3 text-sm" open={selected.length < MIN_COMPARE}>
       <summary className="cursor-pointer font-medium">Pick builds ({items.length} of {MIN_COMPARE}–{MAX_COMPARE})</summary>
       <ul className="mt-2 grid gap-1 sm:grid-cols-2">
-        {candidates.map((c) => {
+        {ordered(candidates).map((c) => {
           const item = items.find((i) => i.buildId === c.id);
           return (
             <li key={c.id} className="flex items-center gap-2">
               <label className="flex min-w-0 flex-1 items-center gap-2">
                 <input type="checkbox" checked={Boolean(item)} onChange={() => toggle(c.id)} disabled={!item && items.length >= MAX_COMPARE} className="accent-ember" aria-label={`Compare ${c.title}`} />
-                <span className="truncate">
+                {c.toReview && <span className="shrink-0 rounded bg-ember-soft px-1 text-xs text-ember">asked to review</span>}
+                <span className="truncate" title={[c.title, c.variantNote, c.mine ? null : c.ownerName].filter(Boolean).join(" · ")}>
                   {c.title}
                   {c.variantNote && <span className="text-ink-soft"> · {c.variantNote}</span>}
                   {!c.mine && <span className="text-ink-soft"> · {c.ownerName}</span>}

@@ -5,63 +5,81 @@ import { type FormEvent, useState } from "react";
 import { VERDICT_STYLE } from "@/components/budget/format";
 import { Traceable } from "@/components/budget/trace-view";
 import { ApiClientError } from "@/components/ui/fetch-json";
-import { formatInUnit } from "@/lib/units/figures";
-import type { FigureRow } from "@/lib/compare";
+import { compareFormat, SIGNIFICANCE, type FigureRow } from "@/lib/compare";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
-import { OverlaidWarmups, SideBySideLadders } from "./compare-charts";
+import { OverlaidWarmups } from "./compare-charts";
+import { CompareSummary } from "./compare-summary";
+import { ScenarioColumns } from "./scenario-columns";
 import { type CompareAnswer, useCompare, useSaveComparison } from "./use-compare";
 
-const JUDGED = { better: "bg-ok/10 text-ok", worse: "bg-over/10 text-over", same: "text-ink-soft" } as const;
+const JUDGED = { better: "bg-ok/10 text-ok", worse: "bg-over/10 text-over", same: "" } as const;
 
 function show(row: FigureRow, v: number | string | null): string {
-  if (row.kind === "verdict") return typeof v === "string" ? v : "–";
+  if (row.kind === "verdict") return typeof v === "string" ? v : compareFormat.DASH;
   if (row.kind === "time" && v === null) return "not reached";
-  if (typeof v !== "number" || !Number.isFinite(v)) return "–";
-  return formatInUnit(v, row.unit);
+  return typeof v === "number" ? compareFormat.inUnit(v, row.unit) : compareFormat.DASH;
 }
 
-function signed(row: FigureRow, d: number | null): string {
-  if (d === null || !Number.isFinite(d)) return "";
-  // A difference is shown like the figure itself; one that rounds away to nothing is "±0".
-  const size = formatInUnit(Math.abs(d), row.unit);
-  if (!/[1-9]/.test(size)) return "±0";
-  return `${d > 0 ? "+" : "−"}${size}`;
-}
-
-function Figures({ data }: { data: CompareAnswer }) {
-  const groups = [...new Set(data.figures.map((f) => f.group))];
+function FigureRowView({ f }: { f: CompareAnswer["figures"][number] }) {
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full text-left text-sm" data-testid="compare-figures">
-        <thead className="text-xs text-ink-soft">
-          <tr>
-            <th className="py-1 pr-3 font-medium">Figure</th>
-            {data.columns.map((c, i) => (
-              <th key={i} className="py-1 pr-3 font-medium">{c.variantNote ?? c.title} <span className="font-normal">r{c.revision}</span></th>
-            ))}
-          </tr>
-        </thead>
-        {groups.map((g) => (
-          <tbody key={g}>
-            <tr><th colSpan={data.columns.length + 1} className="pt-3 pb-1 text-xs font-semibold uppercase tracking-wide text-ember">{g}</th></tr>
-            {data.figures.filter((f) => f.group === g).map((f) => (
-              <tr key={f.key} className="border-t border-line" data-figure={f.key}>
-                <td className="py-1 pr-3 text-ink-soft">{f.label}</td>
-                {f.values.map((v, i) => {
-                  const j = f.judgements[i];
-                  return (
-                    <td key={i} className={`py-1 pr-3 ${j && j !== "same" ? JUDGED[j] : ""}`}>
-                      {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={show(f, v)} trace={f.traces?.[i]} />}
-                      {i > 0 && f.deltas[i] !== null && <span className="ml-1.5 text-xs">{signed(f, f.deltas[i] ?? null)}</span>}
-                      {i > 0 && f.kind === "time" && j && j !== "same" && f.deltas[i] === null && <span className="ml-1.5 text-xs">{j}</span>}
-                    </td>
-                  );
-                })}
-              </tr>
-            ))}
-          </tbody>
-        ))}
-      </table>
+    <tr className="border-t border-line" data-figure={f.key} data-matters={f.matters || undefined}>
+      <td className="py-1 pr-3 text-ink-soft">{f.label}</td>
+      {f.values.map((v, i) => {
+        const j = f.judgements[i];
+        const limit = f.limits?.[i] ?? null;
+        // A temperature beside its limit: both at one precision, so a failing value never reads equal to it.
+        const against = limit !== null && typeof v === "number" ? compareFormat.celsiusAgainst(v, limit, "max") : null;
+        return (
+          <td key={i} className={`py-1 pr-3 ${j ? JUDGED[j] : ""}`} data-judgement={j ?? undefined}>
+            {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={against ? against.value : show(f, v)} trace={f.traces?.[i]} />}
+            {against && <span className="ml-1 text-xs text-ink-soft">(limit {against.limit})</span>}
+            {i > 0 && f.deltas[i] !== null && <span className="ml-1.5 text-xs">{compareFormat.signedInUnit(f.deltas[i] ?? null, f.unit)}</span>}
+            {i > 0 && f.kind === "time" && j && j !== "same" && f.deltas[i] === null && <span className="ml-1.5 text-xs">{j}</span>}
+          </td>
+        );
+      })}
+    </tr>
+  );
+}
+
+/** Every figure, grouped by scenario; in each group the rows that differ come first, the rest behind one switch. */
+function Figures({ data }: { data: CompareAnswer }) {
+  const [all, setAll] = useState(false);
+  const groups = [...new Set(data.figures.map((f) => f.group))];
+  const quiet = data.figures.filter((f) => !f.matters).length;
+  return (
+    <div className="space-y-2">
+      <div className="flex flex-wrap items-center gap-3 text-xs text-ink-soft">
+        <span>Deltas against the first column. Green is better for that row, red is worse (a hotter place is never green); a change under {SIGNIFICANCE.kelvin} K or {SIGNIFICANCE.relative * 100} % is shown plain.</span>
+        {quiet > 0 && (
+          <button type="button" onClick={() => setAll((x) => !x)} className="rounded border border-line px-2 py-0.5 text-ink hover:border-ember" aria-expanded={all}>
+            {all ? "Show only the rows that differ" : `Show all rows (${quiet} more that differ by less than that)`}
+          </button>
+        )}
+      </div>
+      <div className="overflow-x-auto">
+        <table className="w-full text-left text-sm" data-testid="compare-figures">
+          <thead className="text-xs text-ink-soft">
+            <tr>
+              <th className="py-1 pr-3 font-medium">Figure</th>
+              {data.columns.map((c, i) => (
+                <th key={i} className="py-1 pr-3 font-medium">{data.columnNames[i]} <span className="font-normal">r{c.revision}</span></th>
+              ))}
+            </tr>
+          </thead>
+          {groups.map((g) => {
+            const rows = data.figures.filter((f) => f.group === g);
+            const shown = [...rows.filter((f) => f.matters), ...(all ? rows.filter((f) => !f.matters) : [])];
+            return (
+              <tbody key={g}>
+                <tr><th colSpan={data.columns.length + 1} className="pt-3 pb-1 text-xs font-semibold uppercase tracking-wide text-ember">{g}</th></tr>
+                {shown.map((f) => <FigureRowView key={f.key} f={f} />)}
+                {shown.length === 0 && <tr><td colSpan={data.columns.length + 1} className="py-1 text-xs text-ink-soft">Nothing here differs by {SIGNIFICANCE.kelvin} K or {SIGNIFICANCE.relative * 100} % or more.</td></tr>}
+              </tbody>
+            );
+          })}
+        </table>
+      </div>
     </div>
   );
 }
@@ -139,6 +157,7 @@ export function CompareView({ items, savedTitle }: { items: CompareItem[]; saved
           </div>
         ))}
       </div>
+      <CompareSummary data={data} />
       {savedTitle === null && <SaveForm items={items} title={title} />}
       <section className="space-y-2 rounded-lg border border-line bg-white/60 p-4">
         <h2 className="font-semibold">What differs</h2>
@@ -146,16 +165,15 @@ export function CompareView({ items, savedTitle }: { items: CompareItem[]; saved
       </section>
       <section className="space-y-2 rounded-lg border border-line bg-white/60 p-4">
         <h2 className="font-semibold">Every figure</h2>
-        <p className="text-xs text-ink-soft">Deltas against the first column; green is better, red is worse.</p>
         <Figures data={data} />
+      </section>
+      <section className="space-y-2 rounded-lg border border-line bg-white/60 p-4">
+        <h2 className="font-semibold">Heat paths and ladders, one scenario in every column</h2>
+        <ScenarioColumns data={data} ambientC={data.ambientC} />
       </section>
       <section className="space-y-2 rounded-lg border border-line bg-white/60 p-4">
         <h2 className="font-semibold">Warm-up, overlaid</h2>
         <OverlaidWarmups data={data} />
-      </section>
-      <section className="space-y-2 rounded-lg border border-line bg-white/60 p-4">
-        <h2 className="font-semibold">Temperature ladders</h2>
-        <SideBySideLadders data={data} />
       </section>
     </div>
   );

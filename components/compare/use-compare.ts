@@ -2,19 +2,13 @@
 
 import { useMutation, useQuery } from "@tanstack/react-query";
 import { fetchJson } from "@/components/ui/fetch-json";
-import type { DiffRow, FigureRow, LadderColumn, WarmupSeries } from "@/lib/compare";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import type { Trace } from "@/lib/thermal";
 import { itemsParam } from "@/lib/reviews/api-schemas";
+import type { Comparison } from "@/server/compare/load";
 
-export interface CompareAnswer {
-  columns: { buildId: string; revision: number; currentRevision: number; title: string; variantNote: string | null; ownerName: string; verdict: string | null; problems: { field: string; message: string; severity: string }[] }[];
-  differences: DiffRow[];
-  /** Each figure with its derivation per column (null where nothing derives it, e.g. a verdict). */
-  figures: (FigureRow & { traces?: (Trace | null)[] })[];
-  warmups: WarmupSeries[];
-  ladders: { scenarioId: string; scenarioName: string; columns: (LadderColumn | null)[] }[];
-}
+/** The compare route's answer, typed by the function that builds it (it carries no dates). */
+export type CompareAnswer = Comparison;
 
 export function useCompare(items: readonly CompareItem[]) {
   const param = itemsParam(items);

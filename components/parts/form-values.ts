@@ -1,5 +1,5 @@
 import { CURVE_KIND_INFO, curveToCsv, parseCurveCsv, type CurveKind } from "@/lib/curves";
-import { KIND_DEFINITIONS, kindDefinition, type DriverModeInput, type FieldDef, type PartKind } from "@/lib/parts";
+import { KIND_DEFINITIONS, kindDefinition, modeFigureField, modeFigureText, type DriverModeInput, type FieldDef, type PartKind } from "@/lib/parts";
 import { formatQuantity, parseQuantity, type UnitPreferences } from "@/lib/units";
 import type { PartDto } from "./types";
 
@@ -27,14 +27,10 @@ function fieldText(field: FieldDef, value: unknown, prefs: UnitPreferences): str
   return typeof value === "string" ? value : "";
 }
 
-type StoredMode = { name: string; outputCurrentA?: number; outputPowerW?: number; efficiency: number };
+type StoredMode = { name: string; outputCurrentA?: number; outputPowerW?: number; inputCurrentA?: number; inputPowerW?: number; efficiency: number };
 
 function modeText(mode: StoredMode, prefs: UnitPreferences) {
-  const output =
-    mode.outputCurrentA !== undefined
-      ? formatQuantity(mode.outputCurrentA, "current", prefs, { digits: DIGITS })
-      : formatQuantity(mode.outputPowerW ?? 0, "power", prefs, { digits: DIGITS });
-  return { name: mode.name, output, efficiency: formatQuantity(mode.efficiency, "percent", prefs, { digits: DIGITS }) };
+  return { name: mode.name, output: modeFigureText(mode, prefs, DIGITS), efficiency: formatQuantity(mode.efficiency, "percent", prefs, { digits: DIGITS }) };
 }
 
 /** Form values for a new part of `kind`, or for editing `part` (shown in the user's units). */
@@ -70,9 +66,9 @@ export function defaultsFor(kind: PartKind, part: PartDto | undefined, prefs: Un
 const blank = (text: string | undefined) => text === undefined || text.trim() === "";
 
 function modeInput(mode: PartFormValues["modes"][number]): DriverModeInput {
-  // The output's unit says whether it is a current or a power, as in the CSV modes cell.
-  const isPower = parseQuantity(mode.output, "power").ok;
-  return isPower ? { name: mode.name, outputPowerW: mode.output, efficiency: mode.efficiency } : { name: mode.name, outputCurrentA: mode.output, efficiency: mode.efficiency };
+  // The figure's unit says whether it is a current or a power, "from the battery" which side, as in the CSV modes cell.
+  const figure = modeFigureField(mode.output);
+  return { name: mode.name, [figure.key]: figure.text, efficiency: mode.efficiency };
 }
 
 /** Form values → the body partSchema reads: blanks left out, the other variant's fields dropped. */

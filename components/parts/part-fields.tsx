@@ -1,4 +1,4 @@
-import { formatFieldValue, kindDefinition, type DriverMode, type FieldDef } from "@/lib/parts";
+import { formatFieldValue, kindDefinition, modeFigureText, type DriverMode, type FieldDef } from "@/lib/parts";
 import { formatQuantity, type UnitPreferences } from "@/lib/units";
 import type { PartDto } from "./types";
 
@@ -8,7 +8,7 @@ function modesList(modes: readonly DriverMode[], prefs: UnitPreferences) {
       {modes.map((m) => (
         <li key={m.name}>
           <span className="font-medium">{m.name}</span>:{" "}
-          {m.outputCurrentA !== undefined ? formatQuantity(m.outputCurrentA, "current", prefs) : formatQuantity(m.outputPowerW ?? 0, "power", prefs)} at{" "}
+          {modeFigureText(m, prefs)} at{" "}
           {formatQuantity(m.efficiency, "percent", prefs)} efficiency
         </li>
       ))}

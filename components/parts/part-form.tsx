@@ -126,7 +126,7 @@ export function PartForm({ kind, part, prefs }: { kind: PartKind; part?: PartDto
       {hasModes && (
         <fieldset className="space-y-3 rounded-lg border border-line bg-white/60 p-4">
           <legend className="px-1 text-sm font-semibold">Modes</legend>
-          <p className="text-xs text-ink-soft">Output is a current (“2.8 A”, “350 mA”) or a power (“3 W”); efficiency is output ÷ input power.</p>
+          <p className="text-xs text-ink-soft">Each mode’s figure is what the driver delivers to the emitters, a current (“2.8 A”, “350 mA”) or a power (“3 W”), or what it draws from the battery, as kits are often sold (“9 W from the battery”, “1.2 A from the battery”). Efficiency is output ÷ input power.</p>
           {errorAt(errors, "specs.modes") && <p role="alert" className="text-xs text-over">{errorAt(errors, "specs.modes")}</p>}
           {modes.fields.length > 0 && (
             <div className="flex gap-2 text-xs text-ink-soft" aria-hidden>
@@ -136,13 +136,13 @@ export function PartForm({ kind, part, prefs }: { kind: PartKind; part?: PartDto
             </div>
           )}
           {modes.fields.map((row, index) => {
-            const outputError = errorAt(errors, `specs.modes.${index}.outputCurrentA`) ?? errorAt(errors, `specs.modes.${index}.outputPowerW`);
+            const outputError = (["outputCurrentA", "outputPowerW", "inputCurrentA", "inputPowerW"] as const).map((k) => errorAt(errors, `specs.modes.${index}.${k}`)).find(Boolean);
             const rowErrors = [errorAt(errors, `specs.modes.${index}.name`), outputError, errorAt(errors, `specs.modes.${index}.efficiency`)].filter(Boolean);
             return (
               <div key={row.id} className="space-y-1">
                 <div className="flex flex-wrap items-center gap-2">
                   <input aria-label={`Mode ${index + 1} name`} {...register(`modes.${index}.name`)} className={`${inputClass} w-32`} placeholder="high" />
-                  <input aria-label={`Mode ${index + 1} output`} {...register(`modes.${index}.output`)} className={`${inputClass} w-32`} placeholder="2.8 A" />
+                  <input aria-label={`Mode ${index + 1} output`} {...register(`modes.${index}.output`)} className={`${inputClass} w-56`} placeholder="2.8 A or 9 W from the battery" />
                   <input aria-label={`Mode ${index + 1} efficiency`} {...register(`modes.${index}.efficiency`)} className={`${inputClass} w-28`} placeholder="85 %" />
                   <button type="button" className="text-xs text-ink-soft hover:text-over" onClick={() => modes.remove(index)}>Remove</button>
                 </div>

@@ -40,7 +40,7 @@ export async function BuildReviews({ build, viewer }: { build: LoadedBuild; view
       {build.access.isOwner && (
         <>
           <RequestReviewForm buildId={build.id} currentRevision={build.currentRevision} />
-          <SharePanel buildId={build.id} currentRevision={build.currentRevision} />
+          <SharePanel scope={{ kind: "build", buildId: build.id }} currentRevision={build.currentRevision} />
         </>
       )}
     </section>

@@ -1,7 +1,8 @@
 "use client";
 
 import Link from "next/link";
-import { useState } from "react";
+import { usePathname } from "next/navigation";
+import { useEffect, useState } from "react";
 import { useMarkRead, useNotifications } from "./use-reviews";
 
 /** The header bell: review requests, verdicts and comments, with the unread count. */
@@ -10,6 +11,15 @@ export function NotificationBell() {
   const notes = useNotifications();
   const markRead = useMarkRead();
   const unread = notes.data?.unread ?? 0;
+  const pathname = usePathname();
+  // Moving to another page (a link, back/forward, a redirect) closes the list.
+  useEffect(() => setOpen(false), [pathname]);
+  useEffect(() => {
+    if (!open) return;
+    const onKey = (e: KeyboardEvent) => e.key === "Escape" && setOpen(false);
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [open]);
   return (
     <div className="relative">
       <button

@@ -41,7 +41,11 @@ export function RequestReviewForm({ buildId, currentRevision }: { buildId: strin
       </label>
       <label className="block">
         <span className="mb-0.5 block text-ink-soft">Revision</span>
-        <input name="revision" type="number" min={1} max={currentRevision} defaultValue={currentRevision} className="w-24 rounded border border-line bg-white px-2 py-1" />
+        <select key={currentRevision} name="revision" defaultValue={String(currentRevision)} className="rounded border border-line bg-white px-2 py-1">
+          {Array.from({ length: currentRevision }, (_, k) => currentRevision - k).map((n) => (
+            <option key={n} value={n}>{n === currentRevision ? `latest (revision ${n})` : `revision ${n}`}</option>
+          ))}
+        </select>
         {fieldError("revision") && <span role="alert" className="mt-0.5 block text-over">{fieldError("revision")}</span>}
       </label>
       <label className="block">

@@ -2,13 +2,17 @@
 
 import { type FormEvent, useState } from "react";
 import { ApiClientError } from "@/components/ui/fetch-json";
-import { useCreateShare, useRevokeShare, useShares } from "./use-reviews";
+import { type ShareScope, useCreateShare, useRevokeShare, useShares } from "./use-reviews";
 
-/** Read-only links to a revision's Budget: create (with an optional expiry), copy, revoke. */
-export function SharePanel({ buildId, currentRevision }: { buildId: string; currentRevision: number }) {
-  const shares = useShares(buildId);
-  const create = useCreateShare(buildId);
-  const revoke = useRevokeShare(buildId);
+/**
+ * Read-only links: to a revision's Budget (a build's scope, with a revision to choose) or to
+ * a review (the reviewed revision with its verdict and comments). Create with an optional
+ * expiry, copy, revoke.
+ */
+export function SharePanel({ scope, currentRevision }: { scope: ShareScope; currentRevision?: number }) {
+  const shares = useShares(scope);
+  const create = useCreateShare(scope);
+  const revoke = useRevokeShare(scope);
   const [fresh, setFresh] = useState<{ id: string; url: string } | null>(null);
   const [copied, setCopied] = useState(false);
   const err = create.error instanceof ApiClientError ? create.error : null;
@@ -17,7 +21,7 @@ export function SharePanel({ buildId, currentRevision }: { buildId: string; curr
     event.preventDefault();
     const data = new FormData(event.currentTarget);
     const days = String(data.get("expiresInDays") ?? "").trim();
-    const revision = Number(data.get("revision"));
+    const revision = Number(data.get("revision") ?? "");
     setCopied(false);
     create.mutate(
       { revision: Number.isInteger(revision) && revision > 0 ? revision : undefined, expiresInDays: days === "" ? undefined : Number(days) },
@@ -37,12 +41,18 @@ export function SharePanel({ buildId, currentRevision }: { buildId: string; curr
   return (
     <section className="space-y-2 text-sm" aria-label="Share links">
       <h3 className="font-medium">Share links</h3>
-      <p className="text-xs text-ink-soft">Anyone with the link sees this revision&apos;s Budget, read-only, without signing in. Revoking stops it at once.</p>
+      <p className="text-xs text-ink-soft">
+        {scope.kind === "build"
+          ? "Anyone with the link sees this revision's Budget, read-only, without signing in. Revoking stops it at once."
+          : "Anyone with the link sees the reviewed revision's verdict, comments and limits, read-only, without signing in — no e-mail addresses and no values of private parts. Revoking stops it at once."}
+      </p>
       <form onSubmit={onSubmit} noValidate className="flex flex-wrap items-end gap-2">
-        <label className="block">
-          <span className="mb-0.5 block text-ink-soft">Revision</span>
-          <input name="revision" type="number" min={1} max={currentRevision} defaultValue={currentRevision} className="w-20 rounded border border-line bg-white px-2 py-1" />
-        </label>
+        {scope.kind === "build" && (
+          <label className="block">
+            <span className="mb-0.5 block text-ink-soft">Revision</span>
+            <input name="revision" type="number" min={1} max={currentRevision} defaultValue={currentRevision} className="w-20 rounded border border-line bg-white px-2 py-1" />
+          </label>
+        )}
         <label className="block">
           <span className="mb-0.5 block text-ink-soft">Expires after (days)</span>
           <input name="expiresInDays" type="number" min={1} max={365} placeholder="never" className="w-28 rounded border border-line bg-white px-2 py-1" aria-invalid={err?.path === "expiresInDays" ? true : undefined} />
@@ -66,7 +76,7 @@ export function SharePanel({ buildId, currentRevision }: { buildId: string; curr
       <ul className="space-y-1">
         {shares.data?.shares.map((s) => (
           <li key={s.id} className="flex flex-wrap items-center gap-2 text-xs">
-            <span>r{s.revisionNumber}</span>
+            {s.revisionNumber !== undefined && <span>r{s.revisionNumber}</span>}
             <span className="text-ink-soft">made {new Date(s.createdAt).toLocaleDateString()}</span>
             <span className="text-ink-soft">{s.expiresAt ? `expires ${new Date(s.expiresAt).toLocaleDateString()}` : "no expiry"}</span>
             <span className={s.state === "active" ? "text-ok" : "text-ink-soft"}>{s.state}</span>

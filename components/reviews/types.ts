@@ -25,6 +25,8 @@ export interface CommentItem {
   authorName: string;
   anchorKind: "node" | "link" | "figure";
   anchorKey: string;
+  /** The target in words ("driver board, high mode"). */
+  target: string;
   body: string;
   createdAt: string;
 }
@@ -45,7 +47,8 @@ export interface NotificationItem {
 
 export interface ShareItem {
   id: string;
-  revisionNumber: number;
+  /** Build links only: a review link opens the reviewed revision. */
+  revisionNumber?: number;
   expiresAt: string | null;
   revokedAt: string | null;
   createdAt: string;

@@ -42,25 +42,30 @@ export function useVerdict(reviewId: string) {
   });
 }
 
-export function useShares(buildId: string) {
+/** Where a set of share links lives: a build's Budget links, or a review's links. */
+export type ShareScope = { kind: "build"; buildId: string } | { kind: "review"; reviewId: string };
+const sharesPath = (s: ShareScope) => (s.kind === "build" ? `/api/v1/builds/${s.buildId}/shares` : `/api/v1/reviews/${s.reviewId}/shares`);
+const sharesKey = (s: ShareScope) => (s.kind === "build" ? ["build", s.buildId, "shares"] : ["review", s.reviewId, "shares"]);
+
+export function useShares(scope: ShareScope) {
   return useQuery({
-    queryKey: ["build", buildId, "shares"],
-    queryFn: () => fetchJson<{ shares: ShareItem[] }>(`/api/v1/builds/${buildId}/shares`),
+    queryKey: sharesKey(scope),
+    queryFn: () => fetchJson<{ shares: ShareItem[] }>(sharesPath(scope)),
   });
 }
 
-export function useCreateShare(buildId: string) {
+export function useCreateShare(scope: ShareScope) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: { revision?: number; expiresInDays?: number }) => fetchJson<{ share: ShareItem & { url: string } }>(`/api/v1/builds/${buildId}/shares`, { method: "POST", body }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["build", buildId, "shares"] }),
+    mutationFn: (body: { revision?: number; expiresInDays?: number }) => fetchJson<{ share: ShareItem & { url: string } }>(sharesPath(scope), { method: "POST", body }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: sharesKey(scope) }),
   });
 }
 
-export function useRevokeShare(buildId: string) {
+export function useRevokeShare(scope: ShareScope) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (shareId: string) => fetchJson<{ ok: boolean }>(`/api/v1/builds/${buildId}/shares/${shareId}`, { method: "DELETE" }),
-    onSuccess: () => qc.invalidateQueries({ queryKey: ["build", buildId, "shares"] }),
+    mutationFn: (shareId: string) => fetchJson<{ ok: boolean }>(`${sharesPath(scope)}/${shareId}`, { method: "DELETE" }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: sharesKey(scope) }),
   });
 }

@@ -13,6 +13,7 @@ export function VerdictForm({ reviewId }: { reviewId: string }) {
   const [status, setStatus] = useState<VerdictStatus | null>(null);
   const [summary, setSummary] = useState("");
   const err = verdict.error instanceof ApiClientError ? verdict.error : null;
+  const missing = !status && !summary.trim() ? "Choose a verdict and write its summary to record it." : !status ? "Choose a verdict to record it." : !summary.trim() ? "Summary: every verdict needs a sentence or two saying why." : null;
 
   function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -36,8 +37,9 @@ export function VerdictForm({ reviewId }: { reviewId: string }) {
         <span className="mb-0.5 block text-ink-soft">Summary</span>
         <textarea value={summary} onChange={(e) => setSummary(e.target.value)} rows={3} maxLength={4000} className="w-full rounded border border-line bg-white px-2 py-1 focus:border-ember focus:outline-none" />
       </label>
+      {missing && <p id="verdict-needs" className="text-ink-soft" data-testid="verdict-needs">{missing}</p>}
       {err && <p role="alert" className="text-over">{err.message}</p>}
-      <button type="submit" disabled={!status || !summary.trim() || verdict.isPending} className="rounded bg-ember px-3 py-1 font-medium text-white hover:opacity-90 disabled:opacity-50">
+      <button type="submit" aria-describedby={missing ? "verdict-needs" : undefined} disabled={!status || !summary.trim() || verdict.isPending} className="rounded bg-ember px-3 py-1 font-medium text-white hover:opacity-90 disabled:opacity-50">
         Record the verdict
       </button>
     </form>

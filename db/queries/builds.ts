@@ -4,7 +4,7 @@ import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/ac
 import { db } from "../client";
 import { buildMembers, buildRevisions, builds, exercises, handins, reviews, revisionParts, solveCache, users, workedExamples } from "../schema";
 import { snapshotPartsInTx } from "./snapshots";
-import { classReaderSql } from "./classwork";
+import { classReaderSql, withheldExampleSql } from "./classwork";
 import { newId } from "./users";
 
 export interface BuildSummary {
@@ -89,6 +89,7 @@ export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer
       // Any review of this build assigned to the viewer lets them read it (never edit).
       assigned: sql<number>`exists(select 1 from ${reviews} where ${reviews.buildId} = ${builds.id} and ${reviews.reviewerId} = ${viewer?.id ?? ""})`,
       classReader: classReaderSql(builds.id, viewer?.id ?? ""),
+      withheld: withheldExampleSql(builds.id, viewer?.id ?? ""),
     })
     .from(builds)
     .innerJoin(users, eq(users.id, builds.ownerId))
@@ -97,13 +98,14 @@ export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer
     .limit(1);
   const row = rows[0];
   if (!row) return undefined;
-  const { memberEdit, memberUser, assigned, classReader, ...build } = row;
+  const { memberEdit, memberUser, assigned, classReader, withheld, ...build } = row;
   const access = buildAccess(viewer, {
     ownerId: build.ownerId,
     visibility: build.visibility,
     member: memberUser ? { canEdit: Boolean(memberEdit) } : null,
     assignedReviewer: Number(assigned) === 1,
     classReader: Number(classReader) === 1,
+    withheld: Number(withheld) === 1,
   });
   return access.canView ? { ...build, access } : undefined;
 }

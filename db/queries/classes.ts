@@ -140,6 +140,35 @@ export async function consumeInvitation({ id, userId }: { id: string; userId: st
   });
 }
 
+/**
+ * An existing account signing in joins every class that invited its address and is not
+ * archived: each open invitation is used (only an unused, unexpired row matches, so a
+ * racing use of the link cannot join twice) and the membership added, in one transaction.
+ * Returns the classes joined.
+ */
+export async function acceptInvitationsForEmail({ email, userId }: { email: string; userId: string }): Promise<{ id: string; name: string }[]> {
+  return db().transaction(async (tx) => {
+    const now = new Date();
+    const open = await tx
+      .select({ id: classInvitations.id, classId: classInvitations.classId, name: classes.name })
+      .from(classInvitations)
+      .innerJoin(classes, eq(classes.id, classInvitations.classId))
+      .where(and(sql`lower(${classInvitations.email}) = ${email.toLowerCase()}`, isNull(classInvitations.usedAt), gt(classInvitations.expiresAt, now), isNull(classes.archivedAt)))
+      .limit(100);
+    const joined: { id: string; name: string }[] = [];
+    for (const inv of open) {
+      const [result] = await tx
+        .update(classInvitations)
+        .set({ usedAt: now, usedBy: userId })
+        .where(and(eq(classInvitations.id, inv.id), isNull(classInvitations.usedAt), gt(classInvitations.expiresAt, now)));
+      if (result.affectedRows !== 1) continue;
+      await tx.insert(classMembers).values({ classId: inv.classId, userId, role: "student", joinedAt: now }).onDuplicateKeyUpdate({ set: { userId: sql`${classMembers.userId}` } });
+      if (!joined.some((j) => j.id === inv.classId)) joined.push({ id: inv.classId, name: inv.name });
+    }
+    return joined;
+  });
+}
+
 /** True when the join code is taken (codes are unique so one code opens one class). */
 export function isDuplicate(error: unknown): boolean {
   return mysqlErrorCode(error) === "ER_DUP_ENTRY";

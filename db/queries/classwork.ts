@@ -130,10 +130,22 @@ export async function listStudents({ classId }: { classId: string }): Promise<{ 
  * exercise starter of a class they belong to, or a hand-in in a class they teach.
  */
 export function classReaderSql(buildId: typeof builds.id, viewerId: string) {
-  return sql<number>`(
+  // A student never reads, through a class, the build behind a worked example of theirs whose
+  // values are still questions (hidden, not revealed by hand, reveal date not reached): its
+  // Budget would give the answers away (the same rule as valuesWithheld in lib/classroom/access).
+  return sql<number>`((
     exists(select 1 from worked_example we join class_member cm on cm.class_id = we.class_id where we.build_id = ${buildId} and cm.user_id = ${viewerId})
     or exists(select 1 from exercise ex join class_member cm on cm.class_id = ex.class_id where ex.starter_build_id = ${buildId} and cm.user_id = ${viewerId})
     or exists(select 1 from handin h join exercise ex on ex.id = h.exercise_id join class_member cm on cm.class_id = ex.class_id and cm.role = 'instructor' where h.build_id = ${buildId} and cm.user_id = ${viewerId})
+  ) and not ${withheldExampleSql(buildId, viewerId)})`;
+}
+
+/** The build is behind a worked example of a class where the viewer is a student and the example's values are still questions. */
+export function withheldExampleSql(buildId: typeof builds.id, viewerId: string) {
+  return sql<number>`exists(
+    select 1 from worked_example wh join class_member cs on cs.class_id = wh.class_id and cs.role = 'student'
+    where wh.build_id = ${buildId} and cs.user_id = ${viewerId} and json_length(wh.hidden) > 0
+      and wh.revealed_at is null and (wh.reveal_at is null or wh.reveal_at > now(3))
   )`;
 }
 

@@ -10,6 +10,8 @@ export type BuildFacts = {
   readonly assignedReviewer?: boolean;
   /** The build is a worked example or exercise starter of the viewer's class, or a hand-in in a class they teach: read-only. */
   readonly classReader?: boolean;
+  /** The build is behind a worked example whose values are still questions for the viewer (a student of its class): they may not open it, however it is shared. */
+  readonly withheld?: boolean;
 };
 
 export type BuildAccess = { canView: boolean; canEdit: boolean; isOwner: boolean };
@@ -24,6 +26,6 @@ export function buildAccess(viewer: BuildViewer, build: BuildFacts): BuildAccess
   const isOwner = viewer.id === build.ownerId;
   const memberEdit = Boolean(build.member?.canEdit) && viewer.role !== "reviewer";
   const canEdit = isOwner || memberEdit;
-  const canView = canEdit || Boolean(build.member) || Boolean(build.assignedReviewer) || Boolean(build.classReader) || build.visibility === "shared" || viewer.role === "admin";
+  const canView = canEdit || viewer.role === "admin" || (!build.withheld && (Boolean(build.member) || Boolean(build.assignedReviewer) || Boolean(build.classReader) || build.visibility === "shared"));
   return { canView, canEdit, isOwner };
 }

@@ -33,3 +33,15 @@ export function withinTolerance(answer: number, value: number, tolerancePercent:
   const allowed = Math.max(Math.abs(value) * (tolerancePercent / 100), 1e-9);
   return Math.abs(answer - value) <= allowed;
 }
+
+/**
+ * Whether an example's values are still questions for this viewer: it hides values, they do
+ * not teach the class, and the values are not revealed yet. While they are, nothing that
+ * carries the numbers is opened to them: the build behind it, a fork of it, its design.
+ */
+export function valuesWithheld(example: { hidden: readonly string[]; revealedAt: Date | null; revealAt: Date | null }, canTeach: boolean, now: Date = new Date()): boolean {
+  return !canTeach && example.hidden.length > 0 && !isRevealed(example, now);
+}
+
+/** What a student is told when a path would show the numbers of an example whose values are still questions. */
+export const WITHHELD_MESSAGE = "This worked example's values are still questions: its build opens (and can be forked) once your instructor reveals them.";

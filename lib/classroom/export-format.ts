@@ -10,6 +10,7 @@ export interface ExampleFile {
   exportedAt: string;
   title: string;
   narrative: string;
+  /** `design` is null in a student's copy while the example's values are still questions. */
   build: { title: string; revision: number; design: unknown };
   scenario: { id: string; name: string } | null;
   tolerancePercent: number;

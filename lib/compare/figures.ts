@@ -1,4 +1,5 @@
 import { VERDICTS, type BuildEvaluation, type ScenarioResult, type Verdict } from "@/lib/retrofit";
+import { significantlyDifferent } from "./significance";
 
 /**
  * Every figure of two to four evaluations in aligned rows, with the delta of each column
@@ -19,20 +20,28 @@ export interface FigureRow {
   /** value − first column's value (numbers only); null for the first column or when either is missing. */
   deltas: (number | null)[];
   judgements: Judgement[];
+  /** The limit that applies to this row's place, per column (°C for temperatures, null where none). */
+  limits?: (number | null)[];
+  /** True when a column differs from the first by the significance or more (or a verdict or time differs): the row comes first. */
+  matters: boolean;
 }
 
 const MIN = 60;
 
-function judge(delta: number, direction: Direction, tolerance: number): Judgement {
-  if (Math.abs(delta) <= tolerance) return "same";
+/** Better / worse only when the change is significant (1 K, 2 % of the first column); else "same", shown plain. */
+function judge(delta: number, direction: Direction, unit: string, reference: number | null): Judgement {
+  if (!significantlyDifferent(delta, unit, reference)) return "same";
   if (direction === "none") return null;
   return (delta < 0) === (direction === "lower") ? "better" : "worse";
 }
 
-function numberRow(key: string, group: string, label: string, unit: string, values: (number | null)[], direction: Direction, tolerance = 0.05): FigureRow {
+function numberRow(key: string, group: string, label: string, unit: string, values: (number | null)[], direction: Direction): FigureRow {
   const first = values[0] ?? null;
   const deltas = values.map((v, i) => (i === 0 || v === null || first === null ? null : v - first));
-  return { key, group, label, unit, kind: "number", values, deltas, judgements: deltas.map((d) => (d === null ? null : judge(d, direction, tolerance))) };
+  const judgements = deltas.map((d) => (d === null ? null : judge(d, direction, unit, first)));
+  // A row without a direction matters when a column moved by the significance; a missing value matters too.
+  const moved = deltas.some((d) => d !== null && significantlyDifferent(d, unit, first)) || values.some((v, i) => i > 0 && (v === null) !== (first === null));
+  return { key, group, label, unit, kind: "number", values, deltas, judgements, matters: moved };
 }
 
 /** Time to a limit: null = not reached in the warm-up, which beats any time. */
@@ -45,10 +54,10 @@ function timeRow(key: string, group: string, label: string, values: (number | nu
     if (x === null && first === null) return "same";
     if (x === null) return "better";
     if (first === null) return "worse";
-    return judge(x - first, "higher", 0.05);
+    return judge(x - first, "higher", "min", first);
   });
   const deltas = v.map((x, i) => (i === 0 || x === null || first === null ? null : x - first));
-  return { key, group, label, unit: "min", kind: "time", values: v, deltas, judgements };
+  return { key, group, label, unit: "min", kind: "time", values: v, deltas, judgements, matters: judgements.some((j) => j === "better" || j === "worse") };
 }
 
 function verdictRow(key: string, group: string, label: string, values: (Verdict | null)[]): FigureRow {
@@ -59,7 +68,7 @@ function verdictRow(key: string, group: string, label: string, values: (Verdict 
     const d = rank(v) - rank(first);
     return d === 0 ? "same" : d < 0 ? "better" : "worse";
   });
-  return { key, group, label, unit: "", kind: "verdict", values, deltas: values.map(() => null), judgements };
+  return { key, group, label, unit: "", kind: "verdict", values, deltas: values.map(() => null), judgements, matters: values.some((v) => v !== first) };
 }
 
 const orderedUnion = (lists: readonly (readonly string[])[]): string[] => [...new Set(lists.flat())];
@@ -71,7 +80,13 @@ function scenarioRows(evals: readonly BuildEvaluation[], id: string): FigureRow[
   const k = (x: string) => `${id}/${x}`;
   const rows: FigureRow[] = [verdictRow(k("verdict"), group, "Verdict", ss.map((s) => s?.thermal?.verdict ?? null))];
   const places = orderedUnion(ss.map((s) => Object.keys(s?.thermal?.byPlace ?? {})));
-  for (const p of places) rows.push(numberRow(k(`temperature:${p}`), group, `Temperature, ${p}`, "°C", ss.map((s) => s?.thermal?.byPlace[p] ?? null), "lower"));
+  for (const p of places) {
+    const row = numberRow(k(`temperature:${p}`), group, `Temperature, ${p}`, "°C", ss.map((s) => s?.thermal?.byPlace[p] ?? null), "lower");
+    // The highest temperature allowed at this place, beside it (a window's upper end for the cells).
+    const limitAt = (s: ScenarioResult | undefined) => s?.thermal?.limits.find((l) => l.kind === "max" && s.thermal?.nodes.find((n) => n.id === l.node)?.place === p)?.limitC ?? null;
+    row.limits = ss.map(limitAt);
+    rows.push(row);
+  }
   const limitIds = orderedUnion(ss.map((s) => (s?.thermal?.limits ?? []).map((l) => l.id)));
   for (const lid of limitIds) {
     const place = ss.map((s) => s?.thermal?.limits.find((l) => l.id === lid)?.place).find((p) => p) ?? lid;
@@ -95,9 +110,9 @@ function scenarioRows(evals: readonly BuildEvaluation[], id: string): FigureRow[
     );
   }
   if (id !== "charging") {
-    rows.push(numberRow(k("flux"), group, "Flux at temperature", "lm", ss.map((s) => s?.mode?.totalFluxLm ?? null), "higher", 0.5));
-    rows.push(numberRow(k("runtime"), group, "Runtime", "h", ss.map((s) => s?.mode?.runtime?.value ?? null), "higher", 0.005));
-    rows.push(numberRow(k("drive"), group, "Drive power into the emitters", "W", ss.map((s) => s?.mode?.driveW ?? null), "none", 0.005));
+    rows.push(numberRow(k("flux"), group, "Flux at temperature", "lm", ss.map((s) => s?.mode?.totalFluxLm ?? null), "higher"));
+    rows.push(numberRow(k("runtime"), group, "Runtime", "h", ss.map((s) => s?.mode?.runtime?.value ?? null), "higher"));
+    rows.push(numberRow(k("drive"), group, "Drive power into the emitters", "W", ss.map((s) => s?.mode?.driveW ?? null), "none"));
   }
   return rows;
 }
@@ -106,12 +121,12 @@ export function figureRows(evals: readonly BuildEvaluation[]): FigureRow[] {
   const overall = "Whole build";
   const rows: FigureRow[] = [
     verdictRow("build/verdict", overall, "Verdict (worst scenario)", evals.map((e) => e.verdict)),
-    numberRow("build/cost", overall, "Parts cost", "€", evals.map((e) => e.costs.totalEur), "lower", 0.005),
-    numberRow("build/saving", overall, "Saving against a new light", "€", evals.map((e) => e.costs.savingEur), "higher", 0.005),
-    numberRow("build/capacity", overall, "Pack capacity", "mAh", evals.map((e) => e.electrical.pack?.capacityMAh ?? null), "higher", 0.5),
-    numberRow("build/energy", overall, "Pack energy", "Wh", evals.map((e) => e.electrical.pack?.energyWh.value ?? null), "higher", 0.005),
-    numberRow("build/charge-time", overall, "Charge time to full", "h", evals.map((e) => e.electrical.charge?.totalHours.value ?? null), "lower", 0.005),
-    numberRow("build/charger-heat", overall, "Charger heat", "W", evals.map((e) => e.electrical.charge?.lossW.value ?? null), "lower", 0.005),
+    numberRow("build/cost", overall, "Parts cost", "€", evals.map((e) => e.costs.totalEur), "lower"),
+    numberRow("build/saving", overall, "Saving against a new light", "€", evals.map((e) => e.costs.savingEur), "higher"),
+    numberRow("build/capacity", overall, "Pack capacity", "mAh", evals.map((e) => e.electrical.pack?.capacityMAh ?? null), "higher"),
+    numberRow("build/energy", overall, "Pack energy", "Wh", evals.map((e) => e.electrical.pack?.energyWh.value ?? null), "higher"),
+    numberRow("build/charge-time", overall, "Charge time to full", "h", evals.map((e) => e.electrical.charge?.totalHours.value ?? null), "lower"),
+    numberRow("build/charger-heat", overall, "Charger heat", "W", evals.map((e) => e.electrical.charge?.lossW.value ?? null), "lower"),
   ];
   const ids = orderedUnion(evals.map((e) => e.scenarios.map((s) => s.id)));
   for (const id of ids) rows.push(...scenarioRows(evals, id));

@@ -2,7 +2,7 @@ import { getMaterial } from "@/lib/thermal";
 import { formatQuantity, QUANTITY_INFO, type UnitPreferences } from "@/lib/units";
 import type { PartKind } from "./common";
 import type { FieldDef } from "./fields";
-import type { DriverMode } from "./modes";
+import { FROM_BATTERY, modeDrive, type DriverMode } from "./modes";
 import { KIND_DEFINITIONS } from "./registry";
 
 /** A table column for one of a kind's main figures. */
@@ -41,16 +41,14 @@ export function formatFieldValue(field: FieldDef, value: unknown, prefs: UnitPre
   }
 }
 
+/** A mode's figure as entered, in the reader's units: "2.8 A", "9 W from the battery". */
+export function modeFigureText(mode: Parameters<typeof modeDrive>[0], prefs: UnitPreferences, digits = 3): string {
+  const d = modeDrive(mode);
+  return `${formatQuantity(d.value, d.quantity, prefs, { digits })}${d.side === "battery" ? ` ${FROM_BATTERY}` : ""}`;
+}
+
 function summariseModes(modes: readonly DriverMode[], prefs: UnitPreferences): string {
-  return modes
-    .map((mode) => {
-      const output =
-        mode.outputCurrentA !== undefined
-          ? formatQuantity(mode.outputCurrentA, "current", prefs, { digits: 3 })
-          : formatQuantity(mode.outputPowerW ?? 0, "power", prefs, { digits: 3 });
-      return `${mode.name} ${output}`;
-    })
-    .join(" · ");
+  return modes.map((mode) => `${mode.name} ${modeFigureText(mode, prefs)}`).join(" · ");
 }
 
 /** The unit a form shows beside a quantity input (what a bare number there means). */

@@ -4,26 +4,60 @@ import { formatNumber, parseQuantity, unitField } from "@/lib/units";
 export const MAX_DRIVER_MODES = 12;
 
 /**
- * A driver mode delivers either a regulated current (most LED drivers) or a regulated power;
- * exactly one of the two is given. Efficiency is output ÷ input power at that mode.
+ * A driver mode is given as kits are sold: a regulated current or power into the emitters
+ * (most LED drivers), or the current or power it draws from the battery ("9 W from the
+ * battery"); exactly one of the four. Efficiency is output ÷ input power at that mode.
  */
 export const driverModeSchema = z
   .strictObject({
     name: z.string({ error: "required" }).trim().min(1, "required").max(40, "must be at most 40 characters"),
     outputCurrentA: unitField("current", { gt: 0, required: false }),
     outputPowerW: unitField("power", { gt: 0, required: false }),
+    /** Current drawn from the battery (at the pack's nominal voltage for the steady figures). */
+    inputCurrentA: unitField("current", { gt: 0, max: 100, required: false }),
+    /** Power drawn from the battery. */
+    inputPowerW: unitField("power", { gt: 0, max: 1000, required: false }),
     efficiency: unitField("percent", { gt: 0, max: 1 }),
   })
   .superRefine((mode, ctx) => {
-    const given = (mode.outputCurrentA !== undefined ? 1 : 0) + (mode.outputPowerW !== undefined ? 1 : 0);
+    const given = DRIVE_KEYS.filter((k) => mode[k] !== undefined).length;
     if (given !== 1) {
       ctx.addIssue({
         code: "custom",
         path: ["outputCurrentA"],
-        message: given === 0 ? "give an output current or an output power" : "give an output current or an output power, not both",
+        message: given === 0 ? "give an output current or power, or the current or power drawn from the battery" : "give one figure: an output current or power, or the current or power drawn from the battery, not two",
       });
     }
   });
+
+const DRIVE_KEYS = ["outputCurrentA", "outputPowerW", "inputCurrentA", "inputPowerW"] as const;
+
+/** What a mode's figure is: which side of the driver it holds on, and whether it is a current or a power. */
+export interface ModeDrive {
+  side: "output" | "battery";
+  quantity: "current" | "power";
+  value: number;
+}
+
+/** The one figure a mode was given by. */
+export function modeDrive(mode: { outputCurrentA?: number; outputPowerW?: number; inputCurrentA?: number; inputPowerW?: number }): ModeDrive {
+  if (mode.inputCurrentA !== undefined) return { side: "battery", quantity: "current", value: mode.inputCurrentA };
+  if (mode.inputPowerW !== undefined) return { side: "battery", quantity: "power", value: mode.inputPowerW };
+  if (mode.outputCurrentA !== undefined) return { side: "output", quantity: "current", value: mode.outputCurrentA };
+  return { side: "output", quantity: "power", value: mode.outputPowerW ?? 0 };
+}
+
+/** The words after a figure that say it is drawn from the battery ("9 W from the battery"). */
+export const FROM_BATTERY = "from the battery";
+const FROM_BATTERY_RE = /\s+from\s+(the\s+)?battery\s*$/i;
+
+/** A mode's figure typed as text → the mode field it goes in: the unit picks current or power, "from the battery" the side. */
+export function modeFigureField(text: string): { key: (typeof DRIVE_KEYS)[number]; text: string } {
+  const battery = FROM_BATTERY_RE.test(text);
+  const figure = text.replace(FROM_BATTERY_RE, "").trim();
+  const power = parseQuantity(figure, "power").ok;
+  return { key: battery ? (power ? "inputPowerW" : "inputCurrentA") : power ? "outputPowerW" : "outputCurrentA", text: figure };
+}
 
 export type DriverMode = z.output<typeof driverModeSchema>;
 export type DriverModeInput = z.input<typeof driverModeSchema>;
@@ -42,8 +76,9 @@ export const modesSchema = z
   });
 
 /**
- * One CSV cell holds all modes: `low: 350 mA, 90 %; high: 2.8 A, 85 %`. The output's unit
- * says whether it is a current or a power; a bare number is a current in A.
+ * One CSV cell holds all modes: `low: 350 mA, 90 %; high: 9 W from the battery, 85 %`. The
+ * figure's unit says whether it is a current or a power (a bare number is a current in A);
+ * "from the battery" after it says it is drawn from the battery rather than delivered.
  */
 export function parseModesCell(cell: string): { ok: true; modes: DriverModeInput[] } | { ok: false; message: string } {
   const modes: DriverModeInput[] = [];
@@ -55,8 +90,8 @@ export function parseModesCell(cell: string): { ok: true; modes: DriverModeInput
       return { ok: false, message: `mode ${index + 1} ("${part}"): write it as name: output, efficiency (e.g. high: 2.8 A, 85 %)` };
     }
     const name = part.slice(0, colon).trim();
-    const asPower = parseQuantity(output, "power");
-    modes.push(asPower.ok ? { name, outputPowerW: output, efficiency } : { name, outputCurrentA: output, efficiency });
+    const figure = modeFigureField(output);
+    modes.push({ name, [figure.key]: figure.text, efficiency });
   }
   return { ok: true, modes };
 }
@@ -65,8 +100,8 @@ export function parseModesCell(cell: string): { ok: true; modes: DriverModeInput
 export function formatModesCell(modes: readonly DriverMode[]): string {
   return modes
     .map((mode) => {
-      const output =
-        mode.outputCurrentA !== undefined ? `${formatNumber(mode.outputCurrentA, 12)} A` : `${formatNumber(mode.outputPowerW ?? 0, 12)} W`;
+      const d = modeDrive(mode);
+      const output = `${formatNumber(d.value, 12)} ${d.quantity === "current" ? "A" : "W"}${d.side === "battery" ? ` ${FROM_BATTERY}` : ""}`;
       return `${mode.name}: ${output}, ${formatNumber(mode.efficiency * 100, 12)} %`;
     })
     .join("; ");

@@ -57,11 +57,14 @@ export function nodeBalanceTrace(thermal: Pick<ThermalResult, "nodes" | "links" 
 
 const ADDS = "common practice (power and light of identical emitters driven alike add up)";
 
-/** Drive power into the emitters: N emitters at the power each one takes. */
-export function driveTrace(mode: Pick<ModeFigures, "driveW" | "emitterPower">): Trace {
+/**
+ * Drive power into the emitters: N emitters at the power each one takes; for a mode given on
+ * the battery side, first what the driver passes on of the power it draws (η·P_battery).
+ */
+export function driveTrace(mode: Pick<ModeFigures, "driveW" | "emitterPower"> & Partial<Pick<ModeFigures, "entered" | "driverEfficiency" | "driverInputW">>): Trace {
   const one = mode.emitterPower.value ?? 0;
   const n = one > 0 ? Math.round(mode.driveW / one) : 0;
-  return trace({
+  const perEmitter = trace({
     element: "drive",
     formula: "Electrical power into the emitters",
     equation: "P_drive = N·P_emitter",
@@ -69,6 +72,28 @@ export function driveTrace(mode: Pick<ModeFigures, "driveW" | "emitterPower">): 
     result: q("P_drive", "drive power", mode.driveW, "W"),
     source: ADDS,
     parts: [mode.emitterPower.trace],
+  });
+  const e = mode.entered;
+  if (!e || e.side !== "battery" || mode.driverEfficiency === undefined || mode.driverInputW === undefined) return perEmitter;
+  const eta = mode.driverEfficiency;
+  const fromCurrent = e.quantity === "current";
+  const v = fromCurrent && e.value > 0 ? mode.driverInputW / e.value : null;
+  return trace({
+    element: "drive",
+    formula: "Power into the emitters from the power the mode draws from the battery",
+    equation: fromCurrent ? "P_drive = η·I_battery·V_pack" : "P_drive = η·P_battery",
+    inputs: [
+      ...(fromCurrent ? [q("I_battery", "current drawn from the battery, as entered by the part's author", e.value, "A"), q("V_pack", "pack's nominal voltage", v ?? 0, "V")] : [q("P_battery", "power drawn from the battery, as entered by the part's author", e.value, "W")]),
+      q("η", "efficiency of the mode, as entered by the part's author", eta, "1"),
+    ],
+    result: q("P_drive", "drive power into the emitters", mode.driveW, "W"),
+    source: "energy balance of the converter, P_out = η·P_in (common practice); figures as entered by the part's author",
+    notes: [
+      fromCurrent
+        ? "Worked out at the pack's nominal voltage: as the pack runs down its voltage falls and so does the power of a mode held at a battery current."
+        : "A mode held at a battery power keeps its light as the pack runs down; the current it draws rises as the voltage falls.",
+    ],
+    parts: [perEmitter],
   });
 }
 

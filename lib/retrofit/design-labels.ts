@@ -23,6 +23,7 @@ export const DESIGN_LABELS = {
   "lightEngine.board.dielectricConductivityWPerMK": "Emitter board dielectric conductivity",
   "lightEngine.interface": "Board → heatsink interface",
   "lightEngine.heatsink": "Heatsink",
+  "lightEngine.finDirection": "Fin direction",
   "lightEngine.mount": "Mounting",
   "lightEngine.mount.kind": "Mounting",
   "lightEngine.mount.interface": "Mounting interface",

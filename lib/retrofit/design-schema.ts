@@ -2,6 +2,7 @@ import { z } from "zod";
 import { curvesSchema } from "@/lib/curves";
 import { KIND_DEFINITIONS, isMaterialId, MATERIAL_IDS, type PartKind } from "@/lib/parts";
 import { unitField } from "@/lib/units";
+import { FIN_DIRECTIONS, type FinDirection } from "@/lib/thermal/correlations";
 
 /**
  * What a saved build revision stores. Each part slot is either a reference to a part in
@@ -73,6 +74,11 @@ export const lightEngineSchema = z.strictObject({
   /** Between the emitter board (or the emitter, without one) and the heatsink. */
   interface: slot("interface").optional(),
   heatsink: slot("heatsink").optional(),
+  /**
+   * How the heatsink's fins stand in use; absent: along the lamp's axis, so vertical when
+   * the lamp is held upright and level when it lies (see `finDirectionOf`).
+   */
+  finDirection: z.enum(FIN_DIRECTIONS, { error: "choose how the fins stand: vertical, level, pointing up or hanging down" }).optional(),
   mount: mountSchema.default({ kind: "in-housing-air" }),
 });
 
@@ -182,3 +188,16 @@ export type ReflectorDesign = z.output<typeof reflectorSchema>;
 export type Environment = z.output<typeof environmentSchema>;
 export type HousingShape = z.output<typeof housingShapeSchema>;
 export type Costs = z.output<typeof costsSchema>;
+
+/** Fin directions as the build editor offers them (label, then a line of help). */
+export const FIN_DIRECTION_CHOICES: readonly (readonly [FinDirection, string])[] = [
+  ["vertical", "Vertical: channels run up and down"],
+  ["horizontal", "Level, on an upright base"],
+  ["up", "Pointing up from a level base"],
+  ["down", "Hanging down under a level base"],
+];
+
+/** The fins' direction in use: as given, else along the lamp's axis (vertical when upright, level when lying). */
+export function finDirectionOf(le: { finDirection?: FinDirection }, env: { orientation: Environment["orientation"] }): FinDirection {
+  return le.finDirection ?? (env.orientation === "upright" ? "vertical" : "horizontal");
+}

@@ -1,3 +1,4 @@
+import type { ModeDrive } from "@/lib/parts";
 import { cautionsFor, type Caution } from "./cautions";
 import { checkPackVoltage, selectedModes } from "./checks";
 import { costSummary, type CostSummary } from "./costs";
@@ -19,6 +20,8 @@ export interface ModeSummary {
   modeIndex: number;
   verdict: Verdict | null;
   driveW: number | null;
+  /** The mode's figure as entered, shown beside what the emitters get. */
+  entered: ModeDrive | null;
   totalFluxLm: number | null;
   packCurrentA: number | null;
   runtime: Traced | null;
@@ -69,6 +72,7 @@ export function evaluateBuild(build: ResolvedBuild, options: EvaluateOptions = {
         modeIndex: s.modeIndex ?? 0,
         verdict: s.thermal?.verdict ?? null,
         driveW: s.mode?.driveW ?? null,
+        entered: s.mode?.entered ?? null,
         totalFluxLm: s.mode?.totalFluxLm ?? null,
         packCurrentA: s.mode?.packCurrentA ?? null,
         runtime: s.mode?.runtime ?? null,

@@ -1,6 +1,7 @@
-import type { DriverMode } from "@/lib/parts";
+import { modeDrive, type DriverMode } from "@/lib/parts";
 import { isThermalInputError, networkSchema, solveSteady, type SteadyResult } from "@/lib/thermal";
 import { compileBuild, sinkLinks, type CompiledBuild, type ScenarioHeat } from "./compile";
+import { declaredRise } from "./compile/heatsink";
 import { pathResistance } from "./inverse";
 import { driverAt, type DriverPoint } from "./electrical/driver";
 import { currentForPower, emitterAt, type EmitterPoint } from "./electrical/emitter";
@@ -29,11 +30,26 @@ export interface OperatingPoint {
   heat: ScenarioHeat;
 }
 
+/**
+ * Power the driver delivers to the emitters for a mode given on the battery side: η·P_battery,
+ * with P_battery = I·V at the pack's nominal voltage for a current; null without a pack to
+ * give that voltage. For a mode given on the output side: null.
+ */
+export function batterySideOutputW(mode: DriverMode, pack: PackSummary | null): number | null {
+  const drive = modeDrive(mode);
+  if (drive.side !== "battery") return null;
+  const v = pack?.nominalVoltage.value ?? null;
+  const inputW = drive.quantity === "power" ? drive.value : v !== null ? drive.value * v : null;
+  return inputW === null ? null : inputW * mode.efficiency;
+}
+
 /** Electrical state of a mode at a junction temperature. */
 export function modeElectrical(build: ResolvedBuild, e: ResolvedPart<"emitter">, d: ResolvedPart<"driver">, mode: DriverMode, pack: PackSummary | null, tjC: number): ModeElectrical {
   const n = build.lightEngine.count;
   const parallel = build.lightEngine.wiring === "parallel";
-  const perEmitter = mode.outputCurrentA !== undefined ? (parallel ? mode.outputCurrentA / n : mode.outputCurrentA) : currentForPower(e, n, mode.outputPowerW ?? 0, tjC);
+  // A mode drawn from the battery holds a power into the emitters (η·P_battery), like a regulated output power.
+  const outW = mode.outputPowerW ?? batterySideOutputW(mode, pack) ?? 0;
+  const perEmitter = mode.outputCurrentA !== undefined ? (parallel ? mode.outputCurrentA / n : mode.outputCurrentA) : currentForPower(e, n, outW, tjC);
   const ep = emitterAt(e, perEmitter, tjC);
   // A regulated power holds the heat steady as Vf moves; a regulated current lets it fall.
   if (mode.outputCurrentA === undefined) ep.heatPerKelvin = 0;
@@ -91,8 +107,7 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
       chargerW: 0,
     };
     // A declared rating's correction needs the sink's rise: start from the junction's heat through the rating (the driver's heat does not pass the sink).
-    const rated = build.lightEngine.heatsink?.specs;
-    if (sinkRise === null && rated?.rating === "declared") sinkRise = Math.max(heat.junctionW * rated.sinkToAirKPerW, 1e-3);
+    if (sinkRise === null) sinkRise = declaredRise.start(build.lightEngine.heatsink?.specs, heat.junctionW);
     const compiled = compileBuild(build, heat, { sinkToAirKPerW: sinkR ?? null, sinkRiseK: sinkRise }, problems);
     if (!compiled) return null;
     if (sinkR === null) sinkR = compiled.sinkEstimateKPerW;
@@ -102,19 +117,15 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
     const newSinkR: number | null = compiled.sinkLink !== null ? pathResistance(compiled.network, steady, sinkLinks(compiled)) : sinkR;
     last = { el, compiled, steady, heat };
     const riseBefore = sinkRise;
-    if (compiled.sinkLink !== null) {
-      const l = compiled.network.links[compiled.sinkLink]!;
-      const at = (id: string) => (id === "ambient" ? compiled.network.ambientC : (steady.temperaturesC[id] ?? compiled.network.ambientC));
-      sinkRise = Math.max(at(l.from) - at(l.to), 1e-3);
-    }
+    if (compiled.sinkLink !== null) sinkRise = declaredRise.at(compiled.network, steady.temperaturesC, compiled.sinkLink);
     // Only a declared rating depends on the rise (its correction); a geometry sink's model follows it by itself.
     const declared = build.lightEngine.heatsink?.specs.rating === "declared";
-    const riseMoved = !declared ? 0 : riseBefore === null ? 1 : Math.abs((sinkRise ?? 0) - riseBefore) / Math.max(riseBefore, 1e-3);
+    const riseMoved = !declared ? 0 : declaredRise.moved(riseBefore, sinkRise ?? 0);
     const moved = Math.abs(tjNew - tj);
     const sinkMoved = sinkR !== null && newSinkR !== null ? Math.abs(newSinkR - sinkR) / sinkR : 0;
     tj = tjNew;
     sinkR = newSinkR;
-    if (moved < o.toleranceK && sinkMoved < 1e-3 && riseMoved < 1e-3) {
+    if (moved < o.toleranceK && sinkMoved < 1e-3 && riseMoved < declaredRise.tolerance) {
       // Re-evaluate the electrical side at the converged Tj so every figure belongs to it.
       return { converged: true, iterations: k, electrical: modeElectrical(build, e, d, mode, pack, tj), compiled, steady, heat };
     }

@@ -2,7 +2,11 @@ import { z } from "zod";
 import { KIND_DEFINITIONS } from "@/lib/parts";
 import { declaredResistance, explainLinks, isThermalInputError, solveSteady, type Network, type Trace } from "@/lib/thermal";
 import { unitField } from "@/lib/units";
-import { compileSinkToAir } from "./compile/heatsink";
+import { compileSinkToAir, declaredRise } from "./compile/heatsink";
+import type { SpecsOfKind } from "@/lib/parts";
+import { FIN_DIRECTIONS } from "@/lib/thermal/correlations";
+
+type HeatsinkSpecs = SpecsOfKind<"heatsink">;
 import { NetworkBuilder } from "./compile/builder";
 import { joint } from "./compile/joints";
 import { requiredLinkResistance } from "./inverse";
@@ -23,7 +27,11 @@ export const QUICK_CHECK_DEFAULT_MAX_TJ_C = 125;
 const geometrySinkSchema = z.preprocess(
   fillFinGap,
   z
-    .strictObject({ geometry: KIND_DEFINITIONS.heatsink.specsSchema, gapWorkedOut: z.boolean().optional() })
+    .strictObject({
+      geometry: KIND_DEFINITIONS.heatsink.specsSchema,
+      gapWorkedOut: z.boolean().optional(),
+      finDirection: z.enum(FIN_DIRECTIONS, { error: "choose how the fins stand: vertical, level, pointing up or hanging down" }).default("vertical"),
+    })
     .superRefine((s, ctx) => {
       if (s.geometry.rating === "geometry") checkFinFit(s.geometry, s.gapWorkedOut !== true, ctx, ["geometry"]);
     }),
@@ -32,7 +40,12 @@ const geometrySinkSchema = z.preprocess(
 export const quickCheckInputSchema = z.strictObject({
   heatWatts: unitField("power", { gt: 0, max: 500 }),
   sink: z.union([
-    z.strictObject({ declaredKPerW: unitField("thermalResistance", { gt: 0, max: 1000 }) }),
+    z.strictObject({
+      declaredKPerW: unitField("thermalResistance", { gt: 0, max: 1000 }),
+      /** The rise the rating holds at; absent: the heatsink part's default (see `declaredAtRise`). */
+      ratedDeltaK: unitField("temperatureDifference", { gt: 0, max: 200, required: false }),
+      ratedAirflow: z.enum(["natural", "forced"], { error: "must be natural or forced" }).default("natural"),
+    }),
     geometrySinkSchema,
   ]),
   interface: z.strictObject({ areaM2: unitField("area", { gt: 0, max: 0.1 }), specs: KIND_DEFINITIONS.interface.specsSchema }).optional(),
@@ -84,10 +97,8 @@ function finGapOf(input: QuickCheckInput, problems: ProblemList): { finGapM: num
   return { finGapM: used, finGapWorkedOut: workedOut };
 }
 
-export function quickCheck(input: QuickCheckInput): QuickCheckResult {
-  const problems = new ProblemList();
-  const maxTj = input.maxTjC ?? QUICK_CHECK_DEFAULT_MAX_TJ_C;
-  if (input.maxTjC === undefined) problems.add("maxTjC", `no junction limit given: ${QUICK_CHECK_DEFAULT_MAX_TJ_C} °C assumed (common practice)`, "info");
+/** The check's network at a sink rise (the rise matters only to a declared rating's correction). */
+function compileCheck(input: QuickCheckInput, sinkSpecs: HeatsinkSpecs, riseK: number | null, problems: ProblemList) {
   const b = new NetworkBuilder(input.ambientC, problems);
   b.node("junction", "LED junction", "heatWatts");
   b.node("solder", "emitter solder point", "rthJspKPerW");
@@ -99,41 +110,70 @@ export function quickCheck(input: QuickCheckInput): QuickCheckResult {
   const jt = input.interface ? joint({ name: "interface", specs: input.interface.specs, curves: {} }, input.interface.areaM2, "interface", problems) : null;
   const rif = jt?.kelvinPerWatt ?? 1e-6;
   b.resistance("solder", "sink", rif, "interface → heatsink", "interface", jt?.trace ?? trace({ element: "interface", formula: "No interface given", equation: "R = 0", inputs: [], result: q("R", "resistance", 0, "K/W"), source: "as entered by the person running the check (no interface given)" }));
-  const sinkOut =
-    "declaredKPerW" in input.sink
-      ? compileSinkToAir(b, { rating: "declared", sinkToAirKPerW: input.sink.declaredKPerW, ratedAirflow: "natural" }, "ambient", "sink", input.ambientC)
-      : compileSinkToAir(b, input.sink.geometry, "ambient", "sink.geometry", input.ambientC);
+  const declared = "declaredKPerW" in input.sink;
+  const out = compileSinkToAir(b, sinkSpecs, "ambient", declared ? "sink" : "sink.geometry", input.ambientC, { riseK, finDirection: "finDirection" in input.sink ? input.sink.finDirection : "vertical" });
   const gap = finGapOf(input, problems);
-  const empty: QuickCheckResult = { tjC: null, solderPointC: null, sinkC: null, maxTjC: maxTj, headroomK: null, verdict: null, sinkKPerW: null, requiredForLimitKPerW: null, requiredForBudgetKPerW: null, network: null, traces: [], problems: [], ...gap };
-  if (!sinkOut) return { ...empty, problems: problems.list };
-  const network = b.network([{ node: "junction", watts: input.heatWatts }]);
-  try {
-    const s = solveSteady(network);
-    const t = s.temperaturesC;
-    const headroom = maxTj - (t.junction ?? 0);
-    const others = sinkOut.radiationLink === null ? [] : [sinkOut.radiationLink];
-    const lim = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj, 0.02, others);
-    const bud = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj - MARGIN_K, 0.02, others);
-    const atSolution = explainLinks(network, s);
-    const traces = b.linkPlaces.map((l, i) => l.trace ?? atSolution[i]!);
-    return {
-      tjC: t.junction ?? null,
-      solderPointC: t.solder ?? null,
-      sinkC: t.sink ?? null,
-      maxTjC: maxTj,
-      headroomK: headroom,
-      verdict: verdictFor(headroom, MARGIN_K),
-      sinkKPerW: (t.sink! - input.ambientC) / input.heatWatts,
-      requiredForLimitKPerW: lim.kelvinPerWatt,
-      requiredForBudgetKPerW: bud.kelvinPerWatt,
-      network,
-      traces,
-      problems: problems.list,
-      ...gap,
-    };
-  } catch (err) {
-    if (!isThermalInputError(err)) throw err;
-    problems.add("sink", `no steady state: ${err.message}`);
-    return { ...empty, network, problems: problems.list };
+  return { gap, built: out ? { b, out, network: b.network([{ node: "junction", watts: input.heatWatts }]) } : null };
+}
+
+export function quickCheck(input: QuickCheckInput): QuickCheckResult {
+  const maxTj = input.maxTjC ?? QUICK_CHECK_DEFAULT_MAX_TJ_C;
+  const note = (p: ProblemList) => {
+    if (input.maxTjC === undefined) p.add("maxTjC", `no junction limit given: ${QUICK_CHECK_DEFAULT_MAX_TJ_C} °C assumed (common practice)`, "info");
+    return p;
+  };
+  const sinkSpecs: HeatsinkSpecs =
+    "declaredKPerW" in input.sink
+      ? { rating: "declared", sinkToAirKPerW: input.sink.declaredKPerW, ratedAirflow: input.sink.ratedAirflow, ...(input.sink.ratedDeltaK === undefined ? {} : { ratedDeltaK: input.sink.ratedDeltaK }) }
+      : input.sink.geometry;
+  const empty: QuickCheckResult = { tjC: null, solderPointC: null, sinkC: null, maxTjC: maxTj, headroomK: null, verdict: null, sinkKPerW: null, requiredForLimitKPerW: null, requiredForBudgetKPerW: null, network: null, traces: [], problems: [], finGapM: null, finGapWorkedOut: false };
+  // A declared rating holds at its rated rise: the same fixed point on the sink's rise as the Budget's.
+  let rise = declaredRise.start(sinkSpecs, input.heatWatts);
+  for (let k = 1; ; k++) {
+    const problems = note(new ProblemList());
+    const { gap, built } = compileCheck(input, sinkSpecs, rise, problems);
+    if (!built) return { ...empty, ...gap, problems: problems.list };
+    const { b, out: sinkOut, network } = built;
+    try {
+      const s = solveSteady(network);
+      if (rise !== null) {
+        const next = declaredRise.at(network, s.temperaturesC, sinkOut.link);
+        const settled = declaredRise.moved(rise, next) < declaredRise.tolerance;
+        if (!settled && k < MAX_RISE_ITERATIONS) {
+          rise = next;
+          continue;
+        }
+        if (!settled) problems.add("sink", `the rated sink's correction for its temperature rise did not settle in ${MAX_RISE_ITERATIONS} steps; figures are from the last one`, "warning");
+      }
+      const t = s.temperaturesC;
+      const headroom = maxTj - (t.junction ?? 0);
+      const others = sinkOut.radiationLink === null ? [] : [sinkOut.radiationLink];
+      const lim = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj, 0.02, others);
+      const bud = requiredLinkResistance(network, s, sinkOut.link, "junction", maxTj - MARGIN_K, 0.02, others);
+      const atSolution = explainLinks(network, s);
+      const traces = b.linkPlaces.map((l, i) => l.trace ?? atSolution[i]!);
+      return {
+        tjC: t.junction ?? null,
+        solderPointC: t.solder ?? null,
+        sinkC: t.sink ?? null,
+        maxTjC: maxTj,
+        headroomK: headroom,
+        verdict: verdictFor(headroom, MARGIN_K),
+        sinkKPerW: (t.sink! - input.ambientC) / input.heatWatts,
+        requiredForLimitKPerW: lim.kelvinPerWatt,
+        requiredForBudgetKPerW: bud.kelvinPerWatt,
+        network,
+        traces,
+        problems: problems.list,
+        ...gap,
+      };
+    } catch (err) {
+      if (!isThermalInputError(err)) throw err;
+      problems.add("sink", `no steady state: ${err.message}`);
+      return { ...empty, ...gap, network, problems: problems.list };
+    }
   }
 }
+
+/** Steps of the declared rating's fixed point before the check gives up (it settles in a handful). */
+const MAX_RISE_ITERATIONS = 30;

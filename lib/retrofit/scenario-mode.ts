@@ -1,4 +1,4 @@
-import type { DriverMode } from "@/lib/parts";
+import { modeDrive, type DriverMode, type ModeDrive } from "@/lib/parts";
 import type { Network } from "@/lib/thermal";
 import { checkModeCurrents, deratingPoint } from "./checks";
 import { runtime, type PackSummary } from "./electrical/pack";
@@ -11,6 +11,8 @@ import { MAX_RUN_S, thermalResult, warmup, whatItTakes, type ThermalResult, type
 import type { Traced } from "./trace";
 
 export interface ModeFigures {
+  /** The mode's figure as the maker entered it (delivered to the emitters, or drawn from the battery). */
+  entered: ModeDrive;
   currentPerEmitterA: number;
   ledCurrentA: number;
   vf: Traced;
@@ -60,9 +62,30 @@ export interface ChargingFigures {
   chargeCurrentA: number;
 }
 
+/** A mode given on the battery side needs a pack (for a current) within the driver's input range; says why not. */
+function batterySideReady(build: ResolvedBuild, mode: DriverMode, field: string, pack: PackSummary | null, problems: ProblemList): boolean {
+  const drive = modeDrive(mode);
+  if (drive.side !== "battery") return true;
+  if (!pack) {
+    if (drive.quantity === "current") {
+      problems.add(field, `mode "${mode.name}" is given as current drawn from the battery: add the cells to the build so its power can be worked out`);
+      return false;
+    }
+    return true;
+  }
+  const d = build.driver.part;
+  const v = pack.nominalVoltage.value ?? 0;
+  if (d && (v < d.specs.inputVoltageMinV || v > d.specs.inputVoltageMaxV)) {
+    problems.add(field, `mode "${mode.name}" is given as drawn from the battery, but the pack's ${v.toFixed(2)} V is outside the driver's input range ${d.specs.inputVoltageMinV.toFixed(2)}–${d.specs.inputVoltageMaxV.toFixed(2)} V`);
+    return false;
+  }
+  return true;
+}
+
 export function runMode(build: ResolvedBuild, mode: DriverMode, index: number, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList): ScenarioResult {
   const field = `driver.modes[${index}]`;
   const base: ScenarioResult = { id: `mode:${mode.name}`, kind: "mode", name: mode.name, modeIndex: index, converged: false, iterations: 0, network: null, thermal: null, warmup: null, whatItTakes: null, derating: null, mode: null, charging: null };
+  if (!batterySideReady(build, mode, field, pack, problems)) return base;
   const op = solveModePoint(build, mode, field, pack, o, problems);
   if (!op) return base;
   const el = op.electrical;
@@ -82,6 +105,7 @@ export function runMode(build: ResolvedBuild, mode: DriverMode, index: number, p
   const flux = el.emitter.traces.flux;
   const cellI = el.packCurrentA !== null ? el.packCurrentA / build.pack.parallel : null;
   const figures: ModeFigures = {
+    entered: modeDrive(mode),
     currentPerEmitterA: el.emitter.currentA,
     ledCurrentA: el.ledCurrentA,
     vf: el.emitter.traces.vf,

@@ -1,48 +1,102 @@
 import type { BuildEvaluation } from "@/lib/retrofit";
 
 /**
- * What a review comment may be pinned to: the nodes and links of the revision's heat path
- * (over every scenario: charging adds the charger), and the Budget's figures. A link's key
- * is "from->to"; parallel links between the same nodes (convection and radiation) share it.
+ * What a review comment may be pinned to, each with its name in words: the nodes and links of
+ * the revision's heat path (in every scenario, and over all of them), the rows of the headroom
+ * table and the warm-up curves of every limited place, and the Budget's figures. The key is
+ * what the API stores ("driver#mode:high", "driver->wall-driver", "mode:high/headroom/touch");
+ * people only ever read the label ("driver board, high mode").
  */
-export interface HeatPathAnchors {
-  nodes: { key: string; label: string }[];
-  links: { key: string; label: string }[];
-  figures: { key: string; label: string }[];
+export interface Anchor {
+  key: string;
+  label: string;
+  /** The scenario the anchor belongs to; absent for the heat path over every scenario and the build's own figures. */
+  scenarioId?: string;
 }
+export interface HeatPathAnchors {
+  nodes: Anchor[];
+  links: Anchor[];
+  figures: Anchor[];
+}
+export type AnchorKind = "node" | "link" | "figure";
 
 export const linkKey = (from: string, to: string): string => `${from}->${to}`;
+/** A node or link in one scenario: "driver#mode:high". */
+export const inScenario = (key: string, scenarioId: string): string => `${key}#${scenarioId}`;
 
-export function heatPathAnchors(evaluation: Pick<BuildEvaluation, "scenarios" | "verdict">): HeatPathAnchors {
-  const nodes = new Map<string, string>();
-  const links = new Map<string, string[]>();
-  const figures = new Map<string, string>([["build/verdict", "Overall verdict"], ["build/costs", "Costs"], ["build/electrical", "Pack, runtime and charge time"]]);
+type EvaluationLike = Pick<BuildEvaluation, "scenarios" | "verdict">;
+type ScenarioLike = BuildEvaluation["scenarios"][number];
+
+/** "high mode", "charging". */
+export function scenarioWords(s: Pick<ScenarioLike, "kind" | "name">): string {
+  return s.kind === "charging" ? "charging" : `${s.name.toLowerCase()} mode`;
+}
+
+const LIMIT_WORDS: Record<string, (place: string) => string> = {
+  "cells-max": (p) => `${p} (upper limit)`,
+  "cells-min": (p) => `${p} (lower limit)`,
+};
+
+export function heatPathAnchors(evaluation: EvaluationLike): HeatPathAnchors {
+  const nodes = new Map<string, Anchor>();
+  const links = new Map<string, Anchor & { places: string[] }>();
+  const figures = new Map<string, Anchor>([
+    ["build/verdict", { key: "build/verdict", label: "overall verdict" }],
+    ["build/costs", { key: "build/costs", label: "costs" }],
+    ["build/electrical", { key: "build/electrical", label: "pack, runtime and charge time" }],
+  ]);
+  const scoped: { nodes: Anchor[]; links: Anchor[] } = { nodes: [], links: [] };
   for (const s of evaluation.scenarios) {
-    for (const n of s.thermal?.nodes ?? []) if (!nodes.has(n.id)) nodes.set(n.id, n.place);
+    const name = scenarioWords(s);
+    for (const n of s.thermal?.nodes ?? []) {
+      if (!nodes.has(n.id)) nodes.set(n.id, { key: n.id, label: n.place });
+      scoped.nodes.push({ key: inScenario(n.id, s.id), label: `${n.place}, ${name}`, scenarioId: s.id });
+    }
+    const here = new Map<string, string[]>();
     for (const l of s.thermal?.links ?? []) {
       const k = linkKey(l.from, l.to);
-      const places = links.get(k) ?? [];
-      if (!places.includes(l.place)) places.push(l.place);
-      links.set(k, places);
+      const all = links.get(k) ?? { key: k, label: "", places: [] };
+      if (!all.places.includes(l.place)) all.places.push(l.place);
+      links.set(k, all);
+      const p = here.get(k) ?? [];
+      if (!p.includes(l.place)) p.push(l.place);
+      here.set(k, p);
     }
-    const name = s.kind === "charging" ? "charging" : `mode ${s.name}`;
-    figures.set(`${s.id}/headroom`, `Headroom table, ${name}`);
-    figures.set(`${s.id}/ladder`, `Temperature ladder, ${name}`);
-    if (s.warmup) figures.set(`${s.id}/warmup`, `Warm-up curves, ${name}`);
-    if (s.whatItTakes) figures.set(`${s.id}/what-it-takes`, `What it takes, ${name}`);
+    for (const [k, places] of here) scoped.links.push({ key: inScenario(k, s.id), label: `${places.join(" + ")}, ${name}`, scenarioId: s.id });
+    const fig = (key: string, label: string) => figures.set(key, { key, label, scenarioId: s.id });
+    fig(`${s.id}/headroom`, `headroom table, ${name}`);
+    for (const l of s.thermal?.limits ?? []) fig(`${s.id}/headroom/${l.id}`, `headroom of the ${(LIMIT_WORDS[l.id] ?? ((p: string) => p))(l.place)}, ${name}`);
+    fig(`${s.id}/ladder`, `temperature ladder, ${name}`);
+    if (s.warmup) {
+      fig(`${s.id}/warmup`, `warm-up curves, ${name}`);
+      for (const c of s.warmup.crossings) {
+        const place = s.thermal?.limits.find((l) => l.id === c.limitId)?.place ?? "limited place";
+        fig(`${s.id}/warmup/${c.limitId}`, `warm-up of the ${place}, ${name}`);
+      }
+    }
+    if (s.whatItTakes) fig(`${s.id}/what-it-takes`, `what it takes, ${name}`);
   }
   return {
-    nodes: [...nodes].map(([key, label]) => ({ key, label })),
-    links: [...links].map(([key, places]) => ({ key, label: places.join(" + ") })),
-    figures: [...figures].map(([key, label]) => ({ key, label })),
+    nodes: [...nodes.values(), ...scoped.nodes],
+    links: [...[...links.values()].map(({ key, places }) => ({ key, label: places.join(" + ") })), ...scoped.links],
+    figures: [...figures.values()],
   };
 }
 
-/** Null when the anchor exists in this heat path; otherwise the message naming what is allowed. */
-export function anchorProblem(anchors: HeatPathAnchors, anchor: { kind: "node" | "link" | "figure"; key: string }): string | null {
-  const list = anchor.kind === "node" ? anchors.nodes : anchor.kind === "link" ? anchors.links : anchors.figures;
+/** The words for a stored anchor; a key this revision no longer has still reads as words, never as an id. */
+export function anchorLabel(anchors: HeatPathAnchors, anchor: { kind: AnchorKind; key: string }): string {
+  const found = anchors[`${anchor.kind}s`].find((a) => a.key === anchor.key);
+  if (found) return found.label;
+  return anchor.kind === "node" ? "a place no longer in the heat path" : anchor.kind === "link" ? "a link no longer in the heat path" : "a figure no longer on the Budget";
+}
+
+const KIND_WORDS: Record<AnchorKind, string> = { node: "place in the heat path", link: "link in the heat path", figure: "figure of the Budget" };
+
+/** Null when the anchor exists in this revision; otherwise a message for people (no ids). */
+export function anchorProblem(anchors: HeatPathAnchors, anchor: { kind: AnchorKind; key: string }, revision?: number): string | null {
+  const list = anchors[`${anchor.kind}s`];
   if (list.some((a) => a.key === anchor.key)) return null;
-  if (list.length === 0) return `This revision has no ${anchor.kind}s to pin a comment to (its heat path could not be worked out); pin it to a figure instead.`;
-  const some = list.slice(0, 12).map((a) => a.key).join(", ");
-  return `"${anchor.key}" is not a ${anchor.kind} of this revision's heat path; choose one of: ${some}${list.length > 12 ? ", …" : ""}.`;
+  const rev = revision ? `revision ${revision}` : "this revision";
+  if (list.length === 0) return `Pinned to: ${rev} has no ${KIND_WORDS[anchor.kind]} to pin a comment to (its heat path could not be worked out); pin it to a figure instead.`;
+  return `Pinned to: that ${KIND_WORDS[anchor.kind]} does not exist in ${rev}; click a place, a link or a row that is shown, then pin the comment.`;
 }

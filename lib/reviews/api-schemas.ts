@@ -40,7 +40,7 @@ export const commentSchema = z.strictObject({
 
 export const verdictSchema = z.strictObject({
   status: z.enum(VERDICT_STATUSES, { error: "The verdict is approved, changes_requested or rejected." }),
-  summary: z.string({ error: "Sum the verdict up in a sentence or two." }).trim().min(1, { error: "Sum the verdict up in a sentence or two." }).max(4000),
+  summary: z.string({ error: "Summary: write a sentence or two saying why." }).trim().min(1, { error: "Summary: write a sentence or two saying why." }).max(4000, { error: "Summary: keep it under 4000 characters." }),
 });
 
 export const createShareSchema = z.strictObject({
@@ -48,6 +48,9 @@ export const createShareSchema = z.strictObject({
   /** Days until the link stops working; absent: it works until revoked. */
   expiresInDays: z.number({ error: "Expiry is a number of days." }).int({ error: "Expiry is a whole number of days." }).min(1, { error: "Expiry is 1 to 365 days." }).max(365, { error: "Expiry is 1 to 365 days." }).optional(),
 });
+
+/** A review's share link: the reviewed revision is fixed by the review; only the expiry is chosen. */
+export const createReviewShareSchema = createShareSchema.omit({ revision: true });
 
 export const markReadSchema = z.strictObject({
   /** Absent: mark every notification read. */
@@ -65,8 +68,8 @@ export type CompareItem = z.infer<typeof compareItemSchema>;
 
 const itemsArray = z
   .array(compareItemSchema)
-  .min(MIN_COMPARE, { error: `Compare at least ${MIN_COMPARE} builds.` })
-  .max(MAX_COMPARE, { error: `Compare at most ${MAX_COMPARE} builds.` });
+  .min(MIN_COMPARE, { error: `Builds to compare: pick at least ${MIN_COMPARE}.` })
+  .max(MAX_COMPARE, { error: `Builds to compare: pick at most ${MAX_COMPARE}.` });
 
 /** `?items=buildId[@rev],…` → items; the whole list is refused if any entry is malformed. */
 export const compareQuerySchema = z.strictObject({

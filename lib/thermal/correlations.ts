@@ -186,3 +186,21 @@ export const CHANNEL_SOURCE =
 
 /** Bar-Cohen & Rohsenow's optimum spacing of symmetric isothermal plates, s_opt = 2.714·(gβΔT/(να·L))^(−¼) (the closed form the channel correlation's maximum should match). */
 export const OPTIMUM_SPACING_COEFFICIENT = 2.714;
+
+/** How the fins of a straight-fin sink stand in use. */
+export const FIN_DIRECTIONS = ["vertical", "horizontal", "up", "down"] as const;
+export type FinDirection = (typeof FIN_DIRECTIONS)[number];
+
+/** What each fin direction's model rests on, for the trace. */
+export const FIN_DIRECTION_SOURCE: Readonly<Record<FinDirection, string>> = {
+  vertical: `channels: ${CHANNEL_SOURCE}; outer faces: Churchill & Chu, as ${INCROPERA_CH9}, eq. 9.27`,
+  up:
+    `fins pointing up from a level base: the vertical-channel correlation with the fin height as the channel's rise (${CHANNEL_SOURCE}) — applying it this way is common practice, not a published fit for upward arrays; ` +
+    `outer faces: Churchill & Chu, as ${INCROPERA_CH9}, eq. 9.27 with L = fin height`,
+  horizontal:
+    `level fins on an upright base: the fins between the end fins as a block with vertical front and gap ends (Churchill & Chu, as ${INCROPERA_CH9}, eq. 9.27, L = base width) — a conservative bound (common practice); ` +
+    `end fins' free faces: upper face of a hot plate, ${INCROPERA_CH9}, eq. 9.30/9.31, lower face 7th ed. eq. 9.32, L = A/P, no better than eq. 9.27 stood vertical`,
+  down:
+    `fins hanging down from a level base: the array taken as a block shedding heat from its underside (lower surface of a hot plate, Incropera, DeWitt, Bergman & Lavine, 7th ed., eq. 9.32, L = A/P) and from its open ends and end fins (Churchill & Chu, as ${INCROPERA_CH9}, eq. 9.27, L = fin height) — a conservative bound (common practice); ` +
+    `measured downward arrays: Dayan, Kushnir, Mittelman & Ullmann, Int. J. Heat Mass Transfer (2004), issue 12–13, pp. 2849–2860`,
+};

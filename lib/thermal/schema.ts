@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { NETWORK_LIMITS } from "./constants";
-import { SURFACES } from "./correlations";
+import { FIN_DIRECTIONS, SURFACES } from "./correlations";
 import { referenceIssues, transientIssues } from "./validate";
 
 /**
@@ -66,7 +66,7 @@ export const finnedHeatsinkLinkSchema = z.object({
   type: z.literal("finned-heatsink"),
   /** Across the fins. */
   baseWidthM: length,
-  /** Along the fins — the vertical height of the channels (fins are taken vertical). */
+  /** Along the fins — the height of the channels when the fins are vertical. */
   baseLengthM: length,
   baseThicknessM: length,
   finCount: z.number().int().min(2).max(500),
@@ -79,6 +79,8 @@ export const finnedHeatsinkLinkSchema = z.object({
   airSpeedMPerS: finite(0, 100).optional(),
   /** Whether the back of the base also faces the air (default false: it is mounted). */
   backExposed: z.boolean().optional(),
+  /** How the fins stand: vertical (default), horizontal (level fins on an upright base), up or down (level base, fins pointing up or hanging down). */
+  finDirection: z.enum(FIN_DIRECTIONS, { error: `must be one of: ${FIN_DIRECTIONS.join(", ")}` }).optional(),
 });
 
 export const linkSchema = z.discriminatedUnion("type", [

@@ -21,10 +21,10 @@ export interface SeedReviewsInput {
 const DEFAULT_KEYS = { reviewed: "lantern-strap", variants: ["lantern-pressed", "lantern-floating"], queued: "headlamp-pressed" } as const;
 
 const COMMENTS = [
-  { by: "reviewer", anchor: { kind: "node", key: "driver" }, body: "Strapped, the driver board keeps its headroom at low and mid. Floating free (the other variant) it passes its rating at mid after about half an hour; pressed to the wall it has the most margin of the three." },
-  { by: "reviewer", anchor: { kind: "link", key: "driver->wall-driver" }, body: "This is the strap and its adhesive: thin copper tape is the weak step. A wider strap, or the ground plane pressed to the wall through a pad, lowers the driver by tens of kelvin." },
-  { by: "reviewer", anchor: { kind: "node", key: "junction" }, body: "High mode is over budget at the junction in all three variants: the emitter's path to the case sets that limit, not the driver. Time-limit high or step it down to mid." },
-  { by: "maker", anchor: { kind: "figure", key: "mode:high/headroom" }, body: "Understood: I'll try the ground plane pressed to the wall and cap high mode with a step-down." },
+  { by: "reviewer", anchor: { kind: "node", key: "driver" }, target: "driver board", body: "Strapped, the driver board keeps its headroom at low and mid. Floating free (the other variant) it passes its rating at mid after about half an hour; pressed to the wall it has the most margin of the three." },
+  { by: "reviewer", anchor: { kind: "link", key: "driver->wall-driver" }, target: "strap from the driver to the housing wall", body: "This is the strap and its adhesive: thin copper tape is the weak step. A wider strap, or the ground plane pressed to the wall through a pad, lowers the driver by tens of kelvin." },
+  { by: "reviewer", anchor: { kind: "node", key: "junction" }, target: "LED junction", body: "High mode is over budget at the junction in all three variants: the emitter's path to the case sets that limit, not the driver. Time-limit high or step it down to mid." },
+  { by: "maker", anchor: { kind: "figure", key: "mode:high/headroom" }, target: "headroom table, high mode", body: "Understood: I'll try the ground plane pressed to the wall and cap high mode with a step-down." },
 ] as const;
 
 async function existing(buildId: string, reviewerId: string): Promise<string | undefined> {
@@ -56,7 +56,7 @@ export async function seedReviews({ ids, builds: byKey, keys = DEFAULT_KEYS }: S
     for (const c of COMMENTS) {
       const author = c.by === "reviewer" ? ids.reviewer : ids.maker;
       const other = c.by === "reviewer" ? ids.maker : ids.reviewer;
-      await addComment({ reviewId, buildId: reviewed, authorId: author, anchor: c.anchor, body: c.body, notify: { userId: other, text: `New comment on ${c.anchor.kind} ${c.anchor.key} in the review of the square lantern.` } });
+      await addComment({ reviewId, buildId: reviewed, authorId: author, anchor: c.anchor, body: c.body, notify: { userId: other, text: `New comment on the ${c.target} in the review of the square lantern.` } });
     }
     await decideReview({
       id: reviewId,

@@ -12,7 +12,7 @@ import { loadDesignParts, type LoadedBuild } from "./load";
  * Bump when the engine or the compiler changes what a result contains or how it is worked
  * out: cached results of another version are recomputed.
  */
-export const SOLVER_VERSION = `e${EVALUATION_VERSION}.6`;
+export const SOLVER_VERSION = `e${EVALUATION_VERSION}.7`;
 
 /** A build the caller may see and one of its revisions; who is asking does not change the answer. */
 type SolveArgs = { build: LoadedBuild; revision: RevisionRow };

@@ -24,7 +24,7 @@ export function mailInvitation(input: { to: string; token: string; className: st
       "",
       `Join the class: ${link}`,
       "",
-      "If you have no Sinkwise account yet, the link makes one for this address. If you have one, sign in and the link adds you to the class.",
+      "If you have no Sinkwise account yet, the link makes one for this address. If you have one, signing in with this address adds you to the class (or open the link once signed in).",
       "The link works once and for 7 days.",
     ].join("\n"),
   });

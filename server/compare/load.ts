@@ -2,7 +2,7 @@ import "server-only";
 import type { RevisionRow } from "@/db/queries/builds";
 import { getComparison } from "@/db/queries/comparisons";
 import type { BuildViewer } from "@/lib/builds/access";
-import { designDiff, figureRows, ladders, warmupSeries, withTraces } from "@/lib/compare";
+import { columnNamesFor, designDiff, figureRows, ladders, sideBySide, summarise, warmupSeries, withTraces } from "@/lib/compare";
 import { ApiError } from "@/lib/http/api-error";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import { buildDesignSchema, type BuildDesign } from "@/lib/retrofit";
@@ -19,9 +19,9 @@ export async function loadItems({ items, viewer }: { items: readonly CompareItem
   const out: { build: LoadedBuild; revision: RevisionRow }[] = [];
   for (const [i, item] of items.entries()) {
     // The builds' own loaders apply the rule; only their words change here (which item, and that nothing is compared).
-    const build = await loadBuild({ id: item.buildId, viewer }).catch(refuse(new ApiError("not_found:build", `Build ${item.buildId} does not exist or is not shared with you, so nothing is compared.`, `items[${i}]`)));
+    const build = await loadBuild({ id: item.buildId, viewer }).catch(refuse(new ApiError("not_found:build", `Builds to compare: build ${item.buildId} does not exist or is not shared with you, so nothing is compared.`, `items[${i}]`)));
     const number = item.revision ?? build.currentRevision;
-    const revision = await loadRevision({ build, number }).catch(refuse(new ApiError("not_found:revision", `Build ${item.buildId} has no revision ${number}, so nothing is compared.`, `items[${i}]`)));
+    const revision = await loadRevision({ build, number }).catch(refuse(new ApiError("not_found:revision", `Builds to compare: build ${item.buildId} has no revision ${number}, so nothing is compared.`, `items[${i}]`)));
     out.push({ build, revision });
   }
   return out;
@@ -57,6 +57,10 @@ export async function compareItems({ items, viewer }: { items: readonly CompareI
   const names = new Map<string, string>();
   for (const { revision } of loaded) for (const [id, p] of await loadDesignParts({ design: revision.design, viewer })) names.set(id, p.name);
   const evals = solved.map((s) => s.evaluation);
+  const differences = designDiff(designs, (id) => names.get(id));
+  const differing = differences.filter((d) => d.differs);
+  const columnNames = columnNamesFor(differing, loaded.map(({ build }) => build.variantNote ?? build.title));
+  const summary = summarise({ names: columnNames, differsIn: differing.map((d) => d.label), evaluations: evals });
   const scenarioIds = [...new Set(evals.flatMap((e) => e.scenarios.map((s) => s.id)))];
   return {
     columns: loaded.map(({ build, revision }, i) => ({
@@ -69,7 +73,11 @@ export async function compareItems({ items, viewer }: { items: readonly CompareI
       verdict: evals[i]?.verdict ?? null,
       problems: (evals[i]?.problems ?? []).filter((p) => p.severity !== "info"),
     })),
-    differences: designDiff(designs, (id) => names.get(id)),
+    columnNames,
+    summary,
+    differences,
+    sideBySide: sideBySide(evals),
+    ambientC: designs.map((d) => d.environment.ambientC),
     figures: withTraces(figureRows(evals), evals),
     warmups: warmupSeries(evals),
     ladders: scenarioIds.map((id) => ({ scenarioId: id, scenarioName: evals.flatMap((e) => e.scenarios).find((s) => s.id === id)?.name ?? id, columns: ladders(evals, id) })),

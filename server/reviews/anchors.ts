@@ -12,12 +12,17 @@ import type { ReviewView } from "./load";
  * Call only after loadReview has admitted the viewer.
  */
 export async function reviewedSolve({ review }: { review: ReviewView }): Promise<RevisionSolve> {
+  return (await reviewedRevision({ review })).solved;
+}
+
+/** The reviewed revision's stored design and its evaluation (as reviewedSolve). */
+export async function reviewedRevision({ review }: { review: ReviewView }): Promise<{ design: unknown; solved: RevisionSolve }> {
   const owner = await getUserById({ id: review.buildOwnerId });
   const viewer = owner ? { id: owner.id, role: owner.role } : null;
   const build = viewer ? await getBuild({ id: review.buildId, viewer }) : undefined;
   const revision = build ? await getRevision({ buildId: build.id, number: review.revisionNumber }) : undefined;
   if (!build || !revision) throw new ApiError("not_found:revision", `Revision ${review.revisionNumber} of this build is not there any more.`, "revision");
-  return solveRevision({ build, revision });
+  return { design: revision.design, solved: await solveRevision({ build, revision }) };
 }
 
 export async function reviewAnchors({ review }: { review: ReviewView }): Promise<HeatPathAnchors> {

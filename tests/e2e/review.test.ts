@@ -53,12 +53,17 @@ describe("Side by side and the Review desk in chromium", () => {
     await page.getByRole("button", { name: "Compare side by side" }).click();
     await page.getByTestId("compare-figures").waitFor({ timeout: 60_000 });
     expect(await page.getByTestId("compare-column").count()).toBe(3);
+    // The summary comes first and says who wins in each mode, in words from the numbers.
+    const first = page.getByTestId("compare-summary-lines").locator("li").first();
+    await expect.poll(() => first.textContent()).toMatch(/^Driver (strapped to the housing|pressed to the wall|floating free) wins in /);
     // The mounting difference is listed first.
     const firstDiff = page.getByTestId("compare-differences").locator("tr").first();
     await expect.poll(() => firstDiff.textContent()).toContain("Driver cooling");
     await expect.poll(() => firstDiff.textContent()).toContain("floating free in the housing's air");
     await page.getByTestId("compare-warmup-chart").locator("canvas").waitFor();
-    await page.getByTestId("compare-ladders").locator("canvas").first().waitFor();
+    // Every column's heat path for the same scenario, and a ladder for each limited place (not only the emitter's).
+    expect(await page.getByTestId("compare-heat-paths").getByTestId("heat-path-diagram").count()).toBe(3);
+    await page.getByTestId("compare-place-ladders").getByRole("region", { name: "Ladder, driver board" }).locator("canvas").first().waitFor();
     await shot(page, "compare-driver-cooling");
     await page.getByRole("button", { name: "Save the comparison" }).click();
     await page.waitForURL(/\/compare\?saved=/);
@@ -102,26 +107,68 @@ describe("Side by side and the Review desk in chromium", () => {
     await page.close();
   });
 
-  it("the reviewer pins a comment to the driver node and records a verdict", async () => {
+  it("the reviewer compares the three variants, reads the summary, pins a comment on the driver board and records a verdict", async () => {
     const page = await reviewer.browser.newPage();
     await signInThroughForm(page, "reviewer@sinkwise.test");
     await page.getByTestId("unread-count").waitFor();
+    // Side by side first: the build under review is offered as one the reviewer was asked to review.
+    await page.goto(`${BASE_URL}/compare`);
+    await page.getByLabel(`Compare ${titles.strapped}`, { exact: true }).locator("xpath=..").getByText("asked to review").waitFor();
+    await page.goto(`${BASE_URL}/compare?items=${ids.strapped},${ids.pressed},${ids.floating}`);
+    const lines = page.getByTestId("compare-summary-lines").locator("li");
+    await lines.first().waitFor({ timeout: 60_000 });
+    // Its first line says which driver cooling wins in each mode; the next lines say why, with numbers.
+    await expect.poll(() => lines.first().textContent()).toMatch(/^Driver (strapped to the housing|pressed to the wall|floating free) wins in /);
+    expect(await lines.nth(1).textContent()).toMatch(/(wins|tie|no variant wins).* K /);
+    await shot(page, "reviewer-compare-summary");
+
     await page.goto(`${BASE_URL}/reviews`);
+    await page.getByRole("button", { name: /^Notifications/ }).click();
+    await page.getByRole("dialog", { name: "Notifications" }).waitFor();
     // The open request is listed first (the demo's finished review is under "Decided").
     await page.getByRole("region", { name: "Waiting for your verdict" }).getByRole("link", { name: titles.strapped, exact: true }).first().click();
     await page.waitForURL(/\/reviews\/[^/]+$/);
-    await page.locator('[data-anchor="node:driver"]').click();
+    // The notification list closed when the page changed.
+    await expect.poll(() => page.getByRole("dialog", { name: "Notifications" }).count()).toBe(0);
+    await page.getByTestId("heat-path-diagram").first().locator('[data-pin-target="node:driver"]').click();
+    await expect.poll(() => page.getByTestId("pin-target").textContent()).toMatch(/Pinned to: driver board, \w+ mode/);
     await page.getByLabel("Comment", { exact: true }).fill("Strapped, the driver board keeps its headroom on high; floating free it does not.");
     await page.getByRole("button", { name: "Pin the comment" }).click();
-    await page.getByTestId("review-comment").filter({ hasText: "keeps its headroom" }).waitFor();
-    await expect.poll(() => page.getByTestId("review-comment").first().textContent()).toContain("node driver");
+    const pinned = page.getByTestId("review-comment").filter({ hasText: "keeps its headroom" });
+    await pinned.waitFor();
+    await expect.poll(() => pinned.textContent()).toMatch(/driver board, \w+ mode/);
+    expect(await pinned.textContent()).not.toMatch(/#|mode:|->/);
+    // The pin is drawn on the diagram.
+    await page.getByTestId("heat-path-diagram").first().locator('[data-pin-target="node:driver"]').getByTestId("pin-mark").waitFor();
+    await shot(page, "review-pinned-on-driver-board");
     const verdict = page.getByRole("form", { name: "Verdict" });
     await verdict.getByLabel("changes requested").check();
+    // Before the button is pressed the form says the summary is still missing.
+    await expect.poll(() => verdict.getByTestId("verdict-needs").textContent()).toContain("Summary");
     await verdict.getByLabel("Summary").fill("Keep the copper strap; time-limit high mode.");
     await verdict.getByRole("button", { name: "Record the verdict" }).click();
     await page.getByTestId("verdict").waitFor();
     await expect.poll(() => page.getByTestId("verdict").textContent()).toContain("Keep the copper strap");
     await shot(page, "review-verdict");
+
+    // The review's own share link opens signed out: verdict and comments, nothing private.
+    const panel = page.getByTestId("review-share").getByRole("region", { name: "Share links" });
+    await panel.getByLabel("Expires after (days)").fill("3");
+    await panel.getByRole("button", { name: "Create a link" }).click();
+    const url = await panel.getByTestId("share-url").inputValue();
+    expect(url).toMatch(/\/share\/review\/[A-Za-z0-9_-]{43}$/);
+    const stranger = await launch();
+    try {
+      const anon = await stranger.browser.newPage();
+      await anon.goto(url.replace(/^https?:\/\/[^/]+/, BASE_URL));
+      await anon.getByTestId("shared-review").waitFor();
+      await expect.poll(() => anon.getByTestId("shared-verdict").textContent()).toContain("Keep the copper strap");
+      await expect.poll(() => anon.getByTestId("shared-comment").filter({ hasText: "keeps its headroom" }).textContent()).toMatch(/driver board, \w+ mode/);
+      expect(await anon.locator("body").textContent()).not.toMatch(/@sinkwise\.test/);
+      await shot(anon, "review-share-link-signed-out");
+    } finally {
+      await stranger.close();
+    }
     await page.close();
   });
 

@@ -17,7 +17,7 @@ let parts: PartIds;
 const REVIEWER_EMAIL = "reviewer@sinkwise.test";
 
 type Review = { id: string; status: string; revisionNumber: number; olderRevision: boolean; summary: string; reviewerId: string; buildId: string };
-type Comment = { anchorKind: string; anchorKey: string; body: string; authorName: string };
+type Comment = { anchorKind: string; anchorKey: string; target: string; body: string; authorName: string };
 
 beforeAll(async () => {
   [owner, reviewer, admin] = await Promise.all([signedIn("maker@sinkwise.test"), signedIn(REVIEWER_EMAIL), signedIn("admin@sinkwise.test")]);
@@ -158,7 +158,15 @@ describe("reviews: pinned comments and the verdict", () => {
     const nowhere = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "flux-capacitor" }, body: "x" });
     expect(nowhere.status).toBe(400);
     expect(nowhere.body.error?.path).toBe("anchor.key");
-    expect(nowhere.body.error?.message).toContain("junction");
+    // The message names the field on screen and what is wrong in words, never an id.
+    expect(nowhere.body.error?.message).toMatch(/^Pinned to: that place in the heat path does not exist in revision \d+/);
+    expect(nowhere.body.error?.message).not.toMatch(/flux-capacitor|junction|wall-engine/);
+    const missingScenario = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "driver#mode:turbo" }, body: "x" });
+    expect(missingScenario.status).toBe(400);
+    expect(missingScenario.body.error?.path).toBe("anchor.key");
+    const pinned = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "node", key: "driver#mode:high" }, body: "Too hot in high." });
+    expect(pinned.status, JSON.stringify(pinned.body)).toBe(201);
+    expect((pinned.body.comment as { target: string }).target).toBe("driver board, high mode");
     const anchors = (await reviewer.get(`/api/v1/reviews/${id}`)).body.anchors as { nodes: { key: string }[]; links: { key: string }[]; figures: { key: string }[] };
     expect(anchors.nodes.map((n) => n.key)).toEqual(expect.arrayContaining(["junction", "driver", "wall-driver"]));
     expect(anchors.links.map((n) => n.key)).toContain("driver->wall-driver");
@@ -171,7 +179,14 @@ describe("reviews: pinned comments and the verdict", () => {
       ["node", "driver"],
       ["link", "driver->wall-driver"],
       ["figure", "mode:high/headroom"],
+      ["node", "driver#mode:high"],
     ]);
+    expect(comments.map((c) => c.target)).toEqual(["driver board", expect.any(String), "headroom table, high mode", "driver board, high mode"]);
+    // Notifications name the target in words, never by its key.
+    const told = (await owner.get("/api/v1/notifications")).body.items as { text: string; reviewId: string }[];
+    const mine = told.filter((n) => n.reviewId === id).map((n) => n.text);
+    expect(mine.some((t) => t.includes("commented on the driver board, high mode"))).toBe(true);
+    expect(mine.join("\n")).not.toMatch(/#mode|->|mode:high/);
     // The owner hears of the reviewer's comments.
     const notes = (await owner.get("/api/v1/notifications")).body.items as { kind: string; reviewId: string }[];
     expect(notes.some((n) => n.kind === "comment" && n.reviewId === id)).toBe(true);
@@ -191,7 +206,9 @@ describe("reviews: pinned comments and the verdict", () => {
     expect(bad.status).toBe(400);
     expect(bad.body.error?.path).toBe("status");
     const noSummary = await reviewer.post(`/api/v1/reviews/${id}/verdict`, { status: "approved", summary: "" });
+    expect(noSummary.status).toBe(400);
     expect(noSummary.body.error?.path).toBe("summary");
+    expect(noSummary.body.error?.message).toBe("Summary: write a sentence or two saying why.");
     expect(((await owner.get(`/api/v1/reviews/${id}`)).body.review as Review).status).toBe("requested");
 
     const ok = await reviewer.post(`/api/v1/reviews/${id}/verdict`, verdict);

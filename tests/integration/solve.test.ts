@@ -72,11 +72,14 @@ describe("POST /api/v1/builds/[id]/solve", () => {
 
 describe("POST /api/v1/check (no account)", () => {
   it("answers Tj = Ta + P·(Rjsp + Rsink) for a declared sink", async () => {
-    // Hand arithmetic: 25 °C + 7 W × (2.5 K/W + 4 K/W) = 70.5 °C.
-    const r = await new Client().post("/api/v1/check", { heatWatts: "7 W", sink: { declaredKPerW: "4 K/W" }, ambientC: "25 °C", rthJspKPerW: "2.5 K/W" });
+    // Hand arithmetic: 25 °C + 7 W × (2.5 K/W + 4 K/W) = 70.5 °C; the rating holds at the 28 K the sink reaches, so no correction.
+    const r = await new Client().post("/api/v1/check", { heatWatts: "7 W", sink: { declaredKPerW: "4 K/W", ratedDeltaK: "28 K" }, ambientC: "25 °C", rthJspKPerW: "2.5 K/W" });
     expect(r.status).toBe(200);
     expect(r.body.tjC as number).toBeCloseTo(70.5, 3);
     expect(r.body.verdict).toBe("within budget");
+    // Rated at the usual 75 K, the same sink does worse at a 28 K rise (laminar h ∝ ΔT^¼, Incropera et al., 6th ed., eq. 9.27): a hotter junction.
+    const corrected = await new Client().post("/api/v1/check", { heatWatts: "7 W", sink: { declaredKPerW: "4 K/W" }, ambientC: "25 °C", rthJspKPerW: "2.5 K/W" });
+    expect(corrected.body.tjC as number).toBeGreaterThan(72);
   });
 
   it("names the field of a wrong unit", async () => {

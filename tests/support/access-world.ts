@@ -23,6 +23,8 @@ export type World = {
   sharedBuild: string;
   review: string;
   share: { id: string; token: string };
+  /** A share link of the review, made by its reviewer. */
+  reviewShare: { id: string; token: string };
   comparison: string;
   attachment: string;
   /** A second session of the role's account (for a cell that ends its session). */
@@ -33,6 +35,8 @@ export type World = {
     /** A new build of the owner's with a review assigned to the reviewer. */
     review(): Promise<{ buildId: string; reviewId: string }>;
     share(): Promise<{ buildId: string; id: string }>;
+    /** A new share link of `review`, made by the owner. */
+    reviewShare(): Promise<{ reviewId: string; id: string }>;
     attachment(): Promise<{ partId: string; id: string }>;
     /** A build of the owner's shared (view-only) with the second maker. */
     member(): Promise<{ buildId: string; userId: string }>;
@@ -95,6 +99,12 @@ export async function makeWorld(): Promise<World> {
   const sharedBuild = await newBuild("shared");
   const review = await requestReview(build);
   const share = await newShare(build);
+  const newReviewShare = async (by: Client): Promise<{ id: string; token: string }> => {
+    const r = await by.post(`/api/v1/reviews/${review}/shares`, {});
+    check(r, 201, "review share");
+    return r.body.share as { id: string; token: string };
+  };
+  const reviewShare = await newReviewShare(reviewer.client);
   const saved = await o.post("/api/v1/comparisons", { title: "Matrix pair", items: [{ buildId: build }, { buildId: sharedBuild }] });
   check(saved, 201, "comparison");
   const attachment = await newAttachment(parts.emitter);
@@ -120,6 +130,7 @@ export async function makeWorld(): Promise<World> {
     },
     review,
     share,
+    reviewShare,
     comparison: (saved.body.comparison as { id: string }).id,
     attachment,
     fresh: {
@@ -133,6 +144,7 @@ export async function makeWorld(): Promise<World> {
         const buildId = await newBuild();
         return { buildId, id: (await newShare(buildId)).id };
       },
+      reviewShare: async () => ({ reviewId: review, id: (await newReviewShare(o)).id }),
       attachment: async () => {
         const partId = await newPart();
         return { partId, id: await newAttachment(partId) };

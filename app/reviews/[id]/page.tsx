@@ -4,10 +4,11 @@ import { BudgetReport } from "@/components/budget/budget-report";
 import { CommentPinboard } from "@/components/reviews/comment-pinboard";
 import { age, OlderRevisionBadge, StatusBadge } from "@/components/reviews/review-badges";
 import type { CommentItem } from "@/components/reviews/types";
+import { SharePanel } from "@/components/reviews/share-panel";
 import { VerdictForm } from "@/components/reviews/verdict-form";
 import { listComments } from "@/db/queries/reviews";
 import { ApiError } from "@/lib/http/api-error";
-import { heatPathAnchors } from "@/lib/reviews/anchors";
+import { anchorLabel, heatPathAnchors } from "@/lib/reviews/anchors";
 import { requirePageUser } from "@/server/auth/session";
 import { reviewedSolve } from "@/server/reviews/anchors";
 import { loadReview } from "@/server/reviews/load";
@@ -28,7 +29,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
     })]);
   const evaluation = solved?.evaluation ?? null;
   const anchors = evaluation ? heatPathAnchors(evaluation) : { nodes: [], links: [], figures: [] };
-  const thread: CommentItem[] = comments.map((c) => ({ ...c, createdAt: c.createdAt.toISOString() }));
+  const thread: CommentItem[] = comments.map((c) => ({ ...c, target: anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), createdAt: c.createdAt.toISOString() }));
   const ambientC = evaluation?.scenarios[0]?.network?.ambientC ?? 25;
   return (
     <div className="space-y-6">
@@ -57,12 +58,18 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
 
       <section className="rounded-lg border border-line bg-white/60 p-4">
         <h2 className="mb-3 font-semibold">Heat path and comments</h2>
-        <CommentPinboard reviewId={review.id} anchors={anchors} comments={thread} canComment={role !== "admin"} />
+        <CommentPinboard reviewId={review.id} anchors={anchors} comments={thread} canComment={role !== "admin"} evaluation={evaluation} ambientC={ambientC} unit={user.temperatureUnit} />
       </section>
 
       {role === "reviewer" && review.status === "requested" && (
         <section className="rounded-lg border border-ember/30 bg-white/70 p-4">
           <VerdictForm reviewId={review.id} />
+        </section>
+      )}
+
+      {role !== "admin" && (
+        <section className="rounded-lg border border-line bg-white/60 p-4" data-testid="review-share">
+          <SharePanel scope={{ kind: "review", reviewId: review.id }} />
         </section>
       )}
 

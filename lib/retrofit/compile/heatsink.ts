@@ -1,8 +1,10 @@
-import { declaredResistance, makeTrace, quantity, emissivityFor, finnedEnvelopeAreaM2, finnedHeatsink, getMaterial, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
+import { declaredResistance, makeTrace, type Network, quantity, emissivityFor, finnedEnvelopeAreaM2, finnedHeatsink, getMaterial, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
 import type { SpecsOfKind } from "@/lib/parts";
 import type { ProblemList } from "../problems";
 import { PLACES, type NetworkBuilder } from "./builder";
-import { LAMINAR_EXPONENT } from "@/lib/thermal/correlations";
+import { LAMINAR_EXPONENT, type FinDirection, type Surface } from "@/lib/thermal/correlations";
+
+const FIN_WORDS: Readonly<Record<FinDirection, string>> = { vertical: "fins vertical", horizontal: "fins level", up: "fins pointing up", down: "fins hanging down" };
 
 type HeatsinkSpecs = SpecsOfKind<"heatsink">;
 type GeometrySpecs = Extract<HeatsinkSpecs, { rating: "geometry" }>;
@@ -57,6 +59,31 @@ export function declaredAtRise(s: Extract<HeatsinkSpecs, { rating: "declared" }>
   return { kelvinPerWatt: r, ratedRiseK: rated, trace };
 }
 
+/**
+ * The declared rating's correction is a fixed point on the sink's rise: start from the heat
+ * through the rating, solve, read the rise at the solution, recompile, until the rise settles.
+ * These three pieces are the one implementation the Budget's operating point and the quick
+ * check both step through.
+ */
+export const declaredRise = {
+  /** First guess: the given heat through the rating as declared; null for a sink that is not declared. */
+  start(s: HeatsinkSpecs | undefined, heatW: number): number | null {
+    return s?.rating === "declared" ? Math.max(heatW * s.sinkToAirKPerW, 1e-3) : null;
+  },
+  /** The rise of the sink link's `from` node above its `to` node in a solution. */
+  at(network: Network, temperaturesC: Readonly<Record<string, number>>, link: number): number {
+    const l = network.links[link]!;
+    const t = (id: string) => (id === "ambient" ? network.ambientC : (temperaturesC[id] ?? network.ambientC));
+    return Math.max(t(l.from) - t(l.to), 1e-3);
+  },
+  /** Relative change between two rises (1 when there was none before). */
+  moved(before: number | null, after: number): number {
+    return before === null ? 1 : Math.abs(after - before) / Math.max(before, 1e-3);
+  },
+  /** A relative change below this ends the fixed point. */
+  tolerance: 1e-3,
+} as const;
+
 /** Straight-fin geometry for the engine, or null (with a problem) when the fins cannot fit on the base. */
 export function finGeometry(s: GeometrySpecs, field: string, problems: ProblemList): FinnedHeatsinkGeometry | null {
   const n = s.finCount;
@@ -105,7 +132,17 @@ export function sinkCapacity(s: HeatsinkSpecs): { heatCapacityJPerK: number; tra
  * convective one first) to ask the "required sink resistance" question of, and a first
  * estimate of their combined resistance.
  */
-export function compileSinkToAir(b: NetworkBuilder, s: HeatsinkSpecs, to: string, field: string, guessC: number, sees: string = to, riseK: number | null = null): { link: number; radiationLink: number | null; estimateKPerW: number } | null {
+export function compileSinkToAir(
+  b: NetworkBuilder,
+  s: HeatsinkSpecs,
+  to: string,
+  field: string,
+  guessC: number,
+  o: { sees?: string; riseK?: number | null; finDirection?: FinDirection } = {},
+): { link: number; radiationLink: number | null; estimateKPerW: number } | null {
+  const sees = o.sees ?? to;
+  const riseK = o.riseK ?? null;
+  const direction = o.finDirection ?? "vertical";
   const where = to === "ambient" ? "ambient air" : PLACES.air;
   const seen = sees === "ambient" ? "surroundings" : sees === "wall" ? PLACES.wall : sees;
   if (s.rating === "declared") {
@@ -123,19 +160,23 @@ export function compileSinkToAir(b: NetworkBuilder, s: HeatsinkSpecs, to: string
     const g = finGeometry(s, field, b.problems);
     if (!g) return null;
     // The finned model's convection to the air; its envelope radiation as a link of its own to what the sink sees.
-    const link = b.link({ from: "sink", to, type: "finned-heatsink", ...g, emissivity: 0 }, `heatsink → ${where} (finned, convection, from geometry)`, field);
+    // The default direction is left out of the link so networks of upright builds read as before.
+    const link = b.link({ from: "sink", to, type: "finned-heatsink", ...g, emissivity: 0, ...(direction === "vertical" ? {} : { finDirection: direction }) }, `heatsink → ${where} (finned, convection, ${FIN_WORDS[direction]}, from geometry)`, field);
     const envelope = finnedEnvelopeAreaM2(g);
     const em = sinkEmissivity(s);
     const radiationLink = b.link({ from: "sink", to: sees, type: "radiation", areaM2: envelope, emissivity: em.e }, `heatsink envelope → ${seen} (radiation, ε ${em.e.toFixed(2)})`, field);
-    const est = finnedHeatsink({ ...g, surfaceC: guessC + 30, ambientC: guessC });
+    const est = finnedHeatsink({ ...g, finDirection: direction, surfaceC: guessC + 30, ambientC: guessC });
     return { link, radiationLink, estimateKPerW: est.kelvinPerWatt };
   }
-  // A flat plate (or one fin): its open face convects and radiates.
+  // A flat plate (or one fin): its open face convects and radiates. Upright (fins vertical or
+  // level): a vertical plate; a level base faces up or down.
   const area = s.baseLengthM * s.baseWidthM;
   const em = sinkEmissivity(s);
-  const link = b.link({ from: "sink", to, type: "natural-convection", areaM2: area, surface: "vertical-plate", characteristicLengthM: s.baseLengthM }, `heatsink plate → ${where} (convection)`, field);
+  const surface: Surface = direction === "up" ? "horizontal-plate-up" : direction === "down" ? "horizontal-plate-down" : "vertical-plate";
+  const plateL = surface === "vertical-plate" ? (direction === "horizontal" ? s.baseWidthM : s.baseLengthM) : area / (2 * (s.baseLengthM + s.baseWidthM));
+  const link = b.link({ from: "sink", to, type: "natural-convection", areaM2: area, surface, characteristicLengthM: plateL }, `heatsink plate → ${where} (convection)`, field);
   const radiationLink = b.link({ from: "sink", to: sees, type: "radiation", areaM2: area, emissivity: em.e }, `heatsink plate → ${seen} (radiation, ε ${em.e.toFixed(2)})`, field);
-  const h = naturalConvection({ surface: "vertical-plate", areaM2: area, characteristicLengthM: s.baseLengthM, surfaceC: guessC + 30, fluidC: guessC });
+  const h = naturalConvection({ surface, areaM2: area, characteristicLengthM: plateL, surfaceC: guessC + 30, fluidC: guessC });
   const rad = radiationExchange({ areaM2: area, emissivity: em.e, surfaceC: guessC + 30, surroundingsC: guessC });
   return { link, radiationLink, estimateKPerW: 1 / (h.conductanceWPerK + rad.conductanceWPerK) };
 }

@@ -1,4 +1,5 @@
 import { declaredResistance, getMaterial, heatCapacity, interfaceLayer, spreadingResistance, strapResistance, type Trace } from "@/lib/thermal";
+import { finDirectionOf } from "../design-schema";
 import type { ResolvedBuild } from "../resolved";
 import { q, scaledTrace, seriesTrace, SOURCES, trace } from "../trace";
 import { PLACES, type NetworkBuilder } from "./builder";
@@ -100,7 +101,11 @@ export function compileLightEngine(b: NetworkBuilder, build: ResolvedBuild, g: H
     const notes = shares > 1 ? [`Interface over the ${n} emitters' combined footprint (${n} × footprint); spreading per emitter into 1/${n} of the base, the ${n} paths in parallel (R_spread/${n}).`] : [];
     b.resistance(top, "sink", r, `interface${spread.length ? " + spreading" : ""}, ${top === "solder" ? "emitter" : "board"} → heatsink`, "lightEngine.interface", seriesTrace("interface", [jt.trace, ...spread.map((t) => (shares > 1 ? scaledTrace(t, shares) : t))], r, notes));
     // Convection to the air around the sink; radiation to the housing wall it sees (air is transparent).
-    const out = compileSinkToAir(b, sink.specs, g.inside, "lightEngine.heatsink", build.environment.ambientC, "wall", sinkRiseK);
+    const out = compileSinkToAir(b, sink.specs, g.inside, "lightEngine.heatsink", build.environment.ambientC, {
+      sees: "wall",
+      riseK: sinkRiseK,
+      finDirection: finDirectionOf(le, build.environment),
+    });
     if (!out) return null;
     sinkLink = out.link;
     sinkRadiationLink = out.radiationLink;

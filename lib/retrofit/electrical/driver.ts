@@ -1,5 +1,5 @@
 import { interpolate } from "@/lib/curves";
-import type { DriverMode } from "@/lib/parts";
+import { modeDrive, type DriverMode } from "@/lib/parts";
 import type { ResolvedPart } from "../resolved";
 import { q, SOURCES, trace, type Traced } from "../trace";
 
@@ -10,9 +10,13 @@ export interface DriverPoint {
   lossW: Traced;
 }
 
-/** Driver loss P_out·(1/η − 1); η from the efficiency-vs-load curve at the LED current when the part has one, else the mode's figure. */
+/**
+ * Driver loss P_out·(1/η − 1); η from the efficiency-vs-load curve at the LED current when the
+ * part has one, else the mode's figure. A mode given on the battery side keeps its own η: its
+ * output was worked out from it, so the power drawn stays what the maker entered.
+ */
 export function driverAt(driver: ResolvedPart<"driver">, mode: DriverMode, outputW: number, ledCurrentA: number): DriverPoint {
-  const curve = driver.curves.efficiencyVsLoad;
+  const curve = modeDrive(mode).side === "battery" ? undefined : driver.curves.efficiencyVsLoad;
   const eta = curve ? interpolate(curve.points, ledCurrentA).y : mode.efficiency;
   const loss = outputW * (1 / eta - 1);
   return {

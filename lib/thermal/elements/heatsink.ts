@@ -1,14 +1,14 @@
 import { airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, STEFAN_BOLTZMANN, toKelvin } from "../constants";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
-import { channelNusselt, CHANNEL_SOURCE } from "../correlations";
+import { channelNusselt, CHANNEL_SOURCE, FIN_DIRECTION_SOURCE, FIN_DIRECTIONS, type FinDirection } from "../correlations";
 import { naturalConvectionH } from "../solver/convection-kernel";
 
-/** Straight-fin heatsink with vertical fins (channels run vertically), all lengths in metres. */
+/** Straight-fin heatsink, all lengths in metres; the fins stand as `finDirection` says (default: vertical channels). */
 export interface FinnedHeatsinkGeometry {
   /** Across the fins. */
   baseWidthM: number;
-  /** Along the fins: the height of the vertical channels. */
+  /** Along the fins: the height of the channels when they are vertical. */
   baseLengthM: number;
   baseThicknessM: number;
   finCount: number;
@@ -20,7 +20,14 @@ export interface FinnedHeatsinkGeometry {
   airSpeedMPerS?: number;
   /** The back of the base faces the air too (default: mounted, so not). */
   backExposed?: boolean;
+  /**
+   * How the fins stand in use: "vertical" (base upright, channels run up and down: the
+   * default), "horizontal" (base upright, fins level), "up" (base level, fins point up),
+   * "down" (base level, fins hang down).
+   */
+  finDirection?: FinDirection;
 }
+export { FIN_DIRECTIONS, type FinDirection };
 
 export interface FinnedHeatsinkEvaluation {
   conductanceWPerK: number;
@@ -43,6 +50,13 @@ export interface FinnedHeatsinkEvaluation {
   gRadiation: number;
   envelopeAreaM2: number;
   reynolds: number;
+  direction: FinDirection;
+  /** Height the air rises along the fins in the channel correlation (base length for vertical fins, fin height for fins pointing up); 0 when no channel flow is used. */
+  channelRiseM: number;
+  /** Fins level: coefficient of the block's front and gap ends (vertical faces as tall as the base is wide). */
+  levelFinWPerM2K: number;
+  /** Fins hanging down: coefficient of the array's underside (a hot surface facing down). */
+  undersideWPerM2K: number;
 }
 
 const MIN_DELTA_K = 1e-9;
@@ -63,6 +77,7 @@ export function finnedEnvelopeAreaM2(g: FinnedHeatsinkGeometry): number {
 export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): FinnedHeatsinkEvaluation {
   const n = g.finCount;
   const lv = g.baseLengthM;
+  const direction = g.finDirection ?? "vertical";
   const s = (g.baseWidthM - n * g.finThicknessM) / (n - 1);
   const filmK = 0.5 * (surfaceK + ambientK);
   const air = airPropertiesAt(filmK);
@@ -71,10 +86,40 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
 
   // Bar-Cohen & Rohsenow composite for isothermal symmetric vertical channels: spans the
   // fully developed (choked) limit Nu = El/24 and the isolated-plate limit Nu ∝ El^(1/4).
-  const el = (STANDARD_GRAVITY * air.expansionPerK * dT * s ** 4) / (air.kinematicViscosityM2PerS * air.diffusivityM2PerS * lv);
-  const nuS = channelNusselt(el);
-  const hNatCh = (nuS * k) / s;
-  const hNatOuter = naturalConvectionH("vertical-plate", lv, surfaceK, ambientK);
+  // The channel's rise is the base length for vertical fins and the fin height for fins
+  // pointing up from a level base.
+  const channelH = (rise: number) => {
+    const el = (STANDARD_GRAVITY * air.expansionPerK * dT * s ** 4) / (air.kinematicViscosityM2PerS * air.diffusivityM2PerS * rise);
+    return { el, nu: channelNusselt(el), h: (channelNusselt(el) * k) / s };
+  };
+  const h = g.finHeightM;
+  const rise = direction === "up" ? h : lv;
+  const ch = channelH(rise);
+  let hNatCh = ch.h;
+  let hNatOuter = naturalConvectionH("vertical-plate", rise, surfaceK, ambientK);
+  let levelFin = 0;
+  let underside = 0;
+  if (direction === "horizontal") {
+    // Level fins on an upright base: warm air in the gaps cannot rise through them; it leaves
+    // at the fin tips and the ends. The fins between the end fins are taken as a block whose
+    // front (the tips' plane) and gap ends are vertical faces as tall as the base is wide.
+    // The two end fins' free faces are horizontal plates (upper and lower face of a hot
+    // plate, L = A/P), no better than the same faces stood vertical.
+    const lFace = (h * lv) / (2 * (h + lv));
+    const hUp = naturalConvectionH("horizontal-plate-up", lFace, surfaceK, ambientK);
+    const hDown = naturalConvectionH("horizontal-plate-down", lFace, surfaceK, ambientK);
+    levelFin = naturalConvectionH("vertical-plate", g.baseWidthM, surfaceK, ambientK);
+    hNatCh = 0;
+    hNatOuter = Math.min(0.5 * (hUp + hDown), hNatOuter);
+  } else if (direction === "down") {
+    // Fins hanging down trap warm air against the base: no channel flow. The array is taken
+    // as a block at the base temperature shedding heat from its underside (a hot surface
+    // facing down) and from its two open ends (vertical faces of the fin height).
+    const lUnder = (g.baseWidthM * lv) / (2 * (g.baseWidthM + lv));
+    underside = naturalConvectionH("horizontal-plate-down", lUnder, surfaceK, ambientK);
+    hNatOuter = naturalConvectionH("vertical-plate", h, surfaceK, ambientK);
+    hNatCh = 0;
+  }
 
   // Forced flow: developing laminar boundary layer on each face, floored by fully developed
   // flow between parallel plates (Nu_Dh = 7.54, Dh = 2s); combined with natural convection
@@ -90,10 +135,23 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
   const lc = g.finHeightM + g.finThicknessM / 2;
   const etaCh = finEta(hCh, g.conductivityWPerMK, g.finThicknessM, lc);
   const etaOut = finEta(hOuter, g.conductivityWPerMK, g.finThicknessM, lc);
-  const gFinsChannel = etaCh * hCh * 2 * (n - 1) * lc * lv;
+  const block = v === 0 && (direction === "down" || direction === "horizontal");
+  const gFinsChannel = !block
+    ? etaCh * hCh * 2 * (n - 1) * lc * lv
+    : direction === "down"
+      ? underside * g.baseWidthM * lv + hOuter * 2 * (n - 1) * s * h
+      : levelFin * (g.baseWidthM * lv + 2 * (n - 1) * s * h);
   const gFinsOuter = etaOut * hOuter * 2 * lc * lv;
-  const gBaseChannel = hCh * (n - 1) * s * lv;
-  const gBack = g.backExposed ? hOuter * g.baseWidthM * lv : 0;
+  const gBaseChannel = (block ? 0 : hCh) * (n - 1) * s * lv;
+  // The back of the base: upright (its height is the base length, or the width for level fins), or level (facing down under fins pointing up, up over fins hanging down).
+  const backH = !g.backExposed
+    ? 0
+    : direction === "vertical"
+      ? hOuter
+      : direction === "horizontal"
+        ? naturalConvectionH("vertical-plate", g.baseWidthM, surfaceK, ambientK)
+        : naturalConvectionH(direction === "up" ? "horizontal-plate-down" : "horizontal-plate-up", (g.baseWidthM * lv) / (2 * (g.baseWidthM + lv)), surfaceK, ambientK);
+  const gBack = g.backExposed ? backH * g.baseWidthM * lv : 0;
 
   // Fins mostly see each other; what leaves by radiation is what the enclosing box sees.
   const envelope = finnedEnvelopeAreaM2(g);
@@ -104,8 +162,8 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
     spacingM: s,
     filmK,
     air,
-    elenbaas: el,
-    channelNusselt: nuS,
+    elenbaas: ch.el,
+    channelNusselt: ch.nu,
     channelNaturalWPerM2K: hNatCh,
     channelForcedWPerM2K: hForcedCh,
     channelWPerM2K: hCh,
@@ -120,6 +178,10 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
     gRadiation: gRad,
     envelopeAreaM2: envelope,
     reynolds: re,
+    direction,
+    channelRiseM: direction === "down" ? 0 : rise,
+    levelFinWPerM2K: levelFin,
+    undersideWPerM2K: underside,
   };
 }
 
@@ -129,14 +191,28 @@ export const finnedHeatsinkConductance = (g: FinnedHeatsinkGeometry, surfaceK: n
 
 const BCR = CHANNEL_SOURCE;
 
+/** How each fin direction reads in a trace. */
+export const FIN_STANDING: Readonly<Record<FinDirection, string>> = {
+  vertical: "Fins vertical: the channels run up and down",
+  horizontal: "Fins level on an upright base: the channels run sideways",
+  up: "Fins pointing up from a level base",
+  down: "Fins hanging down from a level base",
+};
+
 /** Sink-to-air resistance of a straight-fin heatsink at a base temperature and an air temperature. */
 export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: number; ambientC: number }): ElementResult & { evaluation: FinnedHeatsinkEvaluation } {
   const e = evaluateFinnedHeatsink(input, toKelvin(input.surfaceC), toKelvin(input.ambientC));
   const notes = [
     "Base taken isothermal: spreading from a small source into the base is a separate element.",
-    "Fins vertical; radiation leaves through the enclosing box (front, sides and the two channel openings).",
+    `${FIN_STANDING[e.direction]}; radiation leaves through the enclosing box (front, sides and the two channel openings).`,
   ];
-  if (e.elenbaas < 10) notes.push(`Elenbaas number ${e.elenbaas.toPrecision(3)} < 10: the channels are choked in still air (fins too close for natural convection).`);
+  if (e.direction === "horizontal") notes.push("Level fins: warm air cannot rise through the gaps, so the fins between the end fins are taken as a block shedding heat from its front and gap ends (conservative: real arrays do somewhat better, but no better than with vertical fins).");
+  if (e.direction === "down") notes.push("Fins hanging down: warm air is trapped between them, so the channels carry no flow of their own (conservative).");
+  if (e.direction === "horizontal" || e.direction === "down") {
+    const upright = evaluateFinnedHeatsink({ ...input, finDirection: "vertical" }, toKelvin(input.surfaceC), toKelvin(input.ambientC));
+    notes.push(`A lower bound: the same sink with vertical fins would give ${(1 / upright.conductanceWPerK).toPrecision(3)} K/W at these temperatures; the truth lies between the two.`);
+  }
+  if (e.direction !== "down" && e.elenbaas < 10) notes.push(`Elenbaas number ${e.elenbaas.toPrecision(3)} < 10: the channels are choked in still air (fins too close for natural convection).`);
   if ((input.airSpeedMPerS ?? 0) > 0) notes.push("Fan air: flat-plate laminar h floored by fully developed parallel-plate flow, combined with natural convection by the cube rule.");
   const trace = makeTrace({
     element: "finned-heatsink",
@@ -144,7 +220,7 @@ export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: numbe
     equation: "G = η_ch·h_ch·A_fins,ch + η_o·h_o·A_fins,o + h_ch·A_base,ch + h_o·A_back + ε·σ·A_env·(T²+T∞²)(T+T∞)",
     inputs: [
       quantity("W", "base width (across fins)", input.baseWidthM, "m"),
-      quantity("L", "base length (along fins, vertical)", input.baseLengthM, "m"),
+      quantity("L", "base length (along fins)", input.baseLengthM, "m"),
       quantity("t_b", "base thickness", input.baseThicknessM, "m"),
       quantity("N", "fin count", input.finCount, "1"),
       quantity("H", "fin height", input.finHeightM, "m"),
@@ -157,7 +233,10 @@ export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: numbe
     ],
     intermediates: [
       quantity("s", "fin spacing", e.spacingM, "m"),
-      quantity("El", "Elenbaas number gβΔT·s⁴/(να·L)", e.elenbaas, "1"),
+      ...(e.channelRiseM > 0 ? [quantity("L_rise", "height the air rises along the fins (channel correlation)", e.channelRiseM, "m")] : []),
+      ...(e.direction === "horizontal" ? [quantity("h_front", "front and gap ends of the level-fin block, vertical faces as tall as the base is wide", e.levelFinWPerM2K, "W/(m²·K)")] : []),
+      ...(e.direction === "down" ? [quantity("h_under", "underside of the array, a hot surface facing down", e.undersideWPerM2K, "W/(m²·K)")] : []),
+      quantity("El", "Elenbaas number gβΔT·s⁴/(να·L_rise)", e.elenbaas, "1"),
       quantity("Nu_s", "channel Nusselt number [576/El² + 2.87/√El]^(-1/2)", e.channelNusselt, "1"),
       quantity("h_ch", "channel coefficient", e.channelWPerM2K, "W/(m²·K)"),
       quantity("h_o", "outer-face coefficient", e.outerWPerM2K, "W/(m²·K)"),
@@ -171,8 +250,8 @@ export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: numbe
       quantity("G_rad", "radiation from the envelope", e.gRadiation, "W/K"),
     ],
     result: quantity("R", "sink-to-air resistance", 1 / e.conductanceWPerK, "K/W"),
-    source: `${BCR}; outer faces: Churchill & Chu, Int. J. Heat Mass Transfer 18 (1975) 1323; fin efficiency: Incropera et al., 6th ed., §3.6.4; forced flow: Incropera et al., 6th ed., eq. 7.30 and the fully developed parallel-plate value Nu = 7.54 (table number from memory — check against a copy); air: ${e.air.source}`,
-    validity: { range: "vertical fins, isothermal base, laminar flow (Re_L < 5·10⁵)", inRange: e.reynolds < 5e5 },
+    source: `${e.direction === "vertical" ? `${BCR}; outer faces: Churchill & Chu, Int. J. Heat Mass Transfer 18 (1975) 1323` : FIN_DIRECTION_SOURCE[e.direction]}; fin efficiency: Incropera et al., 6th ed., §3.6.4; forced flow: Incropera et al., 6th ed., eq. 7.30 and the fully developed parallel-plate value Nu = 7.54 (table number from memory — check against a copy); air: ${e.air.source}`,
+    validity: { range: `${FIN_STANDING[e.direction].toLowerCase()}, isothermal base, laminar flow (Re_L < 5·10⁵)`, inRange: e.reynolds < 5e5 },
     notes,
   });
   return { ...elementResult(e.conductanceWPerK, trace), evaluation: e };

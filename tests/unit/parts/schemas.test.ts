@@ -85,7 +85,7 @@ describe("bad input names the field", () => {
         }),
       ),
     ).toEqual([
-      "specs.modes[0].outputCurrentA: give an output current or an output power",
+      "specs.modes[0].outputCurrentA: give an output current or power, or the current or power drawn from the battery",
       "specs.modes[1].efficiency: must be at most 100 %",
     ]);
     expect(errors(withSpecs("driver", { modes: [{ name: "a", outputPowerW: "3 W", efficiency: 0.9 }, { name: "A", outputPowerW: "1 W", efficiency: 0.9 }] }))).toEqual([

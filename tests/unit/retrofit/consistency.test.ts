@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { evaluateBuild, quickCheck, quickCheckInputSchema, verdictFor, type BuildDesignInput } from "@/lib/retrofit";
+import { declaredAtRise } from "@/lib/retrofit/compile/heatsink";
 import { lanternDesign, resolved } from "./fixtures/builds";
 import { DECLARED_SINK } from "./fixtures/parts";
 
@@ -93,7 +94,8 @@ describe("quick check", () => {
   it("declared sink: Tj = Ta + P·(Rjsp + R_if + R_sink), by hand", () => {
     // 3 W, Rth(j-sp) 2.5 K/W, paste 50 µm at 3 W/(m·K) over 1 cm² (R = 50e-6/(3·1e-4) = 0.1667 K/W), sink 6 K/W, 25 °C:
     // Tj = 25 + 3·(2.5 + 0.1667 + 6) = 51.0 °C; sink 25 + 18 = 43 °C.
-    const input = quickCheckInputSchema.parse({ heatWatts: "3 W", sink: { declaredKPerW: 6 }, interface: { areaM2: "1 cm^2", specs: { specifiedAs: "bulk", conductivityWPerMK: 3, bondLineM: "50 um" } }, rthJspKPerW: 2.5, ambientC: 25, maxTjC: 125 });
+    // The rating is declared at the 18 K this sink reaches, so the rise correction is 1.
+    const input = quickCheckInputSchema.parse({ heatWatts: "3 W", sink: { declaredKPerW: 6, ratedDeltaK: "18 K" }, interface: { areaM2: "1 cm^2", specs: { specifiedAs: "bulk", conductivityWPerMK: 3, bondLineM: "50 um" } }, rthJspKPerW: 2.5, ambientC: 25, maxTjC: 125 });
     const r = quickCheck(input);
     expect(r.tjC!).toBeCloseTo(25 + 3 * (2.5 + 50e-6 / 3e-4 + 6), 6);
     expect(r.sinkC!).toBeCloseTo(43, 6);
@@ -102,6 +104,30 @@ describe("quick check", () => {
     expect(r.requiredForLimitKPerW!).toBeCloseTo(100 / 3 - 2.5 - 1 / 6, 1);
     expect(r.requiredForBudgetKPerW!).toBeCloseTo(90 / 3 - 2.5 - 1 / 6, 1);
     expect(r.traces.length).toBe(3);
+  });
+
+  it("a declared rating is corrected for the actual rise by the Budget's own correction: R = R_rated/[0.7·(ΔT/75 K)^¼ + 0.3] (laminar h ∝ ΔT^¼, Incropera et al., 6th ed., eq. 9.27 at large Ra; share 0.7 common practice; 75 K from memory of catalogues)", () => {
+    const r = quickCheck(quickCheckInputSchema.parse({ heatWatts: "3 W", sink: { declaredKPerW: 6 }, ambientC: 25, maxTjC: 125 }));
+    // Fixed point by hand: ΔT = 3 W · R(ΔT)
+    let rise = 18;
+    for (let i = 0; i < 200; i++) rise = (3 * 6) / (0.7 * (rise / 75) ** 0.25 + 0.3);
+    expect(r.sinkC! - 25).toBeCloseTo(rise, 1);
+    expect(r.sinkKPerW!).toBeGreaterThan(6.5);
+    const sinkTrace = r.traces.find((t) => t.element === "declared-sink")!;
+    expect(sinkTrace.inputs.find((q) => q.symbol === "ΔT")!.value).toBeCloseTo(rise, 1);
+    const specs = { rating: "declared" as const, sinkToAirKPerW: 6, ratedAirflow: "natural" as const };
+    expect(sinkTrace.result.value).toBeCloseTo(declaredAtRise(specs, r.sinkC! - 25).kelvinPerWatt, 2);
+    // A forced-air rating is left as declared (no natural-convection correction), as on the Budget.
+    const forced = quickCheck(quickCheckInputSchema.parse({ heatWatts: "3 W", sink: { declaredKPerW: 6, ratedAirflow: "forced" }, ambientC: 25 }));
+    expect(forced.sinkC!).toBeCloseTo(43, 6);
+  });
+
+  it("a geometry sink's fins hanging down run hotter than vertical ones (Incropera et al., 7th ed., eq. 9.32 for the underside)", () => {
+    const geometry = { rating: "geometry", baseLengthM: 0.06, baseWidthM: 0.06, baseThicknessM: 0.005, finCount: 8, finHeightM: 0.03, finThicknessM: 0.001375, finSpacingM: 0.007, material: "aluminium-6063-t5", finish: "black-anodised" };
+    const run = (finDirection?: string) => quickCheck(quickCheckInputSchema.parse({ heatWatts: 7, sink: { geometry, ...(finDirection ? { finDirection } : {}) }, ambientC: 25 }));
+    expect(run().tjC!).toBe(run("vertical").tjC!);
+    expect(run("down").tjC!).toBeGreaterThan(run("vertical").tjC! + 10);
+    expect(quickCheckInputSchema.safeParse({ heatWatts: 7, sink: { geometry, finDirection: "diagonal" }, ambientC: 25 }).success).toBe(false);
   });
 
   it("geometry sink: worked out by the finned model, and a choked salvaged sink is tight or worse at 10 W", () => {

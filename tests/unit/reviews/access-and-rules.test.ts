@@ -32,8 +32,8 @@ describe("input schemas", () => {
     expect(compareQuerySchema.parse({ items: "a1,b2@3" }).items).toEqual([{ buildId: "a1" }, { buildId: "b2", revision: 3 }]);
     const five = compareQuerySchema.safeParse({ items: "a,b,c,d,e" });
     expect(five.success).toBe(false);
-    expect(five.error?.issues[0]?.message).toBe("Compare at most 4 builds.");
-    expect(compareQuerySchema.safeParse({ items: "a" }).error?.issues[0]?.message).toBe("Compare at least 2 builds.");
+    expect(five.error?.issues[0]?.message).toBe("Builds to compare: pick at most 4.");
+    expect(compareQuerySchema.safeParse({ items: "a" }).error?.issues[0]?.message).toBe("Builds to compare: pick at least 2.");
     const bad = compareQuerySchema.safeParse({ items: "a,b@x" });
     expect(bad.error?.issues[0]?.path).toEqual(["items", 1]);
     expect(compareQuerySchema.safeParse({ items: "a,b@0" }).success).toBe(false);

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { designDiff, figureRows, ladders, warmupSeries } from "@/lib/compare";
-import { heatPathAnchors, anchorProblem } from "@/lib/reviews/anchors";
+import { columnNamesFor, designDiff, figureRows, ladders, warmupSeries } from "@/lib/compare";
+import { anchorLabel, anchorProblem, heatPathAnchors } from "@/lib/reviews/anchors";
 import { buildDesignSchema, type BuildEvaluation } from "@/lib/retrofit";
 
 const names = (id: string) => ({ tape: "Copper tape strap", pad: "Gap pad", drv: "Buck driver" })[id];
@@ -14,7 +14,13 @@ describe("designDiff", () => {
       label: "Driver cooling",
       values: ["strapped to the housing with Copper tape strap", "ground plane pressed to the housing through Gap pad", "floating free in the housing's air"],
       differs: true,
+      short: ["driver strapped to the housing", "driver pressed to the wall", "driver floating free"],
     });
+    // Columns are called by the few words that set them apart; by their notes when the words repeat.
+    expect(columnNamesFor(rows.filter((r) => r.differs), ["a", "b", "c"])).toEqual(["driver strapped to the housing", "driver pressed to the wall", "driver floating free"]);
+    const twoStraps = designDiff([design({ kind: "strapped", spreader: { partId: "tape" } }), design({ kind: "strapped", spreader: { partId: "pad" } })], names);
+    expect(columnNamesFor(twoStraps.filter((r) => r.differs), ["x", "y"])).toEqual(["strapped to the housing with Copper tape strap", "strapped to the housing with Gap pad"]);
+    expect(columnNamesFor([], ["same", "same"])).toEqual(["same (column 1)", "same (column 2)"]);
     expect(rows.filter((r) => r.differs)).toHaveLength(1);
     expect(rows.find((r) => r.slot === "driver.part")?.values).toEqual(["Buck driver", "Buck driver", "Buck driver"]);
     expect(rows.find((r) => r.slot === "environment.ambientC")?.values[0]).toBe("20.0 °C");
@@ -84,10 +90,16 @@ describe("figureRows", () => {
 describe("review anchors", () => {
   it("offers the heat path's nodes, links by from->to (parallel links merged) and the figures", () => {
     const a = heatPathAnchors(evaluation({ driverC: 80, headroomK: 20, limitAtS: null, runtimeH: 2, cost: 30, verdict: "tight" }));
-    expect(a.nodes.map((n) => n.key)).toEqual(["junction", "driver"]);
-    expect(a.links).toEqual([{ key: "driver->wall", label: "strap + radiation" }]);
-    expect(a.figures.map((f) => f.key)).toEqual(expect.arrayContaining(["build/verdict", "mode:high/headroom", "mode:high/warmup"]));
+    expect(a.nodes.map((n) => n.key)).toEqual(["junction", "driver", "junction#mode:high", "driver#mode:high"]);
+    // Every target reads as words, with its scenario: "driver board, high mode".
+    expect(a.nodes.map((n) => n.label)).toEqual(["LED junction", "driver board", "LED junction, high mode", "driver board, high mode"]);
+    expect(a.links).toEqual([{ key: "driver->wall", label: "strap + radiation" }, { key: "driver->wall#mode:high", label: "strap + radiation, high mode", scenarioId: "mode:high" }]);
+    expect(a.figures.map((f) => f.key)).toEqual(expect.arrayContaining(["build/verdict", "mode:high/headroom", "mode:high/headroom/driver-board", "mode:high/warmup", "mode:high/warmup/driver-board"]));
+    expect(anchorLabel(a, { kind: "figure", key: "mode:high/headroom/driver-board" })).toBe("headroom of the driver board, high mode");
+    expect(anchorLabel(a, { kind: "node", key: "wall-engine" })).toBe("a place no longer in the heat path");
     expect(anchorProblem(a, { kind: "link", key: "driver->wall" })).toBeNull();
-    expect(anchorProblem(a, { kind: "node", key: "sink" })).toBe('"sink" is not a node of this revision\'s heat path; choose one of: junction, driver.');
+    expect(anchorProblem(a, { kind: "node", key: "driver#mode:high" })).toBeNull();
+    expect(anchorProblem(a, { kind: "node", key: "driver#mode:turbo" })).toBe("Pinned to: that place in the heat path does not exist in this revision; click a place, a link or a row that is shown, then pin the comment.");
+    expect(anchorProblem(a, { kind: "node", key: "sink" }, 3)).toBe("Pinned to: that place in the heat path does not exist in revision 3; click a place, a link or a row that is shown, then pin the comment.");
   });
 });

@@ -1,3 +1,4 @@
+import { acceptInvitationsForEmail } from "@/db/queries/classes";
 import { getUserByEmail } from "@/db/queries/users";
 import { signInSchema } from "@/lib/auth/schemas";
 import { ApiError } from "@/lib/http/api-error";
@@ -20,5 +21,7 @@ export const POST = route(async (request) => {
   }
   await signInSucceeded(input.email, address);
   await startSession(user.id);
-  return json({ user: { id: user.id, email: user.email, displayName: user.displayName, role: user.role } });
+  // Invitations to this address join their classes now: an existing account joins on sign-in.
+  const joinedClasses = await acceptInvitationsForEmail({ email: user.email, userId: user.id });
+  return json({ user: { id: user.id, email: user.email, displayName: user.displayName, role: user.role }, joinedClasses });
 });

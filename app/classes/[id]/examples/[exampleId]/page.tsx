@@ -4,6 +4,7 @@ import { DerivationView } from "@/components/classes/derivation-view";
 import { ExampleActions, ExampleTeacherPanel } from "@/components/classes/example-actions";
 import { fmtDate } from "@/components/classes/format";
 import { Markdown } from "@/components/classes/markdown";
+import { valuesWithheld } from "@/lib/classroom/access";
 import { requirePageUser } from "@/server/auth/session";
 import { exampleView } from "@/server/classes/examples";
 import { loadExample, orNotFound } from "@/server/classes/load";
@@ -16,17 +17,21 @@ export default async function ExamplePage({ params }: { params: Promise<{ id: st
   const { example, cls } = await orNotFound(loadExample({ id: exampleId, viewer: user }));
   if (cls.id !== id) notFound();
   const view = await exampleView({ example, canTeach: cls.access.canTeach });
+  const withheld = valuesWithheld(example, cls.access.canTeach);
   const e = view.example;
   return (
     <article className="space-y-5">
       <div>
         <Link href={`/classes/${cls.id}`} className="text-sm text-ink-soft hover:text-ember">← {cls.name}</Link>
-        <h1 className="text-2xl font-semibold">{e.title}</h1>
+        <h1 className="text-2xl font-semibold">
+          {e.title}
+          {view.canTeach && cls.access.canWrite && <Link href={`/classes/${cls.id}/examples/${e.id}/edit`} className="no-print ml-3 align-middle text-sm font-normal text-ink-soft hover:text-ember">Edit</Link>}
+        </h1>
         <p className="text-sm text-ink-soft">
           Worked through revision {e.revision} of “{e.buildTitle}” by {e.authorName}. A saved revision never changes, so these numbers stay as published.
         </p>
       </div>
-      <ExampleActions exampleId={e.id} handoutHref={`/classes/${cls.id}/examples/${e.id}/handout`} canFork={cls.access.canWrite} />
+      <ExampleActions exampleId={e.id} handoutHref={`/classes/${cls.id}/examples/${e.id}/handout`} canFork={cls.access.canWrite && !withheld} />
       {view.canTeach && view.derivation && (
         <ExampleTeacherPanel
           exampleId={e.id}
@@ -42,7 +47,7 @@ export default async function ExamplePage({ params }: { params: Promise<{ id: st
       {!view.canTeach && e.hiddenCount > 0 && !e.revealed && (
         <p className="rounded border border-ember/30 bg-ember-soft/40 p-2 text-sm">
           {e.hiddenCount} value{e.hiddenCount === 1 ? " is" : "s are"} hidden: work {e.hiddenCount === 1 ? "it" : "them"} out and check your answer (within {e.tolerancePercent} %).
-          {e.revealAt && <> The values are revealed on {fmtDate(e.revealAt)}.</>}
+          {e.revealAt && <> The values are revealed on {fmtDate(e.revealAt)}.</>} You can fork the example into your builds once they are.
         </p>
       )}
       {e.narrative.trim() && (

@@ -1,4 +1,5 @@
 import { EXAMPLE_FORMAT, EXAMPLE_FORMAT_VERSION, type ExampleFile, exampleFileName } from "@/lib/classroom/export-format";
+import { valuesWithheld } from "@/lib/classroom/access";
 import { requireUser } from "@/server/auth/session";
 import { exampleView, solveExample } from "@/server/classes/examples";
 import { loadExample } from "@/server/classes/load";
@@ -16,7 +17,8 @@ export const GET = route<{ params: Promise<{ id: string }> }>(async (_request, {
     exportedAt: new Date().toISOString(),
     title: example.title,
     narrative: example.narrative,
-    build: { title: example.buildTitle, revision: revision.number, design: revision.design },
+    // The design would give the questions' answers away to a student until they are revealed.
+    build: { title: example.buildTitle, revision: revision.number, design: valuesWithheld(example, cls.access.canTeach) ? null : revision.design },
     scenario: view.derivation ? { id: view.derivation.scenarioId, name: view.derivation.scenarioName } : null,
     tolerancePercent: example.tolerancePercent,
     hidden: example.hidden,

@@ -1,0 +1,75 @@
+import "server-only";
+import { getReview, listComments } from "@/db/queries/reviews";
+import { findReviewShareByHash } from "@/db/queries/review-shares";
+import { ApiError } from "@/lib/http/api-error";
+import { anchorLabel, heatPathAnchors } from "@/lib/reviews/anchors";
+import { REVIEW_STATUS_LABELS } from "@/lib/reviews/api-schemas";
+import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
+import { sharedReviewResults, type SharedReviewResults } from "@/lib/reviews/shared-review";
+import { loadDesignParts } from "@/server/builds/load";
+import { reviewedRevision } from "./anchors";
+import { reviewView } from "./load";
+import { hashShareToken } from "./tokens";
+
+export interface SharedReview {
+  review: { buildTitle: string; variantNote: string | null; revisionNumber: number; status: string; statusLabel: string; summary: string; reviewerName: string; ownerName: string; createdAt: Date; decidedAt: Date | null };
+  comments: { authorName: string; target: string; body: string; createdAt: Date }[];
+  results: SharedReviewResults | null;
+  expiresAt: Date | null;
+}
+
+type Slot = "emitter" | "driver" | "cell";
+const partIdAt = (design: unknown, path: readonly string[]): string | null => {
+  let at: unknown = design;
+  for (const k of path) at = at && typeof at === "object" ? (at as Record<string, unknown>)[k] : undefined;
+  return at && typeof at === "object" && typeof (at as { partId?: unknown }).partId === "string" ? (at as { partId: string }).partId : null;
+};
+const SLOT_PATHS: Record<Slot, readonly string[]> = { emitter: ["lightEngine", "emitter"], driver: ["driver", "part"], cell: ["pack", "cell"] };
+
+/**
+ * What a review share token opens, without sign-in: the reviewed revision's verdict, its
+ * comments (targets in words, authors by display name) and a results summary without any
+ * private part value, e-mail address or id. Unknown, revoked and expired tokens are refused
+ * with a message saying which.
+ */
+export async function openReviewShare({ token }: { token: string }): Promise<SharedReview> {
+  const unknown = new ApiError("not_found:share", "This review link does not exist.", "token");
+  if (!SHARE_TOKEN_PATTERN.test(token)) throw unknown;
+  const link = await findReviewShareByHash({ tokenHash: hashShareToken(token) });
+  if (!link) throw unknown;
+  const state = shareState(link);
+  if (state === "revoked") throw new ApiError("not_found:share", "This review link was revoked.", "token");
+  if (state === "expired") throw new ApiError("not_found:share", `This review link expired on ${link.expiresAt?.toISOString().slice(0, 10)}.`, "token");
+  const row = await getReview({ id: link.reviewId });
+  if (!row) throw unknown;
+  const review = reviewView(row);
+  const [comments, reviewed] = await Promise.all([listComments({ reviewId: review.id }), reviewedRevision({ review }).catch(() => null)]);
+  const solved = reviewed?.solved ?? null;
+  const anchors = solved ? heatPathAnchors(solved.evaluation) : { nodes: [], links: [], figures: [] };
+  let results: SharedReviewResults | null = null;
+  if (reviewed && solved) {
+    const publicParts = await loadDesignParts({ design: reviewed.design, viewer: null });
+    const open = new Set<Slot>((Object.keys(SLOT_PATHS) as Slot[]).filter((slot) => {
+      const id = partIdAt(reviewed.design, SLOT_PATHS[slot]);
+      return id !== null && publicParts.get(id)?.visibility === "public";
+    }));
+    results = sharedReviewResults(solved.evaluation, open);
+  }
+  return {
+    review: {
+      buildTitle: review.buildTitle,
+      variantNote: review.variantNote,
+      revisionNumber: review.revisionNumber,
+      status: review.status,
+      statusLabel: REVIEW_STATUS_LABELS[review.status],
+      summary: review.summary,
+      reviewerName: review.reviewerName,
+      ownerName: review.requesterName,
+      createdAt: review.createdAt,
+      decidedAt: review.decidedAt,
+    },
+    comments: comments.map((c) => ({ authorName: c.authorName, target: anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), body: c.body, createdAt: c.createdAt })),
+    results,
+    expiresAt: link.expiresAt,
+  };
+}

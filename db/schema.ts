@@ -596,3 +596,30 @@ export const reviewShareLinks = mysqlTable(
   },
   (t) => [uniqueIndex("review_share_link_token_unique").on(t.tokenHash), index("review_share_link_review_idx").on(t.reviewId, t.createdAt)],
 );
+
+export const BENCH_RUN_VISIBILITIES = ["private", "shared"] as const;
+
+/**
+ * A bench run: a measured warm-up with its electrical input and conditions (validated by
+ * lib/bench before every write, in storage units), the fit worked out when it was saved,
+ * and the heatsink part kept from that fit, if any.
+ */
+export const benchRuns = mysqlTable(
+  "bench_run",
+  {
+    id: varchar("id", { length: 40 }).primaryKey(),
+    ownerId: varchar("owner_id", { length: 40 })
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    title: varchar("title", { length: 160 }).notNull(),
+    visibility: mysqlEnum("visibility", BENCH_RUN_VISIBILITIES).notNull().default("private"),
+    poweredPartId: varchar("powered_part_id", { length: 40 }).references(() => parts.id, { onDelete: "set null" }),
+    poweredBuildId: varchar("powered_build_id", { length: 40 }).references(() => builds.id, { onDelete: "set null" }),
+    poweredRevision: int("powered_revision"),
+    run: json("run").notNull(),
+    fit: json("fit"),
+    fittedPartId: varchar("fitted_part_id", { length: 40 }).references(() => parts.id, { onDelete: "set null" }),
+    createdAt: datetime("created_at", { fsp: 3 }).notNull(),
+  },
+  (t) => [index("bench_run_owner_idx").on(t.ownerId, t.createdAt), index("bench_run_visibility_idx").on(t.visibility, t.createdAt), index("bench_run_fitted_part_idx").on(t.fittedPartId)],
+);

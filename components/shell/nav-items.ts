@@ -8,6 +8,7 @@ export const NAV_ITEMS: readonly NavItem[] = [
   { href: "/parts", label: "Parts bin", signedIn: true },
   { href: "/builds", label: "Builds", signedIn: true },
   { href: "/compare", label: "Side by side", signedIn: true },
+  { href: "/bench", label: "Bench runs", signedIn: true },
   { href: "/reviews", label: "Review desk", roles: ["reviewer", "admin"] },
   { href: "/classes", label: "Classroom", signedIn: true },
   { href: "/admin", label: "Admin", roles: ["admin"] },

@@ -180,7 +180,8 @@ export async function getParts({ ids, viewer }: { ids: readonly string[]; viewer
   return rows.map(toRecord);
 }
 
-function columnsOf(part: Part) {
+/** The columns of a validated part (also used by a bench run keeping its fit as a part). */
+export function partColumns(part: Part) {
   return {
     kind: part.kind,
     name: part.name,
@@ -196,7 +197,7 @@ function columnsOf(part: Part) {
 /** Inserts validated parts for one owner in one transaction; returns their ids in order. */
 export async function createParts({ ownerId, parts: input }: { ownerId: string; parts: readonly Part[] }): Promise<string[]> {
   const now = new Date();
-  const rows = input.map((part) => ({ id: newId(), ownerId, verified: false, createdAt: now, updatedAt: now, ...columnsOf(part) }));
+  const rows = input.map((part) => ({ id: newId(), ownerId, verified: false, createdAt: now, updatedAt: now, ...partColumns(part) }));
   if (rows.length === 0) return [];
   await db().transaction(async (tx) => {
     // Batches keep one statement well under max_allowed_packet for a 2,000-row import.
@@ -215,7 +216,7 @@ export async function createPart({ ownerId, part }: { ownerId: string; part: Par
 export async function updatePart({ id, part }: { id: string; part: Part }): Promise<void> {
   await db()
     .update(parts)
-    .set({ ...columnsOf(part), updatedAt: new Date() })
+    .set({ ...partColumns(part), updatedAt: new Date() })
     .where(eq(parts.id, id));
 }
 

@@ -13,36 +13,49 @@ export const readingSchema = z.strictObject({
   tempC: unitField("temperature", { min: -60, max: 400 }),
 });
 
+/** The electrical input and the conditions of a warm-up: the same fields for a fit and for a saved run. */
+const conditionsShape = {
+  ambientC: unitField("temperature", { min: -40, max: 80 }),
+  heatW: unitField("power", { gt: 0, max: 500, required: false }),
+  volts: unitField("voltage", { gt: 0, max: 100, required: false }),
+  amps: unitField("current", { gt: 0, max: 50, required: false }),
+  heatFraction: unitField("fraction", { gt: 0, max: 1, required: false }),
+  massKg: unitField("mass", { gt: 0, max: 100, required: false }),
+  material: z.enum(MATERIAL_IDS, { error: "unknown material" }).optional(),
+  finish: z.enum(FINISH_IDS, { error: `must be one of: ${FINISH_IDS.join(", ")}` }).optional(),
+  orientation: z.enum(["upright", "lying"], { error: "must be upright or lying" }).optional(),
+};
+
+/** The heat is watts, or volts and amps (with the heat fraction, unless a part will give it). */
+function heatRule(needFraction: boolean) {
+  return (v: { heatW?: number; volts?: number; amps?: number; heatFraction?: number }, ctx: z.RefinementCtx) => {
+    if (v.heatW !== undefined) {
+      if (v.volts !== undefined || v.amps !== undefined) ctx.addIssue({ code: "custom", path: ["heatW"], message: "give the heat in watts or as volts and amps, not both" });
+      return;
+    }
+    for (const key of needFraction ? (["volts", "amps", "heatFraction"] as const) : (["volts", "amps"] as const)) {
+      if (v[key] === undefined) ctx.addIssue({ code: "custom", path: [key], message: "required when the heat is not given in watts" });
+    }
+  };
+}
+
+export const fitConditionsSchema = z.strictObject(conditionsShape).superRefine(heatRule(false));
+
 /**
  * The body of POST /api/v1/bench/fit: a warm-up of a heatsink with a known heat input.
  * The heat is given as watts, or as volts × amps with the emitter's heat fraction.
  */
 export const fitInputSchema = z
   .strictObject({
-    ambientC: unitField("temperature", { min: -40, max: 80 }),
-    heatW: unitField("power", { gt: 0, max: 500, required: false }),
-    volts: unitField("voltage", { gt: 0, max: 100, required: false }),
-    amps: unitField("current", { gt: 0, max: 50, required: false }),
-    heatFraction: unitField("fraction", { gt: 0, max: 1, required: false }),
+    ...conditionsShape,
     readings: z
       .array(readingSchema, { error: "expected a list of readings" })
       .min(1, "at least one reading is needed")
       .max(MAX_READINGS, `at most ${MAX_READINGS.toLocaleString("en-GB")} readings in one run`),
-    massKg: unitField("mass", { gt: 0, max: 100, required: false }),
-    material: z.enum(MATERIAL_IDS, { error: "unknown material" }).optional(),
-    finish: z.enum(FINISH_IDS, { error: `must be one of: ${FINISH_IDS.join(", ")}` }).optional(),
-    orientation: z.enum(["upright", "lying"], { error: "must be upright or lying" }).optional(),
   })
-  .superRefine((v, ctx) => {
-    if (v.heatW !== undefined) {
-      if (v.volts !== undefined || v.amps !== undefined) ctx.addIssue({ code: "custom", path: ["heatW"], message: "give the heat in watts or as volts and amps, not both" });
-      return;
-    }
-    for (const key of ["volts", "amps", "heatFraction"] as const) {
-      if (v[key] === undefined) ctx.addIssue({ code: "custom", path: [key], message: "required when the heat is not given in watts" });
-    }
-  });
+  .superRefine(heatRule(true));
 
 export type FitInput = z.output<typeof fitInputSchema>;
 export type FitInputRaw = z.input<typeof fitInputSchema>;
+export type FitConditions = z.output<typeof fitConditionsSchema>;
 export type Reading = z.output<typeof readingSchema>;

@@ -43,6 +43,7 @@ export const FIELD_HINTS: Readonly<Record<PartKind, Readonly<Record<string, Fiel
     finSpacingM: { placeholder: "leave empty: worked out", typical: "3–10 mm; below 5 mm fins choke in still air" },
     emissivity: { placeholder: "0.8", typical: "bare aluminium 0.05–0.1; anodised 0.8–0.9" },
     massKg: { placeholder: "40 g", typical: "10–400 g" },
+    heatCapacityJPerK: { placeholder: "leave empty: from the mass", typical: "about 0.9 J/K per gram of aluminium" },
   },
   interface: {
     conductivityWPerMK: { placeholder: "2 W/(m·K)", typical: "paste 1–5, pad 1–6, adhesive 0.5–2 W/(m·K)" },

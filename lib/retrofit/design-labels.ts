@@ -60,6 +60,15 @@ export const DESIGN_LABELS = {
   "environment.contact": "Hand contact",
   "costs.extras": "Extra costs",
   "costs.comparableNewLightEur": "Price of a comparable new light (€)",
+  calibration: "Calibration from a bench run",
+  "calibration.parameter": "Calibrated figure",
+  "calibration.factor": "Calibration factor",
+  "calibration.low": "Calibration interval, low end",
+  "calibration.high": "Calibration interval, high end",
+  "calibration.run": "Calibration bench run",
+  "calibration.readingCount": "Calibration readings",
+  "calibration.rmsBeforeK": "Misfit before calibrating",
+  "calibration.rmsAfterK": "Misfit after calibrating",
   version: "File version",
 } as const;
 

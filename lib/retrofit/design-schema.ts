@@ -143,6 +143,29 @@ export const costsSchema = z.strictObject({
   comparableNewLightEur: z.number().min(0).max(1e6).optional(),
 });
 
+/**
+ * Which figure of the model a measured warm-up corrects: the heatsink's declared rating, the
+ * convection to and from the air inside a sealed housing, or the housing's convection to the
+ * air outside. Each is a factor on the conductance of the links it names.
+ */
+export const CALIBRATION_PARAMETERS = ["sink-rating", "inside-air", "outside-air"] as const;
+export type CalibrationParameter = (typeof CALIBRATION_PARAMETERS)[number];
+
+/** A revision's correction from a bench run of the finished build (worked out by the calibration, not typed). */
+export const calibrationSchema = z.strictObject({
+  parameter: z.enum(CALIBRATION_PARAMETERS),
+  /** Multiplies the conductance of the parameter's links; 1 is the model as it stands. */
+  factor: z.number().min(0.05).max(20),
+  /** The 95 % interval of the factor from the fit; null when the run could not bound it. */
+  low: z.number().min(0).max(1000).nullable(),
+  high: z.number().min(0).max(1000).nullable(),
+  run: z.strictObject({ id: z.string().trim().min(1).max(40), title: z.string().max(160) }),
+  readingCount: z.number().int().min(1).max(1_000_000),
+  rmsBeforeK: z.number().min(0).max(1000),
+  rmsAfterK: z.number().min(0).max(1000),
+});
+export type Calibration = z.output<typeof calibrationSchema>;
+
 export const buildDesignSchema = z.strictObject({
   version: z.literal(1).default(1),
   housing: slot("housing").optional(),
@@ -152,6 +175,7 @@ export const buildDesignSchema = z.strictObject({
   pack: packSchema.default({ series: 1, parallel: 1 }),
   environment: environmentSchema.default({ ambientC: 25, orientation: "upright", air: { kind: "still" }, contact: "hold-1min" }),
   costs: costsSchema.default({ extras: [] }),
+  calibration: calibrationSchema.optional(),
 });
 
 export type BuildDesign = z.output<typeof buildDesignSchema>;

@@ -76,6 +76,7 @@ export function resolveBuild(design: BuildDesign, lookup: PartLookup): ResolveOu
     },
     environment: design.environment,
     costs: design.costs,
+    ...(design.calibration ? { calibration: design.calibration } : {}),
   };
   return problems.length === 0 ? { ok: true, build, problems: [] } : { ok: false, build, problems };
 }

@@ -1,6 +1,6 @@
 import type { Curve } from "@/lib/curves";
 import type { KIND_DEFINITIONS, PartKind, SpecsOfKind } from "@/lib/parts";
-import type { BoardDesign, BuildDesign, Costs, Environment, HousingShape, ReflectorDesign } from "./design-schema";
+import type { BoardDesign, BuildDesign, Calibration, Costs, Environment, HousingShape, ReflectorDesign } from "./design-schema";
 
 /** The curves a kind carries, each optional (the part schema's own inferred type is `{}`). */
 export type ResolvedCurves<K extends PartKind> = Partial<Record<(typeof KIND_DEFINITIONS)[K]["curveKinds"][number], Curve>>;
@@ -47,4 +47,6 @@ export interface ResolvedBuild {
   };
   environment: Environment;
   costs: Costs;
+  /** A correction from a bench run of the finished build, applied when the network is compiled. */
+  calibration?: Calibration;
 }

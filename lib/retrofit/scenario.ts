@@ -1,5 +1,6 @@
 import { AMBIENT_ID, breakdownRise, isThermalInputError, solveTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
 import type { CompiledBuild } from "./compile";
+import { calibratedTrace, scaleLink } from "./compile/calibration";
 import type { LinkPlace, NodePlace } from "./compile/builder";
 import { evaluateLimits, worstVerdict, type LimitDef, type LimitResult, type Verdict } from "./limits";
 import { maxCommonScale, pathResistance, requiredLinkResistance } from "./inverse";
@@ -72,7 +73,13 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
     const link = net.links[i]!;
     return traceLink(link, at(link.from), at(link.to));
   };
-  const links = compiled.links.map((l, i): LinkResult => ({ ...l, watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: l.trace ?? engineTrace(i) }));
+  // A calibrated link's trace is the model's own (of the link before its factor) inside the correction.
+  const modelTrace = (l: (typeof compiled.links)[number], i: number): Trace => {
+    if (!l.calibration) return l.trace ?? engineTrace(i);
+    const link = net.links[i]!;
+    return calibratedTrace(l.trace ?? traceLink(scaleLink(link, 1 / l.calibration.factor), at(link.from), at(link.to)), l.calibration);
+  };
+  const links = compiled.links.map((l, i): LinkResult => ({ ...l, watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: modelTrace(l, i) }));
   const byPlace = Object.fromEntries(compiled.nodes.map((n) => [n.place, steady.temperaturesC[n.id] ?? 0]));
   const limits = evaluateLimits(defs, steady.temperaturesC, o.marginK);
   let ladder: ThermalResult["ladder"] = null;

@@ -38,6 +38,7 @@ export const QUANTITIES = [
   "resistancePerArea",
   "voltageTempCoefficient",
   "luminousEfficacy",
+  "heatCapacity",
 ] as const;
 
 export type Quantity = (typeof QUANTITIES)[number];
@@ -150,6 +151,7 @@ export const QUANTITY_INFO: Readonly<Record<Quantity, QuantityInfo>> = {
     bare: u("mV/K"),
   },
   luminousEfficacy: { name: "a luminous efficacy", storage: "lm/W", example: "150 lm/W", metric: [u("lm/W")], bare: u("lm/W") },
+  heatCapacity: { name: "a heat capacity", storage: "J/K", example: "60 J/K", metric: [u("J/K"), u("kJ/K")], bare: u("J/K") },
 };
 
 /** Quantities stored as plain numbers (no mathjs unit). */

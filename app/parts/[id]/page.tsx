@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { PartEvidence } from "@/components/bench/part-evidence";
 import { AttachmentsPanel } from "@/components/parts/attachments-panel";
 import { CurveChart } from "@/components/parts/curve-chart-lazy";
 import { PROVENANCE_LABELS, VISIBILITY_LABELS } from "@/components/parts/labels";
@@ -7,6 +8,7 @@ import { PartFields } from "@/components/parts/part-fields";
 import type { CurveKind } from "@/lib/curves";
 import { kindDefinition } from "@/lib/parts";
 import { getPartVerification } from "@/db/queries/part-verifications";
+import { evidenceForPart } from "@/server/bench/load";
 import { loadPartPage } from "@/server/parts/api";
 import { formatMoney } from "@/lib/units/figures";
 
@@ -17,6 +19,8 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
   const prefs = { length: user.lengthUnits, temperature: user.temperatureUnit } as const;
   const def = kindDefinition(part.kind);
   const verification = part.verified ? await getPartVerification({ partId: part.id }) : null;
+  const measured = part.kind === "heatsink" && part.provenance === "measured";
+  const evidence = measured ? await evidenceForPart({ partId: part.id, viewer: user }) : [];
   const curves = (def.curveKinds as readonly CurveKind[]).flatMap((kind) => {
     const curve = part.curves[kind] as { points: { x: number; y: number }[] } | undefined;
     return curve ? [{ kind, points: curve.points }] : [];
@@ -59,6 +63,7 @@ export default async function Page({ params }: { params: Promise<{ id: string }>
           </div>
         </section>
       )}
+      {measured && <PartEvidence runs={evidence} />}
       <AttachmentsPanel partId={part.id} canEdit={part.canEdit} />
     </article>
   );

@@ -28,6 +28,7 @@ export const HEATSINK_FIELDS = [
   { key: "finish", label: "Finish", type: "choice", options: FINISHES, required: false, help: "Surface finish; sets the emissivity unless one is given." },
   { key: "emissivity", label: "Emissivity", type: "quantity", quantity: "fraction", required: false, min: 0, max: 1, help: "Total emissivity of the surface (0–1); overrides the finish." },
   { key: "massKg", label: "Mass", type: "quantity", quantity: "mass", required: false, gt: 0, max: 100, help: "Mass, for warm-up time." },
+  { key: "heatCapacityJPerK", label: "Heat capacity", type: "quantity", quantity: "heatCapacity", required: false, gt: 0, max: 1000000, help: "Heat it takes to warm the sink by 1 K, for warm-up time; measured on the bench or known. Used instead of mass × specific heat when given." },
 ] as const satisfies readonly FieldDef[];
 
 const FIN_FIELDS = ["finHeightM", "finThicknessM"] as const;

@@ -26,6 +26,14 @@ export interface NodePlace {
   heatCapacityTrace?: Trace;
 }
 
+/** A link whose conductance a bench run of the finished build corrected (its design's calibration). */
+export interface LinkCalibration {
+  factor: number;
+  parameter: "sink-rating" | "inside-air" | "outside-air";
+  runTitle: string;
+  readingCount: number;
+}
+
 export interface LinkPlace {
   index: number;
   from: string;
@@ -35,6 +43,8 @@ export interface LinkPlace {
   slot: string;
   /** Trace from the element models at compile time; links whose value depends on temperature get theirs at the solution. */
   trace?: Trace;
+  /** Set when the link's conductance is the model's times a fitted factor. */
+  calibration?: LinkCalibration;
 }
 
 /** Accumulates nodes and links with their places, so the network and its map stay in step. */

@@ -111,6 +111,12 @@ export function finGeometry(s: GeometrySpecs, field: string, problems: ProblemLi
 export const baseAreaM2 = (s: HeatsinkSpecs): number | undefined => (s.rating === "geometry" ? s.baseLengthM * s.baseWidthM : undefined);
 
 export function sinkCapacity(s: HeatsinkSpecs): { heatCapacityJPerK: number; trace: Trace } | undefined {
+  if (s.heatCapacityJPerK !== undefined) {
+    const c = s.heatCapacityJPerK;
+    // A capacity on the part (fitted from a bench run, or known) is the sink's own figure: it
+    // wins over mass × specific heat, which assumes the whole mass warms as one.
+    return { heatCapacityJPerK: c, trace: makeTrace({ element: "heat-capacity", formula: "Heat capacity of the heatsink, as entered", equation: "C", inputs: [quantity("C", "heat capacity given on the part", c, "J/K")], result: quantity("C", "heat capacity", c, "J/K"), source: "as entered on the heatsink part (a measured part's capacity is fitted from its bench run)" }) };
+  }
   const material = s.material ?? "aluminium-6063-t5";
   if (s.massKg !== undefined) return heatCapacity({ massKg: s.massKg, materialId: material });
   if (s.rating !== "geometry") return undefined;

@@ -1,6 +1,7 @@
 import type { Network } from "@/lib/thermal";
 import type { ProblemList } from "../problems";
 import type { ResolvedBuild } from "../resolved";
+import { applyCalibration } from "./calibration";
 import { NetworkBuilder, type LinkPlace, type NodePlace } from "./builder";
 import { compileCells, compileCharger, compileDriver } from "./driver-pack";
 import { compileHousing, housingGeometry } from "./housing";
@@ -65,6 +66,7 @@ export function compileBuild(build: ResolvedBuild, heat: ScenarioHeat, state: Co
   if (driver) sources.push({ node: "driver", watts: heat.driverW });
   if (cells) sources.push({ node: "cells", watts: heat.cellsW });
   if (charger) sources.push({ node: "charger", watts: heat.chargerW });
+  if (build.calibration) applyCalibration(b, build.calibration, le?.sinkLink ?? null);
   return {
     network: b.network(sources),
     nodes: b.nodePlaces,

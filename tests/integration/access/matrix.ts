@@ -41,6 +41,36 @@ const NETWORK = {
 let counter = 0;
 const unique = (tag: string) => `${tag}-${Date.now().toString(36)}-${(counter++).toString(36)}@example.org`;
 
+/** A private bench run of the owner's: one reading and the sink's mass, so it fits. */
+const BENCH_RUN = { title: "Matrix run", conditions: { ambientC: 25, heatW: "7 W", massKg: "100 g", material: "aluminium-6063-t5" }, readings: [{ tS: "20 min", tempC: 60 }] };
+const benchRuns = new WeakMap<World, Promise<string>>();
+async function freshBenchRun(w: World): Promise<string> {
+  const r = await w.clients.owner.post("/api/v1/bench/runs", BENCH_RUN);
+  if (r.status !== 201) throw new Error(`bench run: ${r.status} ${JSON.stringify(r.body)}`);
+  return (r.body.run as { id: string }).id;
+}
+function benchRun(w: World): Promise<string> {
+  let id = benchRuns.get(w);
+  if (!id) benchRuns.set(w, (id = freshBenchRun(w)));
+  return id;
+}
+
+/** A private warm-up of the owner's build (world.build) at two places the model has, for its calibration. */
+const buildRuns = new WeakMap<World, Promise<string>>();
+function buildRun(w: World): Promise<string> {
+  let id = buildRuns.get(w);
+  if (!id) {
+    id = (async () => {
+      const readings = [5, 10, 20, 30].flatMap((min, i) => [{ tS: `${min} min`, tempC: 28 + 4 * i, place: "heatsink" }, { tS: `${min} min`, tempC: 24 + 2 * i, place: "housing wall" }]);
+      const r = await w.clients.owner.post("/api/v1/bench/runs", { title: "Matrix lamp warm-up", powered: { kind: "build", buildId: w.build }, conditions: { ambientC: 22, volts: "7.4 V", amps: "0.9 A" }, readings });
+      if (r.status !== 201) throw new Error(`build run: ${r.status} ${JSON.stringify(r.body)}`);
+      return (r.body.run as { id: string }).id;
+    })();
+    buildRuns.set(w, id);
+  }
+  return id;
+}
+
 export const MATRIX: Row[] = [
   // —— accounts
   { route: "POST /api/v1/auth/signup", path: () => "/api/v1/auth/signup", body: () => ({ email: unique("matrix-signup"), password: "long enough pw", displayName: "Matrix" }), ownSession: true, expect: same(202) },
@@ -62,6 +92,13 @@ export const MATRIX: Row[] = [
   { route: "POST /api/v1/solve/steady", path: () => "/api/v1/solve/steady", body: () => NETWORK, expect: same(200) },
   { route: "POST /api/v1/bench/fit", path: () => "/api/v1/bench/fit", body: () => ({ ambientC: 25, heatW: "7 W", readings: [{ tS: "20 min", tempC: 60 }], massKg: "100 g", material: "aluminium-6063-t5" }), expect: same(200) },
   { route: "POST /api/v1/solve/transient", path: () => "/api/v1/solve/transient", body: () => ({ network: NETWORK, durationS: 600, stepS: 10 }), expect: same(200) },
+
+  // —— bench runs (the owner's are private: nobody else, admins included, is told they exist)
+  { route: "GET /api/v1/bench/runs", path: () => "/api/v1/bench/runs", expect: [401, 200, 200, 200, 200, 200, 200] },
+  { route: "POST /api/v1/bench/runs", path: () => "/api/v1/bench/runs", body: () => BENCH_RUN, expect: [401, 201, 201, 201, 201, 201, 201] },
+  { route: "GET /api/v1/bench/runs/[id]", path: async (w) => `/api/v1/bench/runs/${await benchRun(w)}`, expect: [401, 200, 404, 404, 404, 404, 404] },
+  { route: "POST /api/v1/bench/runs/[id]/part", path: async (w) => `/api/v1/bench/runs/${await freshBenchRun(w)}/part`, body: () => ({ name: "Matrix sink" }), expect: [401, 201, 404, 404, 404, 404, 404] },
+  { route: "POST /api/v1/bench/runs/[id]/calibration", path: async (w) => `/api/v1/bench/runs/${await buildRun(w)}/calibration`, body: () => ({ save: false }), expect: [401, 200, 404, 404, 404, 404, 404] },
 
   // —— parts (the owner's are private)
   { route: "GET /api/v1/parts", path: () => "/api/v1/parts", expect: same(200) },

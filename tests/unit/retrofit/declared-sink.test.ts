@@ -75,3 +75,17 @@ describe("declared-sink build, worked by hand", () => {
     expect(ladder.steps[0]).toMatchObject({ from: "junction", to: "solder" });
   });
 });
+
+describe("a heatsink's own heat capacity", () => {
+  it("a capacity given on the part (as a bench fit keeps it) is the sink node's capacity, in place of mass × specific heat", () => {
+    const withCapacity: BuildDesignInput = { ...vented, lightEngine: { ...vented.lightEngine, heatsink: { ...DECLARED_SINK, inline: { ...DECLARED_SINK.inline, heatCapacityJPerK: 61 } } } };
+    const given = evaluateBuild(resolved(withCapacity), { skipWarmup: true }).scenarios.find((s) => s.id === "mode:low")!;
+    const sinkNode = (r: typeof given) => r.network!.nodes.find((n) => n.id === "sink")!;
+    expect(sinkNode(given).heatCapacityJPerK).toBe(61);
+    // Without it: 30 g of aluminium at about 900 J/(kg·K) (Incropera, Fundamentals of Heat and Mass Transfer, 6th ed., Table A.1: pure aluminium 903): about 27 J/K.
+    const plain = evaluateBuild(resolved(vented), { skipWarmup: true }).scenarios.find((s) => s.id === "mode:low")!;
+    const fromMass = sinkNode(plain).heatCapacityJPerK!;
+    expect(fromMass).toBeGreaterThan(0.03 * 850);
+    expect(fromMass).toBeLessThan(0.03 * 1000);
+  });
+});

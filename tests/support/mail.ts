@@ -18,17 +18,18 @@ export async function waitForMail(to: string, subjectIncludes: string, timeoutMs
   throw new Error(`no mail to ${to} about "${subjectIncludes}" within ${timeoutMs} ms`);
 }
 
-let signups = 0;
-
 /**
  * Signs up the way a person does: the sign-up answer (202, the same for every address), the
  * mailed link, then the link's button. Returns the last answer (201 with the user when the
- * account was made). Each sign-up comes from its own documentation address (RFC 5737) so a
- * test suite's many sign-ups do not share one client allowance.
+ * account was made), or the refusal of a bad sign-up. Each sign-up comes from its own random
+ * private address, so a suite's many sign-ups (in many test files) never share one client's
+ * hourly allowance.
  */
 export async function signUp(client: Client, body: { email: string; password: string; displayName: string }): Promise<Reply> {
-  const from = `198.51.100.${(signups++ % 250) + 1}`;
+  const octet = () => Math.floor(Math.random() * 254) + 1;
+  const from = `10.${octet()}.${octet()}.${octet()}`;
   const asked = await client.request("POST", "/api/v1/auth/signup", body, { "x-forwarded-for": from });
+  if (asked.status === 429) throw new Error(`sign-up refused by the rate limit: ${JSON.stringify(asked.body)}`);
   if (asked.status !== 202) return asked;
   const mail = await waitForMail(body.email, "Finish making your Sinkwise account");
   const token = /\/signup\/finish\/([A-Za-z0-9_-]+)/.exec(mail.text ?? "")?.[1];

@@ -5,9 +5,9 @@ import type { Warmup } from "./scenario";
 export const CHART_POINTS = 121;
 
 /**
- * The evaluation as the Budget's charts draw it: each warm-up keeps only the nodes that
- * have a limit (the ones the chart plots) and at most `maxPoints` samples, always the first
- * and the last. Everything else (figures, traces, crossings) is untouched, so a thinned
+ * The evaluation as the Budget's charts draw it: each warm-up keeps every node's curve (the
+ * warm-up chart plots the limited ones, a bench run's overlay any place it was measured at)
+ * at most `maxPoints` samples, always the first and the last. Everything else (figures, traces, crossings) is untouched, so a thinned
  * answer reads the same on screen; the full curves are one request away.
  */
 export function forCharts(evaluation: BuildEvaluation, maxPoints = CHART_POINTS): BuildEvaluation {
@@ -15,13 +15,12 @@ export function forCharts(evaluation: BuildEvaluation, maxPoints = CHART_POINTS)
     ...evaluation,
     scenarios: evaluation.scenarios.map((s) => {
       if (!s.warmup) return s;
-      const shown = new Set((s.thermal?.limits ?? []).filter((l) => l.kind === "max").map((l) => l.node));
-      return { ...s, warmup: thinWarmup(s.warmup, shown, maxPoints) };
+      return { ...s, warmup: thinWarmup(s.warmup, maxPoints) };
     }),
   };
 }
 
-function thinWarmup(w: Warmup, nodes: ReadonlySet<string>, maxPoints: number): Warmup {
+function thinWarmup(w: Warmup, maxPoints: number): Warmup {
   const n = w.timesS.length;
   const keep: number[] = [];
   if (n <= maxPoints) for (let i = 0; i < n; i++) keep.push(i);
@@ -31,6 +30,6 @@ function thinWarmup(w: Warmup, nodes: ReadonlySet<string>, maxPoints: number): W
   }
   const pick = (xs: readonly number[]) => keep.map((i) => xs[i]!);
   const temperaturesC: Record<string, number[]> = {};
-  for (const [node, xs] of Object.entries(w.temperaturesC)) if (nodes.has(node)) temperaturesC[node] = pick(xs);
+  for (const [node, xs] of Object.entries(w.temperaturesC)) temperaturesC[node] = pick(xs);
   return { ...w, timesS: pick(w.timesS), temperaturesC };
 }

@@ -2,13 +2,14 @@ import { describe, expect, it } from "vitest";
 import { evaluateBuild, forCharts } from "@/lib/retrofit";
 import { lanternDesign, resolved } from "./fixtures/builds";
 
-// The Budget's warm-up chart plots the nodes that carry a max limit; the answer sent for
-// charts keeps those curves, at most CHART_POINTS samples each, and nothing else changes.
+// The answer sent for charts keeps every node's curve (the warm-up chart plots the limited
+// ones, a bench run's overlay any measured place), at most CHART_POINTS samples each, and
+// nothing else changes.
 describe("warm-up curves cut to what the charts draw", () => {
   const full = evaluateBuild(resolved(lanternDesign), { warmupIntervals: 480 });
   const chart = forCharts(full, 121);
 
-  it("keeps every limited node's curve, first and last sample included, and drops the rest", () => {
+  it("keeps every node's curve, first and last sample included", () => {
     let thinned = 0;
     for (const [i, s] of full.scenarios.entries()) {
       const c = chart.scenarios[i]!;
@@ -16,8 +17,7 @@ describe("warm-up curves cut to what the charts draw", () => {
         expect(c.warmup).toBeNull();
         continue;
       }
-      const shown = new Set((s.thermal?.limits ?? []).filter((l) => l.kind === "max").map((l) => l.node));
-      expect(Object.keys(c.warmup!.temperaturesC).sort()).toEqual([...shown].filter((n) => n in s.warmup!.temperaturesC).sort());
+      expect(Object.keys(c.warmup!.temperaturesC).sort()).toEqual(Object.keys(s.warmup.temperaturesC).sort());
       expect(c.warmup!.timesS.length).toBeLessThanOrEqual(121);
       expect(c.warmup!.timesS[0]).toBe(s.warmup.timesS[0]);
       expect(c.warmup!.timesS.at(-1)).toBe(s.warmup.timesS.at(-1));

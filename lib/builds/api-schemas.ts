@@ -36,7 +36,7 @@ export const forkBuildSchema = z.strictObject({
 
 export const solveBuildSchema = z.strictObject({
   revision: z.number().int().positive().optional(),
-  /** "chart" (the default): warm-up curves as the Budget's charts draw them; "full": every node and sample. */
+  /** "chart" (the default): warm-up curves thinned in time to what a chart draws; "full": every sample. */
   curves: z.enum(["chart", "full"], { error: "curves is chart or full." }).default("chart"),
 });
 

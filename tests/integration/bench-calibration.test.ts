@@ -28,7 +28,7 @@ beforeAll(async () => {
   // then revision 3 puts the model back as it stands, for the calibration to find the 0.6 again.
   const synthetic = { parameter: "inside-air", factor: TRUE_FACTOR, low: null, high: null, run: { id: "synthetic", title: "synthetic lamp" }, readingCount: 1, rmsBeforeK: 0, rmsAfterK: 0 };
   expect((await maker.patch(`/api/v1/builds/${buildId}`, { design: { ...design, calibration: synthetic }, note: "the synthetic lamp" })).status).toBe(200);
-  const solved = await maker.post(`/api/v1/builds/${buildId}/solve`, {});
+  const solved = await maker.post(`/api/v1/builds/${buildId}/solve`, { curves: "full" });
   expect(solved.status).toBe(200);
   evaluation = (solved.body as unknown as { evaluation: BuildEvaluation }).evaluation;
   expect((await maker.patch(`/api/v1/builds/${buildId}`, { design, note: "the model as it stands" })).status).toBe(200);
@@ -81,7 +81,7 @@ describe("calibrating a build to its measured warm-up", () => {
     expect(revision.design.calibration).toMatchObject({ parameter: saved.calibration.parameter, run: { id: runId } });
     expect(revision.design.calibration!.factor).toBeCloseTo(saved.calibration.factor, 9);
     expect(revision.note).toMatch(/^Calibrated to the bench run “Finished lantern on the bench”: .+ × \d\.\d\d \(95 % \d\.\d\d–\d\.\d\d\), misfit \d+\.\d K → \d+\.\d K over \d+ readings\.$/);
-    const solved = await maker.post(`/api/v1/builds/${buildId}/solve`, {});
+    const solved = await maker.post(`/api/v1/builds/${buildId}/solve`, { curves: "full" });
     const after = (solved.body as unknown as { evaluation: BuildEvaluation; revision: number });
     expect(after.revision).toBe(4);
     const traces = after.evaluation.scenarios.flatMap((s) => s.thermal?.links ?? []).filter((l) => l.trace.element === "calibrated");

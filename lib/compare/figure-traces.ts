@@ -1,5 +1,5 @@
 import type { BuildEvaluation } from "@/lib/retrofit";
-import { driveTrace, limitTimeTrace, nodeBalanceTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
+import { driveTrace, limitTimeTrace, nodeBalanceTrace, partsCostTrace, savingTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
 import type { Trace } from "@/lib/thermal";
 import type { FigureRow } from "./figures";
 
@@ -20,6 +20,8 @@ export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildE
       if (what === "energy") return el.pack?.energyWh.trace ?? null;
       if (what === "charge-time") return el.charge?.totalHours.trace ?? null;
       if (what === "charger-heat") return el.charge?.lossW.trace ?? null;
+      if (what === "cost") return partsCostTrace(e.costs);
+      if (what === "saving") return savingTrace(e.costs);
       return null;
     }
     const s = e.scenarios.find((x) => x.id === scope);
@@ -54,4 +56,24 @@ export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildE
 /** Every row with its derivations beside its values. */
 export function withTraces<R extends FigureRow>(rows: readonly R[], evals: readonly BuildEvaluation[]): (R & { traces: (Trace | null)[] })[] {
   return rows.map((r) => ({ ...r, traces: figureTraces(r, evals) }));
+}
+
+/** A limit's temperature (its place's heat balance) and headroom derivations in one scenario of one evaluation. */
+export function limitTraces(e: BuildEvaluation, scenarioId: string, limitId: string): { temperature: Trace | null; headroom: Trace | null } {
+  const s = e.scenarios.find((x) => x.id === scenarioId);
+  const l = s?.thermal?.limits.find((x) => x.id === limitId);
+  if (!s?.thermal || !l) return { temperature: null, headroom: null };
+  return { temperature: nodeBalanceTrace(s.thermal, l.node, s.network?.ambientC ?? 25), headroom: l.trace };
+}
+
+/** The summary with the derivation of every figure in its table (each cell's deciding limit). */
+export function summaryWithTraces<S extends { scenarios: readonly { id: string; cells: readonly { deciding: { id: string } | null }[] }[] }>(summary: S, evals: readonly BuildEvaluation[]) {
+  return {
+    ...summary,
+    scenarios: summary.scenarios.map((s) => ({
+      ...s,
+      cells: s.cells.map((c, i) => ({ ...c, traces: c.deciding && evals[i] ? limitTraces(evals[i], s.id, c.deciding.id) : null })),
+    })),
+    costTraces: evals.map((e) => partsCostTrace(e.costs)),
+  };
 }

@@ -2,10 +2,10 @@ import "server-only";
 import { getReview, listComments } from "@/db/queries/reviews";
 import { findReviewShareByHash } from "@/db/queries/review-shares";
 import { ApiError } from "@/lib/http/api-error";
-import { anchorLabel, heatPathAnchors } from "@/lib/reviews/anchors";
+import { anchorLabel, diagramPins, heatPathAnchors } from "@/lib/reviews/anchors";
 import { REVIEW_STATUS_LABELS } from "@/lib/reviews/api-schemas";
 import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
-import { sharedReviewResults, type SharedReviewResults } from "@/lib/reviews/shared-review";
+import { sharedHeatPaths, sharedReviewResults, type SharedHeatPath, type SharedReviewResults } from "@/lib/reviews/shared-review";
 import { loadDesignParts } from "@/server/builds/load";
 import { reviewedRevision } from "./anchors";
 import { reviewView } from "./load";
@@ -15,6 +15,8 @@ export interface SharedReview {
   review: { buildTitle: string; variantNote: string | null; revisionNumber: number; status: string; statusLabel: string; summary: string; reviewerName: string; ownerName: string; createdAt: Date; decidedAt: Date | null };
   comments: { authorName: string; target: string; body: string; createdAt: Date }[];
   results: SharedReviewResults | null;
+  /** Each scenario's heat path, figures withheld where they would show an unpublished part, with the comments pinned on it. */
+  heatPaths: (SharedHeatPath & { pins: Record<string, number> })[];
   expiresAt: Date | null;
 }
 
@@ -47,11 +49,14 @@ export async function openReviewShare({ token }: { token: string }): Promise<Sha
   const solved = reviewed?.solved ?? null;
   const anchors = solved ? heatPathAnchors(solved.evaluation) : { nodes: [], links: [], figures: [] };
   let results: SharedReviewResults | null = null;
+  let heatPaths: SharedReview["heatPaths"] = [];
   if (reviewed && solved) {
     const publicParts = await loadDesignParts({ design: reviewed.design, viewer: null });
+    const isPublic = (id: string) => publicParts.get(id)?.visibility === "public";
+    heatPaths = sharedHeatPaths(solved.evaluation, reviewed.design, isPublic).map((h) => ({ ...h, pins: diagramPins(comments, h.scenarioId) }));
     const open = new Set<Slot>((Object.keys(SLOT_PATHS) as Slot[]).filter((slot) => {
       const id = partIdAt(reviewed.design, SLOT_PATHS[slot]);
-      return id !== null && publicParts.get(id)?.visibility === "public";
+      return id !== null && isPublic(id);
     }));
     results = sharedReviewResults(solved.evaluation, open);
   }
@@ -70,6 +75,7 @@ export async function openReviewShare({ token }: { token: string }): Promise<Sha
     },
     comments: comments.map((c) => ({ authorName: c.authorName, target: anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), body: c.body, createdAt: c.createdAt })),
     results,
+    heatPaths,
     expiresAt: link.expiresAt,
   };
 }

@@ -66,6 +66,14 @@ export function CompareSummary({ data }: { data: CompareAnswer }) {
                 <td key={i} className="py-1 pr-3"><Traceable label={compareFormat.euros(c)} trace={summary.costTraces[i]} /></td>
               ))}
             </tr>
+            {summary.massesKg.some((m) => m !== null) && (
+              <tr className="border-t border-line">
+                <th className="py-1 pr-3 font-medium">mass</th>
+                {summary.massesKg.map((m, i) => (
+                  <td key={i} className="py-1 pr-3"><Traceable label={compareFormat.mass(m)} trace={summary.massTraces[i]} /></td>
+                ))}
+              </tr>
+            )}
           </tbody>
         </table>
       </div>

@@ -21,6 +21,7 @@ export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildE
       if (what === "charge-time") return el.charge?.totalHours.trace ?? null;
       if (what === "charger-heat") return el.charge?.lossW.trace ?? null;
       if (what === "cost") return partsCostTrace(e.costs);
+      if (what === "mass") return (e.mass as BuildEvaluation["mass"] | undefined)?.trace ?? null;
       if (what === "saving") return savingTrace(e.costs);
       return null;
     }
@@ -53,9 +54,22 @@ export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildE
   });
 }
 
-/** Every row with its derivations beside its values. */
-export function withTraces<R extends FigureRow>(rows: readonly R[], evals: readonly BuildEvaluation[]): (R & { traces: (Trace | null)[] })[] {
-  return rows.map((r) => ({ ...r, traces: figureTraces(r, evals) }));
+/** The derivation of the limit shown beside a temperature row, per column (the place's upper limit). */
+function limitBeside(row: Pick<FigureRow, "key" | "limits">, evals: readonly BuildEvaluation[]): (Trace | null)[] | undefined {
+  if (!row.limits) return undefined;
+  const m = /^(.*)\/temperature:(.*)$/.exec(row.key);
+  return evals.map((e) => {
+    const t = m ? e.scenarios.find((x) => x.id === m[1])?.thermal : undefined;
+    return t?.limits.find((l) => l.kind === "max" && t.nodes.find((n) => n.id === l.node)?.place === m![2])?.limitTrace ?? null;
+  });
+}
+
+/** Every row with its derivations beside its values (and beside its limits, where it shows them). */
+export function withTraces<R extends FigureRow>(rows: readonly R[], evals: readonly BuildEvaluation[]): (R & { traces: (Trace | null)[]; limitTraces?: (Trace | null)[] })[] {
+  return rows.map((r) => {
+    const limitTraces = limitBeside(r, evals);
+    return { ...r, traces: figureTraces(r, evals), ...(limitTraces ? { limitTraces } : {}) };
+  });
 }
 
 /** A limit's temperature (its place's heat balance) and headroom derivations in one scenario of one evaluation. */
@@ -75,5 +89,6 @@ export function summaryWithTraces<S extends { scenarios: readonly { id: string; 
       cells: s.cells.map((c, i) => ({ ...c, traces: c.deciding && evals[i] ? limitTraces(evals[i], s.id, c.deciding.id) : null })),
     })),
     costTraces: evals.map((e) => partsCostTrace(e.costs)),
+    massTraces: evals.map((e) => (e.mass as BuildEvaluation["mass"] | undefined)?.trace ?? null),
   };
 }

@@ -12,7 +12,7 @@ import { loadDesignParts, type LoadedBuild } from "./load";
  * Bump when the engine or the compiler changes what a result contains or how it is worked
  * out: cached results of another version are recomputed.
  */
-export const SOLVER_VERSION = `e${EVALUATION_VERSION}.7`;
+export const SOLVER_VERSION = `e${EVALUATION_VERSION}.8`;
 
 /** Warm-up curves as the charts draw them, or every node and sample. */
 export type Curves = "chart" | "full";

@@ -1,7 +1,9 @@
 import "server-only";
 import { getReview, listComments } from "@/db/queries/reviews";
 import { findReviewShareByHash } from "@/db/queries/review-shares";
+import { getUserById } from "@/db/queries/users";
 import { ApiError } from "@/lib/http/api-error";
+import { type UnpublishedPart, withholdUnpublished } from "@/lib/reviews/publish";
 import { anchorLabel, diagramPins, heatPathAnchors } from "@/lib/reviews/anchors";
 import { REVIEW_STATUS_LABELS } from "@/lib/reviews/api-schemas";
 import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
@@ -50,10 +52,15 @@ export async function openReviewShare({ token }: { token: string }): Promise<Sha
   const anchors = solved ? heatPathAnchors(solved.evaluation) : { nodes: [], links: [], figures: [] };
   let results: SharedReviewResults | null = null;
   let heatPaths: SharedReview["heatPaths"] = [];
+  let unpublished: UnpublishedPart[] = [];
   if (reviewed && solved) {
     const publicParts = await loadDesignParts({ design: reviewed.design, viewer: null });
     const isPublic = (id: string) => publicParts.get(id)?.visibility === "public";
-    heatPaths = sharedHeatPaths(solved.evaluation, reviewed.design, isPublic).map((h) => ({ ...h, pins: diagramPins(comments, h.scenarioId) }));
+    // A link's name may quote its part ("strap <name>: …"): an unpublished part is not named through the link.
+    const owner = await getUserById({ id: review.buildOwnerId });
+    const ownerParts = owner ? await loadDesignParts({ design: reviewed.design, viewer: { id: owner.id, role: owner.role } }) : new Map<string, { id: string; name: string }>();
+    unpublished = [...ownerParts.values()].filter((p) => !isPublic(p.id)).map((p) => ({ id: p.id, name: p.name }));
+    heatPaths = withholdUnpublished(sharedHeatPaths(solved.evaluation, reviewed.design, isPublic), unpublished).map((h) => ({ ...h, pins: diagramPins(comments, h.scenarioId) }));
     const open = new Set<Slot>((Object.keys(SLOT_PATHS) as Slot[]).filter((slot) => {
       const id = partIdAt(reviewed.design, SLOT_PATHS[slot]);
       return id !== null && isPublic(id);
@@ -73,7 +80,7 @@ export async function openReviewShare({ token }: { token: string }): Promise<Sha
       createdAt: review.createdAt,
       decidedAt: review.decidedAt,
     },
-    comments: comments.map((c) => ({ authorName: c.authorName, target: anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), body: c.body, createdAt: c.createdAt })),
+    comments: comments.map((c) => ({ authorName: c.authorName, target: withholdUnpublished(anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), unpublished), body: c.body, createdAt: c.createdAt })),
     results,
     heatPaths,
     expiresAt: link.expiresAt,

@@ -2,6 +2,8 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { AMBIENT_ID, breakdownRise, solveSteady, traceLink, type Network } from "@/lib/thermal";
 import { ladderTotalTrace, nodeBalanceTrace, partsCostTrace, savingTrace } from "@/lib/retrofit/derivations";
+import { massSummary } from "@/lib/retrofit/mass";
+import type { ResolvedBuild } from "@/lib/retrofit/resolved";
 import { mixedNetwork } from "../thermal/helpers";
 
 /** A solved network in the shape the Budget gets it (nodes with places, links with their trace). */
@@ -108,5 +110,31 @@ describe("parts cost and saving expand to their sums", () => {
     const s = savingTrace(costs)!;
     expect(s.result.value).toBe(s.inputs[0]!.value - s.inputs[1]!.value);
     expect(savingTrace({ ...costs, comparableNewLightEur: null, savingEur: null })).toBeNull();
+  });
+});
+
+describe("the build's mass", () => {
+  const build = (strap: boolean, cellKg: number | undefined) =>
+    ({
+      housing: { name: "Square lantern body", specs: { massKg: 0.3 } },
+      lightEngine: { heatsink: { name: "Salvaged sink", specs: { massKg: 0.05 } } },
+      driver: { part: { name: "Buck driver", specs: {} }, massKg: 0.006, cooling: strap ? { kind: "strapped", spreader: { name: "Copper tape", specs: { material: "copper-pure", thicknessM: 0.00005, widthM: 0.01, lengthM: 0.06 } } } : { kind: "floating" } },
+      pack: { series: 1, parallel: 2, cell: { name: "18650", specs: cellKg === undefined ? {} : { massKg: cellKg } } },
+    }) as unknown as ResolvedBuild;
+
+  it("adds the parts that give a mass and a strap from its material's density", () => {
+    const m = massSummary(build(true, 0.046));
+    // Hand check: 300 + 50 + 2 × 46 + 6 g, and copper 8933 kg/m³ (Incropera Table A.1) × 0.05 mm × 10 mm × 60 mm = 0.268 g.
+    expect(m.totalKg).toBeCloseTo(0.448 + 8933 * 0.00005 * 0.01 * 0.06, 12);
+    expect(m.trace.inputs.reduce((a, x) => a + x.value, 0)).toBeCloseTo(m.trace.result.value, 12);
+    expect(m.unknown).toEqual([]);
+    expect(massSummary(build(false, 0.046)).totalKg).toBeCloseTo(0.448, 12);
+  });
+
+  it("names what gives no mass and leaves it out", () => {
+    const m = massSummary(build(false, undefined));
+    expect(m.unknown).toEqual(["2 × 18650"]);
+    expect(m.totalKg).toBeCloseTo(0.356, 12);
+    expect(m.trace.notes.join(" ")).toContain("No mass given, left out: 2 × 18650.");
   });
 });

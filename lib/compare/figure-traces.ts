@@ -2,6 +2,7 @@ import type { BuildEvaluation } from "@/lib/retrofit";
 import { driveTrace, limitTimeTrace, nodeBalanceTrace, partsCostTrace, savingTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
 import type { Trace } from "@/lib/thermal";
 import type { FigureRow } from "./figures";
+import type { ComparisonSummary } from "./summary";
 
 /**
  * The derivation behind each figure of Side by side, per column: a place's temperature
@@ -81,7 +82,7 @@ export function limitTraces(e: BuildEvaluation, scenarioId: string, limitId: str
 }
 
 /** The summary with the derivation of every figure in its table (each cell's deciding limit). */
-export function summaryWithTraces<S extends { scenarios: readonly { id: string; cells: readonly { deciding: { id: string } | null }[] }[] }>(summary: S, evals: readonly BuildEvaluation[]) {
+export function summaryWithTraces(summary: ComparisonSummary, evals: readonly BuildEvaluation[]) {
   return {
     ...summary,
     scenarios: summary.scenarios.map((s) => ({

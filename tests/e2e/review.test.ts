@@ -165,11 +165,11 @@ describe("Side by side and the Review desk in chromium", () => {
     const chart = page.getByTestId("warmup-chart").first();
     const box = (await chart.locator("canvas").boundingBox())!;
     await chart.locator("canvas").click({ position: { x: box.width * 0.6, y: box.height * 0.35 } });
-    await expect.poll(() => page.getByTestId("pin-target").textContent()).toMatch(/Pinned to: warm-up of the [a-z ]+ at \d+ (s|min|h)( \d+ min)?, (\w+ mode|charging)$/);
+    await expect.poll(() => page.getByTestId("pin-target").textContent()).toMatch(/Pinned to: warm-up of the [A-Za-z ]+ at \d+ (s|min|h)( \d+ min)?, (\w+ mode|charging)$/);
     await page.getByLabel("Comment", { exact: true }).fill("Look at how fast it climbs here.");
     await page.getByRole("button", { name: "Pin the comment" }).click();
     await page.getByTestId("review-comment").filter({ hasText: "how fast it climbs" }).waitFor();
-    await expect.poll(() => page.getByTestId("chart-pins").textContent()).toMatch(/1 comment on the [a-z ]+ at \d+/);
+    await expect.poll(() => page.getByTestId("chart-pins").textContent()).toMatch(/1 comment on the [A-Za-z ]+ at \d+/);
     await shot(page, "review-pinned-on-warmup-chart");
     const verdict = page.getByRole("form", { name: "Verdict" });
     await verdict.getByLabel("changes requested").check();

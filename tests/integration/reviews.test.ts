@@ -193,6 +193,7 @@ describe("reviews: pinned comments and the verdict", () => {
   });
 
   it("takes a comment pinned on a point of a warm-up curve, named in words, and refuses a point the curve does not have", async () => {
+    const id = await requestReview(await privateBuild("Lantern with a warm-up to pin"));
     const before = ((await owner.get(`/api/v1/reviews/${id}`)).body.comments as Comment[]).length;
     const onCurve = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "figure", key: "mode:high/warmup/driver-board/at/2" }, body: "Already close after two minutes." });
     expect(onCurve.status, JSON.stringify(onCurve.body)).toBe(201);

@@ -20,6 +20,8 @@ const JUDGED = { better: "bg-ok/10 text-ok", worse: "bg-over/10 text-over", same
 function show(row: FigureRow, v: number | string | null): string {
   if (row.kind === "verdict") return typeof v === "string" ? v : compareFormat.DASH;
   if (row.kind === "time" && v === null) return "not reached";
+  // A headroom reads as on the Budget: a negative one never rounds to "0 K".
+  if (row.unit === "K" && row.key.includes("/headroom:") && typeof v === "number") return compareFormat.kelvin(v);
   return typeof v === "number" ? compareFormat.inUnit(v, row.unit) : compareFormat.DASH;
 }
 

@@ -12,6 +12,7 @@ import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
 import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-schema";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
+import { CalibrationSection } from "./calibration-section";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
 import { editorFieldFor, placeProblems, ProblemsSummary } from "./editor-problems";
 import { LiveCheck } from "./live-check";
@@ -70,6 +71,7 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   // What the last saved revision holds, as edited here (the server stores it in SI units).
   const [savedJson, setSavedJson] = useState(() => JSON.stringify(initial));
   const dirty = JSON.stringify(design) !== savedJson;
+  const savedCalibration = useMemo(() => getPath(JSON.parse(savedJson) as JsonObject, "calibration"), [savedJson]);
   const solved = useSolve(buildId, revision);
   const preview = useDesignPreview(buildId, design, dirty && canEdit);
   const live = dirty && canEdit;
@@ -219,6 +221,7 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         />
         <IntInput min={0} max={100000} {...f("costs.comparableNewLightEur")} />
       </Section>
+      <CalibrationSection saved={savedCalibration} current={getPath(design, "calibration")} canEdit={canEdit} onChange={(v) => change("calibration", v)} />
     </>
   );
   placeIssues();

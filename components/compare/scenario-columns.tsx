@@ -1,9 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import { Bar } from "react-chartjs-2";
-import "@/components/budget/chart-setup";
-import { SERIES_COLOURS } from "@/components/budget/chart-setup";
+import { Bar } from "@/components/budget/bar-chart";
+import { SERIES_COLOURS } from "@/components/budget/chart-colours";
 import { HeatPathDiagram } from "@/components/budget/heat-path-diagram";
 import { compareFormat } from "@/lib/compare";
 import type { CompareAnswer } from "./use-compare";

@@ -63,6 +63,8 @@ async function waitFor(url: string, alive: () => boolean, tries = 300): Promise<
 
 /** Migrates and seeds the bench database (idempotent). */
 export function prepareBenchDb(): void {
+  // On a fresh machine the secrets file does not exist yet: write it before reading it.
+  execFileSync("bash", ["scripts/env.sh"], { stdio: "ignore" });
   loadEnvFile();
   const env = { ...process.env, DATABASE_NAME: BENCH_DB, NEXT_TELEMETRY_DISABLED: "1" };
   execFileSync("bash", ["scripts/db.sh", "start"], { stdio: "ignore" });

@@ -36,7 +36,7 @@ cat <<MSG
   Sinkwise is running at $APP_URL
 
   Demo accounts (password: $DEMO_PASSWORD)
-    maker@sinkwise.test       maker: builds retrofits, checks budgets, asks for reviews
+    maker@sinkwise.test       maker: builds retrofits, checks budgets, asks for reviews, logs bench runs
     reviewer@sinkwise.test    reviewer: reviews shared builds, records verdicts
     instructor@sinkwise.test  instructor: runs the class, publishes worked examples
     admin@sinkwise.test       admin: users, roles and the verified catalogue

@@ -3,6 +3,7 @@ import { listBuilds, type BuildSummary } from "@/db/queries/builds";
 import { BuildRowActions } from "@/components/builds/build-row-actions";
 import { BuildsNotice } from "@/components/builds/builds-notice";
 import { NewBuildButton } from "@/components/builds/new-build-button";
+import { STARTING_POINT_INFO, STARTING_POINTS, startingDesign } from "@/lib/starter";
 import { requirePageUser } from "@/server/auth/session";
 
 export const metadata = { title: "Builds" };
@@ -52,7 +53,7 @@ export default async function BuildsPage({ searchParams }: { searchParams: Promi
       <div className="flex items-start gap-4">
         <h1 className="text-2xl font-semibold">Builds</h1>
         <div className="ml-auto">
-          <NewBuildButton />
+          <NewBuildButton points={STARTING_POINTS.map((key) => ({ key, ...STARTING_POINT_INFO[key], design: startingDesign(key) }))} />
         </div>
       </div>
       <form role="search" className="flex items-center gap-2" action="/builds">

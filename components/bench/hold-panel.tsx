@@ -3,7 +3,8 @@
 import Link from "next/link";
 import type { BuildHold } from "@/server/bench/hold";
 import { CalibratePanel } from "./calibrate-panel";
-import { FitChart, type ChartSeries } from "./fit-chart";
+import type { ChartSeries } from "./fit-chart";
+import { FitChart } from "./fit-chart-lazy";
 
 /** A difference with its sign, never "−0.0". */
 function signedK(x: number): string {

@@ -2,7 +2,8 @@ import Link from "next/link";
 import type { BenchRunRow } from "@/db/queries/bench";
 import type { FitResult } from "@/lib/bench/fit";
 import type { SaveRunInput } from "@/lib/bench/run-schema";
-import { FitChart, type ChartSeries } from "./fit-chart";
+import type { ChartSeries } from "./fit-chart";
+import { FitChart } from "./fit-chart-lazy";
 
 const p3 = (x: number) => x.toPrecision(3);
 

@@ -4,9 +4,10 @@ import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { ApiClientError } from "@/components/ui/fetch-json";
 import { FINISHES, materialOptions } from "@/lib/parts";
-import { FitChart } from "./fit-chart";
+import { FitChart } from "./fit-chart-lazy";
 import { FitSummary } from "./fit-summary";
-import { ReadingsImport, type ImportedReading } from "./readings-import";
+import type { ImportedReading } from "./readings-import";
+import { ReadingsImport } from "./readings-import-lazy";
 import { useFit, useSaveRun } from "./use-bench";
 
 const MATERIALS = materialOptions();

@@ -4,7 +4,8 @@ import Link from "next/link";
 import { type FormEvent } from "react";
 import { ApiClientError } from "@/components/ui/fetch-json";
 import type { RunJson } from "@/server/bench/json";
-import { FitChart, type ChartSeries } from "./fit-chart";
+import type { ChartSeries } from "./fit-chart";
+import { FitChart } from "./fit-chart-lazy";
 import { FitSummary } from "./fit-summary";
 import { useKeepPart } from "./use-bench";
 

@@ -1,14 +1,21 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import type { ReactNode } from "react";
 import type { PartKind } from "@/lib/parts";
 import type { Problem } from "@/lib/retrofit";
 import { formatQuantity, METRIC_PREFERENCES, type Quantity } from "@/lib/units";
 import { STARTER_PARTS, starterSlot } from "@/lib/starter";
 import { FieldProblems } from "./editor-problems";
-import { InlinePart, type SlotIssue } from "./inline-part";
+import type { SlotIssue } from "./inline-part";
 import { getPath, type Json, type JsonObject } from "./design-state";
 import { usePartOptions } from "./use-part-options";
+
+/** A typed-in part's fields, loaded when a slot holds one (kept out of the editor's first load). */
+const InlinePart = dynamic(() => import("./inline-part").then((m) => m.InlinePart), {
+  ssr: false,
+  loading: () => <div className="h-24 animate-pulse rounded bg-line/30" aria-busy="true" aria-label="Loading the part's fields" />,
+});
 
 export type FieldProps = {
   design: JsonObject;

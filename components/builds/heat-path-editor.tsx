@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
@@ -10,13 +11,19 @@ import { useMe } from "@/components/shell/use-me";
 import { formatHeadroom } from "@/lib/units/figures";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
-import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-schema";
+import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-labels";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
+import { CalibrationSection } from "./calibration-section";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
 import { editorFieldFor, placeProblems, ProblemsSummary } from "./editor-problems";
-import { LiveCheck } from "./live-check";
 import { useDesignPreview } from "./use-design-preview";
 import { DESIGN_LABELS, type DesignField } from "@/lib/retrofit/design-labels";
+
+/** The live check draws what the preview answers, so it loads beside that first answer, not before the page. */
+const LiveCheck = dynamic(() => import("./live-check").then((m) => m.LiveCheck), {
+  ssr: false,
+  loading: () => <div className="h-40 animate-pulse rounded bg-line/30" aria-busy="true" aria-label="Loading the live check" />,
+});
 
 const MATERIAL_CHOICES = materialOptions().map((m) => [m.value, m.label] as const);
 
@@ -70,6 +77,7 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   // What the last saved revision holds, as edited here (the server stores it in SI units).
   const [savedJson, setSavedJson] = useState(() => JSON.stringify(initial));
   const dirty = JSON.stringify(design) !== savedJson;
+  const savedCalibration = useMemo(() => getPath(JSON.parse(savedJson) as JsonObject, "calibration"), [savedJson]);
   const solved = useSolve(buildId, revision);
   const preview = useDesignPreview(buildId, design, dirty && canEdit);
   const live = dirty && canEdit;
@@ -219,6 +227,7 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         />
         <IntInput min={0} max={100000} {...f("costs.comparableNewLightEur")} />
       </Section>
+      <CalibrationSection saved={savedCalibration} current={getPath(design, "calibration")} canEdit={canEdit} onChange={(v) => change("calibration", v)} />
     </>
   );
   placeIssues();

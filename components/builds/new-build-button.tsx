@@ -3,16 +3,21 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
-import { STARTING_POINT_INFO, STARTING_POINTS, startingDesign, type StartingPoint } from "@/lib/starter";
+import type { StartingPoint } from "@/lib/starter";
+
+/** A starting point as the page hands it over: its words and its design, made on the server
+ *  (the starter bin and its schemas stay out of the browser). */
+export type StartingChoice = { key: StartingPoint; label: string; title: string; description: string; design: Record<string, unknown> };
 
 /**
  * Starts a build from a starting point (a kind of light with every slot filled from the
  * starter bin, values marked as estimates) or empty, and opens its Heat path editor.
  */
-export function NewBuildButton() {
+export function NewBuildButton({ points }: { points: readonly StartingChoice[] }) {
   const router = useRouter();
   const [title, setTitle] = useState("");
-  const [point, setPoint] = useState<StartingPoint | "empty">("torch");
+  const [point, setPoint] = useState<StartingPoint | "empty">(points[0]?.key ?? "empty");
+  const chosen = points.find((p) => p.key === point);
   const [error, setError] = useState<string | null>(null);
   const [open, setOpen] = useState(false);
   const [busy, setBusy] = useState(false);
@@ -21,9 +26,9 @@ export function NewBuildButton() {
     setError(null);
     setBusy(true);
     try {
-      const design = point === "empty" ? { lightEngine: {} } : startingDesign(point);
-      const name = title.trim() || (point === "empty" ? "" : STARTING_POINT_INFO[point].title);
-      const note = point === "empty" ? "First revision" : `Started as a ${STARTING_POINT_INFO[point].label.toLowerCase()} from the starter bin`;
+      const design = chosen ? chosen.design : { lightEngine: {} };
+      const name = title.trim() || (chosen ? chosen.title : "");
+      const note = chosen ? `Started as a ${chosen.label.toLowerCase()} from the starter bin` : "First revision";
       const r = await fetchJson<{ build: { id: string } }>("/api/v1/builds", { method: "POST", body: { title: name, design, note } });
       router.push(`/builds/${r.build.id}`);
     } catch (e) {
@@ -44,11 +49,11 @@ export function NewBuildButton() {
       <fieldset>
         <legend className="mb-2 text-sm font-medium">Start from</legend>
         <div className="grid gap-2 sm:grid-cols-2">
-          {STARTING_POINTS.map((p) => (
-            <label key={p} className={`block cursor-pointer rounded border p-2 text-sm ${point === p ? "border-ember bg-ember-soft/40" : "border-line"}`}>
-              <input type="radio" name="starting-point" value={p} checked={point === p} onChange={() => setPoint(p)} className="mr-1.5" />
-              <span className="font-medium">{STARTING_POINT_INFO[p].label}</span>
-              <span className="mt-0.5 block text-xs text-ink-soft">{STARTING_POINT_INFO[p].description}</span>
+          {points.map((p) => (
+            <label key={p.key} className={`block cursor-pointer rounded border p-2 text-sm ${point === p.key ? "border-ember bg-ember-soft/40" : "border-line"}`}>
+              <input type="radio" name="starting-point" value={p.key} checked={point === p.key} onChange={() => setPoint(p.key)} className="mr-1.5" />
+              <span className="font-medium">{p.label}</span>
+              <span className="mt-0.5 block text-xs text-ink-soft">{p.description}</span>
             </label>
           ))}
           <label className={`block cursor-pointer rounded border p-2 text-sm ${point === "empty" ? "border-ember bg-ember-soft/40" : "border-line"}`}>
@@ -64,7 +69,7 @@ export function NewBuildButton() {
         <input
           value={title}
           onChange={(e) => setTitle(e.target.value)}
-          placeholder={point === "empty" ? "e.g. Square lantern, 2 cells" : STARTING_POINT_INFO[point].title}
+          placeholder={chosen ? chosen.title : "e.g. Square lantern, 2 cells"}
           aria-label="Title of the new build"
           className="w-full rounded border border-line bg-white px-3 py-2"
         />

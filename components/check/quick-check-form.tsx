@@ -9,7 +9,7 @@ import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { FINISHES, materialOptions } from "@/lib/parts";
 import { labelFor, labelsForSubject } from "@/lib/messages";
 import type { QuickCheckResult } from "@/lib/retrofit";
-import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-schema";
+import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-labels";
 import { QUICK_CHECK_LABELS } from "@/lib/retrofit/quick-check-labels";
 
 const checkLabel = (field: string) => labelFor(field.split(/\.|\[|\]/).filter(Boolean), labelsForSubject("check"));

@@ -58,7 +58,7 @@ export function NewExampleForm({ classId, builds }: { classId: string; builds: B
 
 /** Sets an exercise: instructions, a starter build, a due date. */
 export function NewExerciseForm({ classId, builds }: { classId: string; builds: BuildChoice[] }) {
-  const create = useClassAction(`/api/v1/classes/${classId}/exercises`);
+  const create = useClassAction<{ warning: string | null }>(`/api/v1/classes/${classId}/exercises`);
   const [title, setTitle] = useState("");
   const [buildId, setBuildId] = useState("");
   const [instructions, setInstructions] = useState("");
@@ -83,6 +83,7 @@ export function NewExerciseForm({ classId, builds }: { classId: string; builds: 
       <Problem error={create.error} path="dueAt" />
       <button type="submit" disabled={create.isPending} className="rounded bg-ember px-3 py-1 text-white disabled:opacity-40">Set the exercise</button>
       {create.isSuccess && <p role="status" className="text-ok">Exercise set.</p>}
+      {create.data?.warning && <p role="note" className="rounded border border-tight/40 bg-tight/10 p-2 text-xs">{create.data.warning}</p>}
       {create.isError && !["title", "buildId", "dueAt"].includes((create.error as { path?: string }).path ?? "") && <p role="alert" className="text-over">{errorMessage(create.error)}</p>}
     </form>
   );

@@ -5,11 +5,12 @@ import { useRouter } from "next/navigation";
 import { errorMessage, useClassAction } from "./use-class-action";
 
 /** A student's side of an exercise: start (own copy), open it, hand in its current revision. */
-export function StudentExercise({ exerciseId, myCopy, currentRevision, dueAt, archived }: { exerciseId: string; myCopy: string | null; currentRevision: number | null; dueAt: string; archived: boolean }) {
+export function StudentExercise({ exerciseId, myCopy, currentRevision, dueAt, archived, startBlocked }: { exerciseId: string; myCopy: string | null; currentRevision: number | null; dueAt: string; archived: boolean; startBlocked: string | null }) {
   const router = useRouter();
   const start = useClassAction<{ build: { id: string } }>(`/api/v1/exercises/${exerciseId}/start`, "POST", { refresh: false });
   const handin = useClassAction(`/api/v1/exercises/${exerciseId}/handins`);
   const overdue = new Date(dueAt).getTime() < Date.now();
+  if (!myCopy && startBlocked) return <p role="note" data-testid="start-blocked" className="no-print rounded border border-ember/30 bg-ember-soft/40 p-2 text-sm">{startBlocked}</p>;
   if (!myCopy) {
     return (
       <div className="no-print space-y-1 text-sm">

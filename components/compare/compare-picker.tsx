@@ -2,7 +2,8 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { itemsParam, MAX_COMPARE, MIN_COMPARE, type CompareItem } from "@/lib/reviews/api-schemas";
+import type { CompareItem } from "@/lib/reviews/api-schemas";
+import { itemsParam, MAX_COMPARE, MIN_COMPARE } from "@/lib/reviews/words";
 
 export interface Candidate {
   id: string;

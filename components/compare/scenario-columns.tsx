@@ -1,15 +1,14 @@
 "use client";
 
 import { type FormEvent, useState } from "react";
-import { Bar } from "react-chartjs-2";
-import "@/components/budget/chart-setup";
-import { SERIES_COLOURS } from "@/components/budget/chart-setup";
+import { Bar } from "@/components/budget/bar-chart";
+import { SERIES_COLOURS } from "@/components/budget/chart-colours";
 import { type DiagramTarget, HeatPathDiagram } from "@/components/budget/heat-path-diagram";
+import { Traceable } from "@/components/budget/trace-view";
 import { PinIcon } from "@/components/reviews/pin-icon";
 import { useComment, useReviewComments } from "@/components/reviews/use-reviews";
 import { ApiClientError } from "@/components/ui/fetch-json";
 import { diagramPins, inScenario } from "@/lib/reviews/anchors";
-import { Traceable } from "@/components/budget/trace-view";
 import { compareFormat } from "@/lib/compare";
 import type { CompareAnswer } from "./use-compare";
 

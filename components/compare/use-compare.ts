@@ -4,7 +4,7 @@ import { useMutation, useQuery } from "@tanstack/react-query";
 import { fetchJson } from "@/components/ui/fetch-json";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import type { Trace } from "@/lib/thermal";
-import { itemsParam } from "@/lib/reviews/api-schemas";
+import { itemsParam } from "@/lib/reviews/words";
 import type { Comparison } from "@/server/compare/load";
 
 /** The compare route's answer, typed by the function that builds it (it carries no dates). */

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { BuildViewer } from "@/lib/builds/access";
 import type { LoadedBuild } from "@/server/builds/load";
+import { linkWarning } from "@/server/classes/withheld";
 import { loadBuildReviews } from "@/server/reviews/load";
 import { age, OlderRevisionBadge, StatusBadge } from "./review-badges";
 import { RequestReviewForm } from "./request-review-form";
@@ -12,7 +13,7 @@ import { SharePanel } from "./share-panel";
  * loader gave (`loadBuildPage`) and the viewer; it applies no access rule of its own.
  */
 export async function BuildReviews({ build, viewer }: { build: LoadedBuild; viewer: NonNullable<BuildViewer> }) {
-  const reviews = await loadBuildReviews({ build, viewer });
+  const [reviews, warning] = await Promise.all([loadBuildReviews({ build, viewer }), build.access.isOwner ? linkWarning({ buildId: build.id }) : null]);
   return (
     <section aria-label="Reviews" className="no-print space-y-4 rounded-lg border border-line bg-white/60 p-3 text-sm" data-testid="build-reviews">
       <h2 className="font-medium">Reviews</h2>
@@ -40,7 +41,7 @@ export async function BuildReviews({ build, viewer }: { build: LoadedBuild; view
       {build.access.isOwner && (
         <>
           <RequestReviewForm buildId={build.id} currentRevision={build.currentRevision} />
-          <SharePanel scope={{ kind: "build", buildId: build.id }} currentRevision={build.currentRevision} />
+          <SharePanel scope={{ kind: "build", buildId: build.id }} currentRevision={build.currentRevision} warning={warning} />
         </>
       )}
     </section>

@@ -7,9 +7,9 @@ import { type ShareScope, useCreateShare, useRevokeShare, useShares } from "./us
 /**
  * Read-only links: to a revision's Budget (a build's scope, with a revision to choose) or to
  * a review (the reviewed revision with its verdict and comments). Create with an optional
- * expiry, copy, revoke.
+ * expiry, copy, revoke. `warning` says why links do not open now (a worked example's questions).
  */
-export function SharePanel({ scope, currentRevision }: { scope: ShareScope; currentRevision?: number }) {
+export function SharePanel({ scope, currentRevision, warning }: { scope: ShareScope; currentRevision?: number; warning?: string | null }) {
   const shares = useShares(scope);
   const create = useCreateShare(scope);
   const revoke = useRevokeShare(scope);
@@ -46,6 +46,7 @@ export function SharePanel({ scope, currentRevision }: { scope: ShareScope; curr
           ? "Anyone with the link sees this revision's Budget, read-only, without signing in. Revoking stops it at once."
           : "Anyone with the link sees the reviewed revision's verdict, comments and limits, read-only, without signing in — no e-mail addresses and no values of private parts. Revoking stops it at once."}
       </p>
+      {warning && <p role="note" data-testid="share-warning" className="rounded border border-tight/40 bg-tight/10 p-2 text-xs">{warning}</p>}
       <form onSubmit={onSubmit} noValidate className="flex flex-wrap items-end gap-2">
         {scope.kind === "build" && (
           <label className="block">

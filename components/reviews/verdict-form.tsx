@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { ApiClientError } from "@/components/ui/fetch-json";
-import { REVIEW_STATUS_LABELS, VERDICT_STATUSES, type VerdictStatus } from "@/lib/reviews/api-schemas";
+import { REVIEW_STATUS_LABELS, VERDICT_STATUSES, type VerdictStatus } from "@/lib/reviews/words";
 import { useVerdict } from "./use-reviews";
 
 /** The reviewer's verdict: approved / changes requested / rejected, with a summary. */

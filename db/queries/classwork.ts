@@ -144,13 +144,49 @@ export function classReaderSql(buildId: typeof builds.id, viewerId: string) {
 export function withheldExampleSql(buildId: typeof builds.id, viewerId: string) {
   return sql<number>`exists(
     select 1 from worked_example wh join class_member cs on cs.class_id = wh.class_id and cs.role = 'student'
-    where wh.build_id = ${buildId} and cs.user_id = ${viewerId} and json_length(wh.hidden) > 0
-      and wh.revealed_at is null and (wh.reveal_at is null or wh.reveal_at > now(3))
+    where wh.build_id = ${buildId} and cs.user_id = ${viewerId} and ${stillQuestionsSql("wh")}
   )`;
+}
+
+/** A worked example (table or alias `t`) whose values are still questions: hidden, not revealed by hand, reveal date not reached. */
+function stillQuestionsSql(t: string) {
+  return sql.raw(`(json_length(${t}.hidden) > 0 and ${t}.revealed_at is null and (${t}.reveal_at is null or ${t}.reveal_at > now(3)))`);
 }
 
 /** The owner of a build, to read an example or starter as its author sees it. */
 export async function buildOwner({ buildId }: { buildId: string }): Promise<string | undefined> {
   const rows = await db().select({ ownerId: builds.ownerId }).from(builds).where(eq(builds.id, buildId)).limit(1);
   return rows[0]?.ownerId;
+}
+
+/**
+ * Worked examples on this build whose values are still questions (hidden, not revealed by
+ * hand, reveal date not reached); with `studentId`, only those of classes where that user is
+ * a student.
+ */
+export async function withholdingExamples({ buildId, studentId }: { buildId: string; studentId?: string }): Promise<{ id: string; title: string; classId: string }[]> {
+  const rows = await db()
+    .select({ id: workedExamples.id, title: workedExamples.title, classId: workedExamples.classId })
+    .from(workedExamples)
+    .where(
+      and(
+        eq(workedExamples.buildId, buildId),
+        stillQuestionsSql("worked_example"),
+        studentId ? sql`exists(select 1 from class_member cs where cs.class_id = ${workedExamples.classId} and cs.user_id = ${studentId} and cs.role = 'student')` : undefined,
+      ),
+    )
+    .orderBy(asc(workedExamples.createdAt))
+    .limit(50);
+  return rows;
+}
+
+/** How many students hold their own copy of this build through an exercise of their class that starts from it. */
+export async function countStarterCopies({ buildId }: { buildId: string }): Promise<number> {
+  const rows = await db()
+    .select({ n: sql<number>`count(distinct ${exerciseCopies.userId})` })
+    .from(exerciseCopies)
+    .innerJoin(exercises, eq(exercises.id, exerciseCopies.exerciseId))
+    .innerJoin(classMembers, and(eq(classMembers.classId, exercises.classId), eq(classMembers.userId, exerciseCopies.userId), eq(classMembers.role, "student")))
+    .where(eq(exercises.starterBuildId, buildId));
+  return Number(rows[0]?.n ?? 0);
 }

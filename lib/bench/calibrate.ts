@@ -187,5 +187,14 @@ export function calibrateBuild(input: { build: ResolvedBuild; run: CalibrationRu
   };
 }
 
+const f2 = (x: number) => x.toFixed(2);
+
+/** The note of a calibrated revision: the run, the figure, the factor with its interval and the misfit before and after. */
+export function calibrationRevisionNote(runTitle: string, result: CalibrationResult): string {
+  const low = result.low ?? result.factor;
+  const note = `Calibrated to the bench run “${runTitle}”: ${result.choice.name} × ${f2(result.factor)} (95 % ${f2(low)}–${f2(result.high ?? result.factor)}), misfit ${result.rmsBeforeK.toFixed(1)} K → ${result.rmsAfterK.toFixed(1)} K over ${result.readingCount} readings.`;
+  return note.slice(0, 500);
+}
+
 /** Nothing to calibrate: the message says why, in words for the person who asked. */
 export class CalibrationError extends Error {}

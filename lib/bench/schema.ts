@@ -5,6 +5,16 @@ import { unitField } from "@/lib/units";
 /** Most readings one run may hold; a logger file longer than this is refused with a clear message. */
 export const MAX_READINGS = 99_999;
 
+/**
+ * The largest body a route taking a run's readings reads: room for MAX_READINGS readings
+ * written out with units and places (about 80 bytes each), so a run one reading too long
+ * is refused by count, naming the readings, rather than by size.
+ */
+export const READINGS_BODY_LIMIT = {
+  maxBodyBytes: 8_000_000,
+  tooLarge: { field: "readings", message: `The readings are over 8 MB as sent: a run takes at most ${MAX_READINGS.toLocaleString("en-GB")} readings. Keep every tenth row, or split the run.` },
+} as const;
+
 const FINISH_IDS = ["polished", "as-supplied", "oxidised", "anodised", "black-anodised", "painted"] as const satisfies readonly Finish[];
 const MATERIAL_IDS = MATERIALS.map((m) => m.id) as [string, ...string[]];
 

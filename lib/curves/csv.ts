@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { formatPath, fromStorage, parseQuantity, QUANTITY_INFO, type UnitChoice } from "@/lib/units";
+import { formatPath, fromStorage, parseQuantity, QUANTITY_INFO, unitChoiceOf, type UnitChoice } from "@/lib/units";
 import { CURVE_KIND_INFO, type CurveAxis, type CurveKind } from "./kinds";
 import { curveSchema, type CurvePoint } from "./schema";
 
@@ -22,11 +22,13 @@ export function headerUnit(cell: string, axis: CurveAxis): { ok: true; unit: Uni
   const match = UNIT_IN_HEADER.exec(cell);
   if (!match) return { ok: true, unit: undefined };
   const label = (match[1] ?? "").trim();
-  if (label === "" || label === "1") return { ok: true, unit: { math: "", label: "" } };
-  if (label === "%") return { ok: true, unit: { math: "%", label: "%" } };
+  if (label === "" || label === "1") return { ok: true, unit: { math: "", label: "", scale: 1 } };
+  if (label === "%") return { ok: true, unit: { math: "%", label: "%", scale: 0.01 } };
   const probe = parseQuantity(`1 ${label}`, axis.quantity);
   if (!probe.ok) return { ok: false, message: `unit [${label}]: ${probe.message}` };
-  return { ok: true, unit: { math: label, label } };
+  const unit = unitChoiceOf(label, axis.quantity);
+  if (!unit) return { ok: false, message: `unit [${label}]: not a unit of ${QUANTITY_INFO[axis.quantity].name}` };
+  return { ok: true, unit };
 }
 
 /** Semicolon- and tab-separated sheets from comma-decimal locales write 0,95 for 0.95. */
@@ -108,5 +110,5 @@ export function curveToCsv(points: readonly CurvePoint[], kind: CurveKind): stri
 
 function displayBare(value: number, axis: CurveAxis): string {
   // 12 digits: exact enough to round-trip, short enough not to show binary noise (0.95 × 100).
-  return String(Number(fromStorage(value, axis.quantity, QUANTITY_INFO[axis.quantity].bare.math).toPrecision(12)));
+  return String(Number(fromStorage(value, axis.quantity, QUANTITY_INFO[axis.quantity].bare).toPrecision(12)));
 }

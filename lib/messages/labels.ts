@@ -1,4 +1,4 @@
-import { CURVE_KIND_INFO, type CurveKind } from "@/lib/curves";
+import { CURVE_KIND_INFO, type CurveKind } from "@/lib/curves/kinds";
 import { COMMON_FIELDS, KIND_DEFINITIONS, PART_KINDS, type PartKind } from "@/lib/parts";
 import { DESIGN_LABELS, DESIGN_SLOTS, type DesignField } from "@/lib/retrofit/design-labels";
 import { QUICK_CHECK_LABELS } from "@/lib/retrofit/quick-check-labels";

@@ -1,5 +1,4 @@
-import { z } from "zod";
-import { fieldSchema, type FieldDef } from "./fields";
+import type { FieldDef } from "./fields";
 
 export const PART_KINDS = ["emitter", "driver", "heatsink", "interface", "spreader", "housing", "cell", "charger", "protection"] as const;
 export type PartKind = (typeof PART_KINDS)[number];
@@ -23,14 +22,3 @@ export const COMMON_FIELDS = [
   // Money is not a physical quantity; one currency keeps build totals summable.
   { key: "costEur", label: "Cost (EUR)", type: "quantity", quantity: "dimensionless", required: false, min: 0, max: 1e6, help: "What the part cost or costs, in euros." },
 ] as const satisfies readonly FieldDef[];
-
-export const commonShape = {
-  name: fieldSchema(COMMON_FIELDS[0]) as z.ZodType<string, string>,
-  provenance: fieldSchema(COMMON_FIELDS[1]) as z.ZodType<Provenance, string>,
-  provenanceNote: fieldSchema(COMMON_FIELDS[2]).optional() as z.ZodOptional<z.ZodType<string | undefined, string | null | undefined>>,
-  // Not wrapped in .optional(): the transform must run on a missing key to fill the default.
-  visibility: fieldSchema(COMMON_FIELDS[3]).transform((value) => value ?? "private") as unknown as z.ZodOptional<
-    z.ZodType<Visibility, string | null | undefined>
-  >,
-  costEur: fieldSchema(COMMON_FIELDS[4]).optional() as z.ZodOptional<z.ZodType<number | undefined, number | string | null | undefined>>,
-};

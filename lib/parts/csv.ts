@@ -1,6 +1,6 @@
 import Papa from "papaparse";
 import type { z } from "zod";
-import { BARE_NUMBER, formatNumber, formatPath, fromStorage, parseQuantity, QUANTITY_INFO, type UnitChoice } from "@/lib/units";
+import { BARE_NUMBER, formatNumber, formatPath, fromStorage, parseQuantity, QUANTITY_INFO, unitChoiceOf, type UnitChoice } from "@/lib/units";
 import { COMMON_FIELDS, type PartKind } from "./common";
 import type { FieldDef } from "./fields";
 import { formatModesCell, parseModesCell, type DriverMode } from "./modes";
@@ -95,7 +95,12 @@ function readHeader(cells: readonly string[], kind: PartKind): { columns: (CsvCo
       errors.push({ line: 1, column: cell, message: `unit [${bracket}]: ${probe.message}` });
       return undefined;
     }
-    return { ...column, header: cell.trim(), unit: { math: bracket, label: bracket } };
+    const unit = plain ? { math: bracket, label: bracket, scale: bracket === "%" ? 0.01 : 1 } : unitChoiceOf(bracket, column.field.quantity);
+    if (!unit) {
+      errors.push({ line: 1, column: cell, message: `unit [${bracket}]: not a unit of ${QUANTITY_INFO[column.field.quantity].name}` });
+      return undefined;
+    }
+    return { ...column, header: cell.trim(), unit };
   });
   for (const column of known) {
     if (column.field.required && !seen.has(column.key) && column.scope === "common") {
@@ -183,7 +188,7 @@ function cellOf(value: unknown, column: CsvColumn): string {
   if (column.field.type === "modes") return formatModesCell(value as DriverMode[]);
   if (column.field.type === "quantity" && typeof value === "number" && column.unit) {
     // 12 digits: the round trip returns the stored number, without binary noise.
-    return formatNumber(fromStorage(value, column.field.quantity, column.unit.math), 12);
+    return formatNumber(fromStorage(value, column.field.quantity, column.unit), 12);
   }
   return String(value);
 }

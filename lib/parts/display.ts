@@ -2,7 +2,8 @@ import { getMaterial } from "@/lib/thermal";
 import { formatQuantity, QUANTITY_INFO, type UnitPreferences } from "@/lib/units";
 import type { PartKind } from "./common";
 import type { FieldDef } from "./fields";
-import { FROM_BATTERY, modeDrive, type DriverMode } from "./modes";
+import { FROM_BATTERY, modeDrive } from "./mode-drive";
+import type { DriverMode } from "./modes";
 import { KIND_DEFINITIONS } from "./registry";
 
 /** A table column for one of a kind's main figures. */

@@ -3,6 +3,7 @@ export type { PartKind, Provenance, Visibility } from "./common";
 export { fieldSchema, buildSpecsSchema, buildVariantSpecsSchema } from "./fields";
 export type { FieldDef, QuantityField, ChoiceField, TextField, MaterialField, ModesField, SpecsOf, SpecsInputOf } from "./fields";
 export { KIND_DEFINITIONS, kindDefinition, specsField } from "./registry";
+export { KIND_SCHEMAS } from "./kind-schemas";
 export type { KindDefinition } from "./registry";
 export { partSchema, PART_SCHEMAS } from "./schema";
 export type { Part, PartInput, PartOfKind, SpecsOfKind } from "./schema";

@@ -1,16 +1,15 @@
-import type { z } from "zod";
 import type { CurveKind } from "@/lib/curves";
 import type { PartKind } from "./common";
 import type { FieldDef } from "./fields";
-import { CELL_FIELDS, cellSpecsSchema } from "./kinds/cell";
-import { CHARGER_FIELDS, chargerSpecsSchema } from "./kinds/charger";
-import { DRIVER_FIELDS, driverSpecsSchema } from "./kinds/driver";
-import { EMITTER_FIELDS, emitterSpecsSchema } from "./kinds/emitter";
-import { HEATSINK_FIELDS, heatsinkSpecsSchema } from "./kinds/heatsink";
-import { HOUSING_FIELDS, housingSpecsSchema } from "./kinds/housing";
-import { INTERFACE_FIELDS, interfaceSpecsSchema } from "./kinds/interface";
-import { PROTECTION_FIELDS, protectionSpecsSchema } from "./kinds/protection";
-import { SPREADER_FIELDS, spreaderSpecsSchema } from "./kinds/spreader";
+import { CELL_FIELDS } from "./kinds/cell";
+import { CHARGER_FIELDS } from "./kinds/charger";
+import { DRIVER_FIELDS } from "./kinds/driver";
+import { EMITTER_FIELDS } from "./kinds/emitter";
+import { HEATSINK_FIELDS } from "./kinds/heatsink";
+import { HOUSING_FIELDS } from "./kinds/housing";
+import { INTERFACE_FIELDS } from "./kinds/interface";
+import { PROTECTION_FIELDS } from "./kinds/protection";
+import { SPREADER_FIELDS } from "./kinds/spreader";
 
 export interface KindDefinition {
   readonly kind: PartKind;
@@ -22,7 +21,6 @@ export interface KindDefinition {
   readonly curveKinds: readonly CurveKind[];
   /** 2–4 specs keys worth a table column in the Parts bin. */
   readonly mainFigures: readonly string[];
-  readonly specsSchema: z.ZodType;
 }
 
 export const KIND_DEFINITIONS = {
@@ -32,7 +30,6 @@ export const KIND_DEFINITIONS = {
     fields: EMITTER_FIELDS,
     curveKinds: ["fluxVsTj", "fluxVsCurrent", "vfVsCurrent", "currentVsTemperature"],
     mainFigures: ["rthJspKPerW", "maxTjC", "vfV", "efficacyLmPerW"],
-    specsSchema: emitterSpecsSchema,
   },
   driver: {
     kind: "driver",
@@ -40,7 +37,6 @@ export const KIND_DEFINITIONS = {
     fields: DRIVER_FIELDS,
     curveKinds: ["efficiencyVsLoad", "currentVsTemperature"],
     mainFigures: ["topology", "inputVoltageMinV", "inputVoltageMaxV", "modes"],
-    specsSchema: driverSpecsSchema,
   },
   heatsink: {
     kind: "heatsink",
@@ -49,7 +45,6 @@ export const KIND_DEFINITIONS = {
     discriminator: "rating",
     curveKinds: [],
     mainFigures: ["rating", "sinkToAirKPerW", "finCount", "massKg"],
-    specsSchema: heatsinkSpecsSchema,
   },
   interface: {
     kind: "interface",
@@ -58,7 +53,6 @@ export const KIND_DEFINITIONS = {
     discriminator: "specifiedAs",
     curveKinds: [],
     mainFigures: ["conductivityWPerMK", "bondLineM", "resistancePerAreaKM2PerW"],
-    specsSchema: interfaceSpecsSchema,
   },
   spreader: {
     kind: "spreader",
@@ -66,7 +60,6 @@ export const KIND_DEFINITIONS = {
     fields: SPREADER_FIELDS,
     curveKinds: [],
     mainFigures: ["material", "thicknessM", "widthM", "lengthM"],
-    specsSchema: spreaderSpecsSchema,
   },
   housing: {
     kind: "housing",
@@ -74,7 +67,6 @@ export const KIND_DEFINITIONS = {
     fields: HOUSING_FIELDS,
     curveKinds: [],
     mainFigures: ["material", "outerAreaM2", "enclosure", "emissivity"],
-    specsSchema: housingSpecsSchema,
   },
   cell: {
     kind: "cell",
@@ -82,7 +74,6 @@ export const KIND_DEFINITIONS = {
     fields: CELL_FIELDS,
     curveKinds: [],
     mainFigures: ["chemistry", "capacityCoulomb", "nominalVoltageV", "maxDischargeCurrentA"],
-    specsSchema: cellSpecsSchema,
   },
   charger: {
     kind: "charger",
@@ -90,7 +81,6 @@ export const KIND_DEFINITIONS = {
     fields: CHARGER_FIELDS,
     curveKinds: [],
     mainFigures: ["topology", "chargeCurrentA", "inputVoltageV"],
-    specsSchema: chargerSpecsSchema,
   },
   protection: {
     kind: "protection",
@@ -98,7 +88,6 @@ export const KIND_DEFINITIONS = {
     fields: PROTECTION_FIELDS,
     curveKinds: [],
     mainFigures: ["overCurrentTripA", "overChargeCutoffV", "overDischargeCutoffV"],
-    specsSchema: protectionSpecsSchema,
   },
 } as const satisfies Record<PartKind, KindDefinition>;
 

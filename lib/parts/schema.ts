@@ -1,7 +1,21 @@
 import { z } from "zod";
 import { curvesSchema } from "@/lib/curves";
-import { commonShape, type PartKind } from "./common";
+import { COMMON_FIELDS, type PartKind, type Provenance, type Visibility } from "./common";
+import { fieldSchema } from "./fields";
 import { KIND_DEFINITIONS } from "./registry";
+import { KIND_SCHEMAS } from "./kind-schemas";
+
+/** The fields every part has, as schemas (their definitions are in common.ts). */
+export const commonShape = {
+  name: fieldSchema(COMMON_FIELDS[0]) as z.ZodType<string, string>,
+  provenance: fieldSchema(COMMON_FIELDS[1]) as z.ZodType<Provenance, string>,
+  provenanceNote: fieldSchema(COMMON_FIELDS[2]).optional() as z.ZodOptional<z.ZodType<string | undefined, string | null | undefined>>,
+  // Not wrapped in .optional(): the transform must run on a missing key to fill the default.
+  visibility: fieldSchema(COMMON_FIELDS[3]).transform((value) => value ?? "private") as unknown as z.ZodOptional<
+    z.ZodType<Visibility, string | null | undefined>
+  >,
+  costEur: fieldSchema(COMMON_FIELDS[4]).optional() as z.ZodOptional<z.ZodType<number | undefined, number | string | null | undefined>>,
+};
 
 /** One kind's full part schema: common fields, kind literal, specs and that kind's curves. */
 function partOf<const K extends PartKind>(kind: K) {
@@ -9,7 +23,7 @@ function partOf<const K extends PartKind>(kind: K) {
   return z.strictObject({
     kind: z.literal(kind),
     ...commonShape,
-    specs: def.specsSchema as (typeof KIND_DEFINITIONS)[K]["specsSchema"],
+    specs: KIND_SCHEMAS[kind] as (typeof KIND_SCHEMAS)[K],
     // Curves are optional per kind; a missing object means "none".
     curves: curvesSchema(def.curveKinds as (typeof KIND_DEFINITIONS)[K]["curveKinds"])
       .optional()

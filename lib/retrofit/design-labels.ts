@@ -1,4 +1,6 @@
 import type { PartKind } from "@/lib/parts";
+import type { FinDirection } from "@/lib/thermal/correlations";
+import type { Environment } from "./design-schema";
 
 /**
  * The label of every field of a build design as the Heat path editor shows it. The editor
@@ -93,3 +95,16 @@ export const DESIGN_SLOTS = {
 export type DesignSlot = keyof typeof DESIGN_SLOTS;
 
 export const designLabel = (field: DesignField): string => DESIGN_LABELS[field];
+
+/** Fin directions as the build editor offers them (label, then a line of help). */
+export const FIN_DIRECTION_CHOICES: readonly (readonly [FinDirection, string])[] = [
+  ["vertical", "Vertical: channels run up and down"],
+  ["horizontal", "Level, on an upright base"],
+  ["up", "Pointing up from a level base"],
+  ["down", "Hanging down under a level base"],
+];
+
+/** The fins' direction in use: as given, else along the lamp's axis (vertical when upright, level when lying). */
+export function finDirectionOf(le: { finDirection?: FinDirection }, env: { orientation: Environment["orientation"] }): FinDirection {
+  return le.finDirection ?? (env.orientation === "upright" ? "vertical" : "horizontal");
+}

@@ -1,8 +1,11 @@
 import { z } from "zod";
 import { curvesSchema } from "@/lib/curves";
-import { KIND_DEFINITIONS, isMaterialId, MATERIAL_IDS, type PartKind } from "@/lib/parts";
+import { KIND_DEFINITIONS, KIND_SCHEMAS, isMaterialId, MATERIAL_IDS, type PartKind } from "@/lib/parts";
 import { unitField } from "@/lib/units";
 import { FIN_DIRECTIONS, type FinDirection } from "@/lib/thermal/correlations";
+import { FIN_DIRECTION_CHOICES, finDirectionOf } from "./design-labels";
+
+export { FIN_DIRECTION_CHOICES, finDirectionOf };
 
 /**
  * What a saved build revision stores. Each part slot is either a reference to a part in
@@ -16,7 +19,7 @@ function slot<const K extends PartKind>(kind: K) {
   return z.union([
     z.strictObject({ partId: z.string().trim().min(1, "required").max(100) }),
     z.strictObject({
-      inline: def.specsSchema as (typeof KIND_DEFINITIONS)[K]["specsSchema"],
+      inline: KIND_SCHEMAS[kind] as (typeof KIND_SCHEMAS)[K],
       name: z.string().trim().min(1).max(120).optional(),
       curves: curvesSchema(def.curveKinds as (typeof KIND_DEFINITIONS)[K]["curveKinds"]).optional(),
       costEur: z.number().min(0).max(1e6).optional(),
@@ -189,15 +192,3 @@ export type Environment = z.output<typeof environmentSchema>;
 export type HousingShape = z.output<typeof housingShapeSchema>;
 export type Costs = z.output<typeof costsSchema>;
 
-/** Fin directions as the build editor offers them (label, then a line of help). */
-export const FIN_DIRECTION_CHOICES: readonly (readonly [FinDirection, string])[] = [
-  ["vertical", "Vertical: channels run up and down"],
-  ["horizontal", "Level, on an upright base"],
-  ["up", "Pointing up from a level base"],
-  ["down", "Hanging down under a level base"],
-];
-
-/** The fins' direction in use: as given, else along the lamp's axis (vertical when upright, level when lying). */
-export function finDirectionOf(le: { finDirection?: FinDirection }, env: { orientation: Environment["orientation"] }): FinDirection {
-  return le.finDirection ?? (env.orientation === "upright" ? "vertical" : "horizontal");
-}

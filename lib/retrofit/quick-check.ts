@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { KIND_DEFINITIONS } from "@/lib/parts";
+import { KIND_SCHEMAS } from "@/lib/parts";
 import { declaredResistance, explainLinks, isThermalInputError, solveSteady, type Network, type Trace } from "@/lib/thermal";
 import { unitField } from "@/lib/units";
 import { compileSinkToAir, declaredRise } from "./compile/heatsink";
@@ -28,7 +28,7 @@ const geometrySinkSchema = z.preprocess(
   fillFinGap,
   z
     .strictObject({
-      geometry: KIND_DEFINITIONS.heatsink.specsSchema,
+      geometry: KIND_SCHEMAS.heatsink,
       gapWorkedOut: z.boolean().optional(),
       finDirection: z.enum(FIN_DIRECTIONS, { error: "choose how the fins stand: vertical, level, pointing up or hanging down" }).default("vertical"),
     })
@@ -48,7 +48,7 @@ export const quickCheckInputSchema = z.strictObject({
     }),
     geometrySinkSchema,
   ]),
-  interface: z.strictObject({ areaM2: unitField("area", { gt: 0, max: 0.1 }), specs: KIND_DEFINITIONS.interface.specsSchema }).optional(),
+  interface: z.strictObject({ areaM2: unitField("area", { gt: 0, max: 0.1 }), specs: KIND_SCHEMAS.interface }).optional(),
   rthJspKPerW: unitField("thermalResistance", { gt: 0, max: 1000, required: false }),
   ambientC: unitField("temperature", { min: -40, max: 80 }),
   maxTjC: unitField("temperature", { gt: 0, max: 250, required: false }),

@@ -1,17 +1,10 @@
 import { z } from "zod";
+import { itemsParam, MAX_COMPARE, MIN_COMPARE, REVIEW_STATUS_LABELS, VERDICT_STATUSES, type VerdictStatus } from "./words";
+
+export { itemsParam, MAX_COMPARE, MIN_COMPARE, REVIEW_STATUS_LABELS, VERDICT_STATUSES, type VerdictStatus };
 
 /** Inputs of the review, share-link, notification and comparison routes: the one definition. */
 
-export const VERDICT_STATUSES = ["approved", "changes_requested", "rejected"] as const;
-export type VerdictStatus = (typeof VERDICT_STATUSES)[number];
-
-/** Our words for a review's state (PRODUCT.md keeps the verdict words). */
-export const REVIEW_STATUS_LABELS = {
-  requested: "waiting for a verdict",
-  approved: "approved",
-  changes_requested: "changes requested",
-  rejected: "rejected",
-} as const;
 
 export const requestReviewSchema = z.strictObject({
   reviewerEmail: z
@@ -57,8 +50,6 @@ export const markReadSchema = z.strictObject({
   ids: z.array(z.string().trim().min(1).max(40)).max(200).optional(),
 });
 
-export const MAX_COMPARE = 4;
-export const MIN_COMPARE = 2;
 
 export const compareItemSchema = z.strictObject({
   buildId: z.string().trim().min(1).max(40).regex(/^[A-Za-z0-9_-]+$/, { error: "A build id has letters, digits, - and _ only." }),
@@ -98,7 +89,3 @@ export const saveComparisonSchema = z.strictObject({
   items: itemsArray,
 });
 
-/** items → the query string the compare route and page take. */
-export function itemsParam(items: readonly CompareItem[]): string {
-  return items.map((i) => (i.revision ? `${i.buildId}@${i.revision}` : i.buildId)).join(",");
-}

@@ -3,7 +3,7 @@ import { toCelsius } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
 import type { Network } from "./schema";
-import { solveSteady, type SteadyResult } from "./solve-steady";
+import { solveSteady, steadyTemperatures, type SteadyResult } from "./solve-steady";
 import { resolveSteadyOptions, solveCompiledSteady } from "./solver/steady";
 
 /** Target: keep `node` at or below `limitC` in steady state. */
@@ -246,9 +246,12 @@ export function pathResistance(network: Network, at: SteadyResult, links: readon
 export function requiredLinkResistance(network: Network, at: SteadyResult, index: number, node: string, limitC: number, tolK = 0.02, alsoRemove: readonly number[] = []): ResistanceAnswer {
   const link = network.links[index]!;
   const drop = new Set(alsoRemove);
+  // Each probe starts from the last answer (the first from the present one): a few Newton steps fewer.
+  let last = at.temperaturesC;
   const f = (r: number) => {
     const links = network.links.flatMap((l, i) => (i === index ? [{ from: link.from, to: link.to, type: "resistance" as const, kelvinPerWatt: r }] : drop.has(i) ? [] : [l]));
-    return (solveSteady({ ...network, links }, PROBE).temperaturesC[node] ?? 0) - limitC;
+    last = steadyTemperatures({ ...network, links }, PROBE, last);
+    return (last[node] ?? 0) - limitC;
   };
   const r0 = pathResistance(network, at, [index, ...alsoRemove]);
   const q = Math.max(Math.abs([index, ...alsoRemove].reduce((s, i) => s + (at.links[i]?.watts ?? 0), 0)), 1e-6);
@@ -284,8 +287,10 @@ export function maxCommonScale(network: Network, at: SteadyResult, limits: reado
     return { worst, who };
   };
   let lastWho = 0;
+  let last = at.temperaturesC;
   const f = (s: number) => {
-    const r = excess(solveSteady({ ...network, sources: network.sources.map((x) => ({ node: x.node, watts: x.watts * s })) }, PROBE).temperaturesC);
+    last = steadyTemperatures({ ...network, sources: network.sources.map((x) => ({ node: x.node, watts: x.watts * s })) }, PROBE, last);
+    const r = excess(last);
     lastWho = r.who;
     return r.worst;
   };

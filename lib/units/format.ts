@@ -1,5 +1,4 @@
-import { math } from "./math";
-import { displayUnits, PLAIN_QUANTITIES, QUANTITY_INFO, type Quantity, type UnitChoice, type UnitPreferences } from "./quantities";
+import { displayUnits, QUANTITY_INFO, type Quantity, type UnitChoice, type UnitPreferences } from "./quantities";
 
 export interface DisplayValue {
   readonly value: number;
@@ -13,21 +12,18 @@ export interface FormatOptions {
   readonly unit?: UnitChoice;
 }
 
-/** Converts a stored value into `unit` (a mathjs unit string; "" or "%" for plain numbers). */
-export function fromStorage(stored: number, quantity: Quantity, unit: string): number {
-  if (PLAIN_QUANTITIES.has(quantity)) return unit === "%" ? stored * 100 : stored;
-  if (quantity === "temperatureDifference") {
-    // Scale only, no offset: a difference of 10 K is 18 °F.
-    return stored / (math.unit(1, unit).value ?? 1);
-  }
-  return math.unit(stored, QUANTITY_INFO[quantity].storage).toNumber(unit);
+/** Converts a stored value into one of its quantity's units (no unit library: see UnitChoice). */
+export function fromStorage(stored: number, quantity: Quantity, unit: UnitChoice): number {
+  // Only an absolute temperature has an offset; a difference of 10 K is 18 °F.
+  const offset = quantity === "temperature" ? (unit.offset ?? 0) : 0;
+  return (stored - offset) / unit.scale;
 }
 
 function choose(stored: number, quantity: Quantity, choices: readonly UnitChoice[]): DisplayValue {
   const first = choices[0] ?? QUANTITY_INFO[quantity].bare;
-  let best: DisplayValue = { value: fromStorage(stored, quantity, first.math), unit: first };
+  let best: DisplayValue = { value: fromStorage(stored, quantity, first), unit: first };
   for (const choice of choices.slice(1)) {
-    const value = fromStorage(stored, quantity, choice.math);
+    const value = fromStorage(stored, quantity, choice);
     if (Math.abs(value) >= 1) best = { value, unit: choice };
   }
   return best;
@@ -35,7 +31,7 @@ function choose(stored: number, quantity: Quantity, choices: readonly UnitChoice
 
 /** The value in the unit a person with these preferences expects to read it in. */
 export function toDisplay(stored: number, quantity: Quantity, prefs: UnitPreferences, unit?: UnitChoice): DisplayValue {
-  if (unit) return { value: fromStorage(stored, quantity, unit.math), unit };
+  if (unit) return { value: fromStorage(stored, quantity, unit), unit };
   return choose(stored, quantity, displayUnits(quantity, prefs));
 }
 

@@ -1,6 +1,6 @@
 export { QUANTITIES, QUANTITY_INFO, PLAIN_QUANTITIES, METRIC_PREFERENCES, displayUnits } from "./quantities";
 export type { Quantity, QuantityInfo, UnitChoice, UnitPreferences } from "./quantities";
-export { BARE_NUMBER, MAX_VALUE_CHARS, parseQuantity } from "./parse";
+export { BARE_NUMBER, MAX_VALUE_CHARS, parseQuantity, unitChoiceOf } from "./parse";
 export type { ParseResult, ParseOptions } from "./parse";
 export { formatQuantity, formatNumber, toDisplay, fromStorage } from "./format";
 export type { DisplayValue, FormatOptions } from "./format";

@@ -128,3 +128,19 @@ export function parseQuantity(input: string | number, quantity: Quantity, option
   if (parsed.unit.value === null) return fail(`${expected(quantity)} (a number before the unit); got "${text}"`);
   return fromUnit(parsed.unit, quantity);
 }
+
+/**
+ * The unit a person named in text (a CSV header's "[°F]") as a UnitChoice of `quantity`, its
+ * scale and offset read by the parser itself; null when it is not a unit of that quantity.
+ */
+export function unitChoiceOf(text: string, quantity: Quantity): UnitChoice | null {
+  if (text === "" || text === "%") {
+    if (!PLAIN_QUANTITIES.has(quantity)) return null;
+    return text === "%" ? { math: "%", label: "%", scale: 0.01 } : { math: "", label: "", scale: 1 };
+  }
+  const zero = parseQuantity(`0 ${text}`, quantity);
+  const one = parseQuantity(`1 ${text}`, quantity);
+  if (!zero.ok || !one.ok || one.si === zero.si) return null;
+  const scale = one.si - zero.si;
+  return zero.si === 0 ? { math: text, label: text, scale } : { math: text, label: text, scale, offset: zero.si };
+}

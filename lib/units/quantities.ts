@@ -43,10 +43,18 @@ export const QUANTITIES = [
 
 export type Quantity = (typeof QUANTITIES)[number];
 
-/** A unit as mathjs spells it and as a person reads it; `label` must parse back. */
+/**
+ * A unit as mathjs spells it and as a person reads it; `label` must parse back. `scale` is
+ * how many of the quantity's storage unit one of this unit is (mm for a length: 0.001), so
+ * showing a stored value needs no unit library in the browser; a unit test holds every
+ * scale against mathjs. `offset` is the storage value at this unit's zero, used for absolute
+ * temperatures only (0 °F is −17.78 °C; a difference of 1 °F is still 5/9 K).
+ */
 export interface UnitChoice {
   readonly math: string;
   readonly label: string;
+  readonly scale: number;
+  readonly offset?: number;
 }
 
 export interface QuantityInfo {
@@ -65,20 +73,21 @@ export interface QuantityInfo {
   readonly bare: UnitChoice;
 }
 
-const u = (math: string, label = math): UnitChoice => ({ math, label });
+const u = (math: string, label = math, scale = 1, offset?: number): UnitChoice =>
+  offset === undefined ? { math, label, scale } : { math, label, scale, offset };
 const NONE = u("", "");
-const PERCENT = u("%", "%");
+const PERCENT = u("%", "%", 0.01);
 const DEG_C = u("degC", "°C");
-const DEG_F = u("degF", "°F");
+const DEG_F = u("degF", "°F", 5 / 9, -160 / 9);
 const K = u("K");
-const MM = u("mm");
-const IN = u("in");
-const MA = u("mA");
+const MM = u("mm", "mm", 1e-3);
+const IN = u("in", "in", 0.0254);
+const MA = u("mA", "mA", 1e-3);
 const A = u("A");
 const W = u("W");
 const OHM = u("ohm", "Ω");
-const MOHM = u("mohm", "mΩ");
-const KOHM = u("kohm", "kΩ");
+const MOHM = u("mohm", "mΩ", 1e-3);
+const KOHM = u("kohm", "kΩ", 1e3);
 
 export const QUANTITY_INFO: Readonly<Record<Quantity, QuantityInfo>> = {
   length: { name: "a length", storage: "m", example: "20 mm", metric: [MM, u("m")], imperial: [IN], bare: MM },
@@ -86,11 +95,11 @@ export const QUANTITY_INFO: Readonly<Record<Quantity, QuantityInfo>> = {
     name: "an area",
     storage: "m^2",
     example: "12 cm²",
-    metric: [u("mm^2", "mm²"), u("cm^2", "cm²"), u("m^2", "m²")],
-    imperial: [u("in^2", "in²")],
-    bare: u("cm^2", "cm²"),
+    metric: [u("mm^2", "mm²", 1e-6), u("cm^2", "cm²", 1e-4), u("m^2", "m²")],
+    imperial: [u("in^2", "in²", 0.00064516)],
+    bare: u("cm^2", "cm²", 1e-4),
   },
-  mass: { name: "a mass", storage: "kg", example: "45 g", metric: [u("g"), u("kg")], imperial: [u("oz"), u("lb")], bare: u("g") },
+  mass: { name: "a mass", storage: "kg", example: "45 g", metric: [u("g", "g", 1e-3), u("kg")], imperial: [u("oz", "oz", 0.028349523125), u("lb", "lb", 0.45359237)], bare: u("g", "g", 1e-3) },
   thermalResistance: { name: "a thermal resistance", storage: "K/W", example: "2.5 K/W", metric: [u("K/W")], bare: u("K/W") },
   conductivity: {
     name: "a thermal conductivity",
@@ -106,11 +115,11 @@ export const QUANTITY_INFO: Readonly<Record<Quantity, QuantityInfo>> = {
     metric: [u("W/(m^2 K)", "W/(m²·K)")],
     bare: u("W/(m^2 K)", "W/(m²·K)"),
   },
-  voltage: { name: "a voltage", storage: "V", example: "3.7 V", metric: [u("mV"), u("V")], bare: u("V") },
+  voltage: { name: "a voltage", storage: "V", example: "3.7 V", metric: [u("mV", "mV", 1e-3), u("V")], bare: u("V") },
   current: { name: "a current", storage: "A", example: "700 mA", metric: [MA, A], bare: A },
-  power: { name: "a power", storage: "W", example: "3 W", metric: [u("mW"), W], bare: W },
-  charge: { name: "a charge", storage: "C", example: "2000 mAh", metric: [u("mAh"), u("Ah")], bare: u("mAh") },
-  energy: { name: "an energy", storage: "J", example: "9.6 Wh", metric: [u("mWh"), u("Wh")], bare: u("Wh") },
+  power: { name: "a power", storage: "W", example: "3 W", metric: [u("mW", "mW", 1e-3), W], bare: W },
+  charge: { name: "a charge", storage: "C", example: "2000 mAh", metric: [u("mAh", "mAh", 3.6), u("Ah", "Ah", 3600)], bare: u("mAh", "mAh", 3.6) },
+  energy: { name: "an energy", storage: "J", example: "9.6 Wh", metric: [u("mWh", "mWh", 3.6), u("Wh", "Wh", 3600)], bare: u("Wh", "Wh", 3600) },
   temperature: { name: "a temperature", storage: "degC", example: "85 °C", metric: [DEG_C], imperial: [DEG_F], bare: DEG_C },
   temperatureDifference: {
     name: "a temperature difference",
@@ -120,7 +129,7 @@ export const QUANTITY_INFO: Readonly<Record<Quantity, QuantityInfo>> = {
     imperial: [DEG_F],
     bare: K,
   },
-  time: { name: "a time", storage: "s", example: "30 min", metric: [u("s"), u("min"), u("h")], bare: u("s") },
+  time: { name: "a time", storage: "s", example: "30 min", metric: [u("s"), u("min", "min", 60), u("h", "h", 3600)], bare: u("s") },
   resistance: { name: "an electrical resistance", storage: "ohm", example: "40 mΩ", metric: [MOHM, OHM, KOHM], bare: OHM },
   dimensionless: { name: "a plain number", storage: "", example: "0.9", metric: [NONE], bare: NONE },
   fraction: { name: "a fraction", storage: "", example: "0.9", metric: [NONE], bare: NONE },
@@ -139,19 +148,19 @@ export const QUANTITY_INFO: Readonly<Record<Quantity, QuantityInfo>> = {
     name: "a resistance per area",
     storage: "K m^2/W",
     example: "0.5 K cm^2/W",
-    metric: [u("K cm^2/W", "K·cm²/W")],
-    imperial: [u("K in^2/W", "K·in²/W")],
-    bare: u("K cm^2/W", "K·cm²/W"),
+    metric: [u("K cm^2/W", "K·cm²/W", 1e-4)],
+    imperial: [u("K in^2/W", "K·in²/W", 0.00064516)],
+    bare: u("K cm^2/W", "K·cm²/W", 1e-4),
   },
   voltageTempCoefficient: {
     name: "a temperature coefficient of voltage",
     storage: "V/K",
     example: "-2 mV/K",
-    metric: [u("mV/K")],
-    bare: u("mV/K"),
+    metric: [u("mV/K", "mV/K", 1e-3)],
+    bare: u("mV/K", "mV/K", 1e-3),
   },
   luminousEfficacy: { name: "a luminous efficacy", storage: "lm/W", example: "150 lm/W", metric: [u("lm/W")], bare: u("lm/W") },
-  heatCapacity: { name: "a heat capacity", storage: "J/K", example: "60 J/K", metric: [u("J/K"), u("kJ/K")], bare: u("J/K") },
+  heatCapacity: { name: "a heat capacity", storage: "J/K", example: "60 J/K", metric: [u("J/K"), u("kJ/K", "kJ/K", 1e3)], bare: u("J/K") },
 };
 
 /** Quantities stored as plain numbers (no mathjs unit). */

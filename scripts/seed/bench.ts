@@ -6,12 +6,15 @@ import { saveRunSchema, type SaveRunInputRaw } from "@/lib/bench/run-schema";
 import { partSchema } from "@/lib/parts";
 import { db } from "@/db/client";
 import { createBenchRun, keepFitAsPart } from "@/db/queries/bench";
-import { getRevision } from "@/db/queries/builds";
+import { getRevision, saveRevision } from "@/db/queries/builds";
 import { getParts } from "@/db/queries/parts";
 import { collectPartIds } from "@/lib/builds/part-ids";
 import { buildDesignSchema, evaluateBuild, resolveBuild } from "@/lib/retrofit";
 import { type Part } from "@/lib/parts";
-import { benchRuns } from "@/db/schema";
+import { benchRuns, builds } from "@/db/schema";
+import { calibrateBuild, calibrationRevisionNote } from "@/lib/bench/calibrate";
+import { calibrationSchema } from "@/lib/retrofit/design-schema";
+import { CALIBRATION_LABELS } from "@/lib/retrofit/compile/calibration";
 import type { CatalogueKey } from "./catalogue";
 
 const TITLE = "Salvaged projector sink, COB at 6.2 V";
@@ -51,6 +54,23 @@ export async function seedBench({ makerId, ids }: { makerId: string; ids: Record
 const HOLD_TITLE = "Finished lantern, warm-up on the workbench";
 
 /**
+ * The seed runs outside the app (no request, no session), so it reads the owner's parts
+ * itself and resolves the design the way the solve route does.
+ */
+async function resolvedAsOwner(raw: unknown, makerId: string) {
+  const design = buildDesignSchema.parse(raw);
+  const records = await getParts({ ids: collectPartIds(design), viewer: { id: makerId, role: "maker" } });
+  const parts = new Map<string, Part>();
+  for (const r of records) {
+    const parsed = partSchema.safeParse({ kind: r.kind, name: r.name, provenance: r.provenance, visibility: r.visibility, specs: r.specs, curves: r.curves, ...(r.provenanceNote !== null ? { provenanceNote: r.provenanceNote } : {}) });
+    if (parsed.success) parts.set(r.id, parsed.data);
+  }
+  const sink = design.lightEngine.heatsink;
+  const sinkMeasured = !!sink && "partId" in sink && parts.get(sink.partId)?.provenance === "measured";
+  return { build: resolveBuild(design, (id) => parts.get(id)).build, sinkMeasured };
+}
+
+/**
  * The finished lantern (driver strapped with copper tape) held against its measured warm-up.
  * The readings are invented for the demo: the model's own warm-up of the highest mode,
  * with the real lamp a little cooler at the sink and the wall and warmer at the driver, as
@@ -62,16 +82,7 @@ export async function seedBenchHold({ makerId, buildId }: { makerId: string; bui
   if (found[0]) return found[0].id;
   const revision = await getRevision({ buildId, number: 1 });
   if (!revision) return null;
-  // The seed runs outside the app (no request, no session), so it reads the owner's parts
-  // itself and evaluates the design the way the solve route does.
-  const design = buildDesignSchema.parse(revision.design);
-  const records = await getParts({ ids: collectPartIds(design), viewer: { id: makerId, role: "maker" } });
-  const parts = new Map<string, Part>();
-  for (const r of records) {
-    const parsed = partSchema.safeParse({ kind: r.kind, name: r.name, provenance: r.provenance, visibility: r.visibility, specs: r.specs, curves: r.curves, ...(r.provenanceNote !== null ? { provenanceNote: r.provenanceNote } : {}) });
-    if (parsed.success) parts.set(r.id, parsed.data);
-  }
-  const evaluation = evaluateBuild(resolveBuild(design, (id) => parts.get(id)).build);
+  const evaluation = evaluateBuild((await resolvedAsOwner(revision.design, makerId)).build);
   const modes = evaluation.scenarios.filter((s) => s.kind === "mode" && s.warmup && s.thermal);
   const mode = modes[modes.length - 1];
   if (!mode?.warmup || !mode.thermal) return null;
@@ -106,4 +117,34 @@ export async function seedBenchHold({ makerId, buildId }: { makerId: string; bui
   });
   const { id } = await createBenchRun({ ownerId: makerId, title: run.title, visibility: run.visibility, poweredBuildId: buildId, poweredRevision: 1, run, fit: null });
   return id;
+}
+
+export type SeededCalibration = { revision: number; name: string; factor: number; low: number | null; high: number | null; rmsBeforeK: number; rmsAfterK: number; readingCount: number };
+
+/**
+ * The finished lantern calibrated to its warm-up: the one least certain figure of its model
+ * fitted to the readings, saved as the next revision (the fit in its note and its links'
+ * traces), as "Calibrate the model to this run" does. Idempotent: a build whose current
+ * revision already carries a calibration is left as it is (and that calibration answered).
+ */
+export async function seedCalibration({ makerId, buildId, runId }: { makerId: string; buildId: string | undefined; runId: string | null }): Promise<SeededCalibration | null> {
+  if (!buildId || !runId) return null;
+  const current = await db().select({ n: builds.currentRevision }).from(builds).where(eq(builds.id, buildId)).limit(1);
+  const revision = current[0] ? await getRevision({ buildId, number: current[0].n }) : undefined;
+  const runRow = await db().select({ title: benchRuns.title, run: benchRuns.run }).from(benchRuns).where(eq(benchRuns.id, runId)).limit(1);
+  if (!revision || !runRow[0]) return null;
+  const raw = revision.design as Record<string, unknown>;
+  const kept = calibrationSchema.safeParse(raw.calibration);
+  if (kept.success) {
+    const k = kept.data;
+    return { revision: revision.number, name: CALIBRATION_LABELS[k.parameter].name, factor: k.factor, low: k.low, high: k.high, rmsBeforeK: k.rmsBeforeK, rmsAfterK: k.rmsAfterK, readingCount: k.readingCount };
+  }
+  const run = saveRunSchema.parse(typeof runRow[0].run === "string" ? JSON.parse(runRow[0].run) : runRow[0].run);
+  const { build, sinkMeasured } = await resolvedAsOwner(raw, makerId);
+  const mode = run.powered.kind === "build" ? run.powered.mode : undefined;
+  const result = calibrateBuild({ build, run: { id: runId, title: runRow[0].title, ambientC: run.conditions.ambientC, ...(mode ? { mode } : {}), readings: run.readings }, sinkMeasured });
+  if (result.atEdge || result.low === null) throw new Error(`the demo calibration does not pin ${result.choice.name} down (factor ${result.factor})`);
+  const design = { ...raw, calibration: result.calibration };
+  const number = await saveRevision({ buildId, userId: makerId, design, partIds: collectPartIds(design), note: calibrationRevisionNote(runRow[0].title, result) });
+  return { revision: number, name: result.choice.name, factor: result.factor, low: result.low, high: result.high, rmsBeforeK: result.rmsBeforeK, rmsAfterK: result.rmsAfterK, readingCount: result.readingCount };
 }

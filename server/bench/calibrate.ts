@@ -1,6 +1,6 @@
 import "server-only";
 import { saveRevision } from "@/db/queries/builds";
-import { calibrateBuild, CalibrationError, type CalibrationResult } from "@/lib/bench/calibrate";
+import { calibrateBuild, CalibrationError, calibrationRevisionNote, type CalibrationResult } from "@/lib/bench/calibrate";
 import type { BenchViewer } from "@/lib/bench/access";
 import type { SaveRunInput } from "@/lib/bench/run-schema";
 import { ApiError } from "@/lib/http/api-error";
@@ -9,8 +9,6 @@ import { buildDesignSchema, resolveBuild } from "@/lib/retrofit";
 import { assertDesignParts, loadDesignParts, loadEditableBuild, loadRevision } from "@/server/builds/load";
 import { toPartInput } from "@/server/parts/api";
 import type { BenchRunRow } from "@/db/queries/bench";
-
-const fmt = (x: number) => x.toFixed(2);
 
 /** The calibration in the words the bench screen and the Budget show (the API's answer). */
 export function calibrationJson(r: CalibrationResult) {
@@ -77,7 +75,6 @@ export async function saveCalibration({ run, viewer }: { run: BenchRunRow; viewe
   if (result.low === null) throw new ApiError("conflict:calibration", `Not saved: the run does not pin ${result.choice.name} down. A longer run, or readings at more places, would.`, "save");
   const design = { ...(revision.design as Record<string, unknown>), calibration: result.calibration };
   const partIds = await assertDesignParts({ design, viewer });
-  const note = `Calibrated to the bench run “${run.title}”: ${result.choice.name} × ${fmt(result.factor)} (95 % ${fmt(result.low)}–${fmt(result.high ?? result.factor)}), misfit ${result.rmsBeforeK.toFixed(1)} K → ${result.rmsAfterK.toFixed(1)} K over ${result.readingCount} readings.`;
-  const number = await saveRevision({ buildId: build.id, userId: viewer.id, design, partIds, note: note.slice(0, 500) });
+  const number = await saveRevision({ buildId: build.id, userId: viewer.id, design, partIds, note: calibrationRevisionNote(run.title, result) });
   return { result, revision: number, buildId: build.id };
 }

@@ -9,6 +9,7 @@ import { REVIEW_STATUS_LABELS } from "@/lib/reviews/api-schemas";
 import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
 import { sharedHeatPaths, sharedReviewResults, type SharedHeatPath, type SharedReviewResults } from "@/lib/reviews/shared-review";
 import { loadDesignParts } from "@/server/builds/load";
+import { assertLinkOpen } from "@/server/classes/withheld";
 import { reviewedRevision } from "./anchors";
 import { reviewView } from "./load";
 import { hashShareToken } from "./tokens";
@@ -47,6 +48,8 @@ export async function openReviewShare({ token }: { token: string }): Promise<Sha
   const row = await getReview({ id: link.reviewId });
   if (!row) throw unknown;
   const review = reviewView(row);
+  // Its results and comments quote the build's numbers: closed while they are an example's questions.
+  await assertLinkOpen({ buildId: review.buildId });
   const [comments, reviewed] = await Promise.all([listComments({ reviewId: review.id }), reviewedRevision({ review }).catch(() => null)]);
   const solved = reviewed?.solved ?? null;
   const anchors = solved ? heatPathAnchors(solved.evaluation) : { nodes: [], links: [], figures: [] };

@@ -8,6 +8,7 @@ import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
 import type { BuildEvaluation } from "@/lib/retrofit";
 import { loadDesignParts } from "@/server/builds/load";
 import { solveRevision } from "@/server/builds/solve";
+import { assertLinkOpen } from "@/server/classes/withheld";
 import { hashShareToken } from "./tokens";
 
 export interface SharedBudget {
@@ -22,7 +23,8 @@ export interface SharedBudget {
 
 /**
  * What a share token opens: one revision of one build, read-only, without sign-in. Unknown,
- * revoked and expired tokens are refused with a message saying which (never a 500).
+ * revoked and expired tokens are refused with a message saying which (never a 500); so is a
+ * link to a build whose worked example's values are still questions.
  */
 export async function openShare({ token }: { token: string }): Promise<SharedBudget> {
   const unknown = new ApiError("not_found:share", "This share link does not exist.", "token");
@@ -37,6 +39,7 @@ export async function openShare({ token }: { token: string }): Promise<SharedBud
   const build = owner ? await getBuild({ id: link.buildId, viewer: { id: owner.id, role: owner.role } }) : undefined;
   const revision = build ? await getRevision({ buildId: build.id, number: link.revisionNumber }) : undefined;
   if (!owner || !build || !revision) throw unknown;
+  await assertLinkOpen({ buildId: build.id });
   // The parts as the owner sees them: the evaluation may quote any of these; only public
   // ones are published through a link, the rest are withheld from what it carries.
   const parts = await loadDesignParts({ design: revision.design, viewer: { id: owner.id, role: owner.role } });

@@ -62,9 +62,11 @@ describe("Bench runs in chromium", () => {
     // Use it in a build: a copy of the demo lantern's design with this sink.
     const list = (await (await page.request.get(`${BASE_URL}/api/v1/builds`)).json()) as { mine: { id: string; title: string }[] };
     const source = list.mine.find((b) => b.title === "Square lantern, 2-cell Li-ion")!;
-    const detail = (await (await page.request.get(`${BASE_URL}/api/v1/builds/${source.id}`)).json()) as { revision: { design: { lightEngine: { heatsink: { partId: string } } } } };
+    const detail = (await (await page.request.get(`${BASE_URL}/api/v1/builds/${source.id}`)).json()) as { revision: { design: { lightEngine: { heatsink: { partId: string } }; calibration?: unknown } } };
     const design = structuredClone(detail.revision.design);
     design.lightEngine.heatsink = { partId };
+    // The demo lantern's current revision is calibrated to its own warm-up; this build starts from the model as it stands.
+    delete design.calibration;
     const created = await page.request.post(`${BASE_URL}/api/v1/builds`, { data: { title: `${title} lantern`, design }, headers: { origin: BASE_URL } });
     expect(created.status()).toBe(201);
     const buildId = ((await created.json()) as { build: { id: string } }).build.id;
@@ -111,5 +113,20 @@ describe("Bench runs in chromium", () => {
     await page.getByTestId("calibration-note").waitFor();
     await expect.poll(() => page.getByText("Budget · revision 2").count()).toBe(1);
     await page.screenshot({ path: `${ARTEFACTS}/bench-budget-calibrated.png`, fullPage: true });
+
+    // The Heat path shows the calibration the revision carries; the maker takes it out and saves.
+    await page.goto(`${BASE_URL}/builds/${buildId}`);
+    const section = page.getByTestId("calibration-section");
+    await section.waitFor();
+    expect(await section.textContent()).toMatch(/The inside air's coefficient \(convection to and from the air inside the housing\) is the model's × \d\.\d\d \(95 % interval \d\.\d\d–\d\.\d\d\), fitted to the warm-up/);
+    await section.screenshot({ path: `${ARTEFACTS}/bench-heat-path-calibration.png` });
+    await section.getByRole("button", { name: "Remove the calibration" }).click();
+    await page.getByTestId("calibration-removed").waitFor();
+    await page.getByRole("button", { name: "Save as revision 3" }).click();
+    await page.getByRole("status").filter({ hasText: "Saved as revision 3." }).waitFor({ timeout: 60_000 });
+    await expect.poll(() => section.count()).toBe(0);
+    await page.goto(`${BASE_URL}/builds/${buildId}/budget`);
+    await page.getByText("Budget · revision 3").waitFor();
+    expect(await page.getByTestId("calibration-note").count()).toBe(0);
   });
 });

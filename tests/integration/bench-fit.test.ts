@@ -59,6 +59,17 @@ describe("POST /api/v1/bench/fit", () => {
     }
   });
 
+  it("100,000 readings are refused by count, naming the readings; a body past the route's size names them too", async () => {
+    const many = Array.from({ length: 100_000 }, (_, i) => ({ tS: i + 1, tempC: 30 + i / 1e4 }));
+    const r = await anyone.post("/api/v1/bench/fit", { ambientC: 25, heatW: 7, readings: many });
+    expect(r.status).toBe(400);
+    expect(r.body.error).toMatchObject({ path: "readings", message: expect.stringMatching(/at most 99,999 readings/) });
+    const huge = Array.from({ length: 99_000 }, (_, i) => ({ tS: `${i + 1} s`, tempC: `${(30 + i / 1e4).toFixed(4)} °C`, note: "x".repeat(60) }));
+    const big = await anyone.post("/api/v1/bench/fit", { ambientC: 25, heatW: 7, readings: huge });
+    expect(big.status).toBe(413);
+    expect(big.body.error).toMatchObject({ path: "readings", message: expect.stringMatching(/^The readings are over 8 MB as sent: a run takes at most 99,999 readings\./) });
+  });
+
   it("malformed JSON is a 400", async () => {
     const r = await anyone.request("POST", "/api/v1/bench/fit", "{not json");
     expect(r.status).toBe(400);

@@ -88,6 +88,70 @@ describe("hidden values stay hidden on every path", () => {
   });
 });
 
+describe("no other path to the same build gives the questions away", () => {
+  it("an exercise starting from the example's build cannot be started until the values are revealed; the instructor is told why", async () => {
+    const cls = await newClass();
+    const { buildId, exampleId } = await hiddenExample(cls.id, "Starter behind questions");
+    const student = await newStudent(cls.joinCode, "questions-starter");
+    const x = await instructor.post(`/api/v1/classes/${cls.id}/exercises`, { title: "Cool the driver", buildId, dueAt: new Date(Date.now() + 86_400_000).toISOString() });
+    expect(x.status, JSON.stringify(x.body)).toBe(201);
+    expect(x.body.warning).toMatch(/Students can start this exercise once you reveal the values of the worked example “Starter behind questions”/);
+    const exerciseId = body<{ id: string }>(x, "exercise").id;
+    const ownBuilds = async () => withTestDb(async (c) => ((await c.query("SELECT count(*) AS n FROM build WHERE owner_id = ?", [student.id]))[0] as { n: number }[])[0]!.n);
+
+    // Refused with the reason, and no copy written.
+    const start = await student.client.post(`/api/v1/exercises/${exerciseId}/start`);
+    expect(start.status).toBe(409);
+    expect(start.body.error).toMatchObject({ code: "conflict:exercise", message: expect.stringMatching(/starts from the build of the worked example “Starter behind questions”, whose values are still questions/) });
+    expect(await ownBuilds()).toBe(0);
+    const page = await student.client.get(`/classes/${cls.id}/exercises/${exerciseId}`);
+    expect(String(page.body.text)).toContain("whose values are still questions");
+    expect(String(page.body.text)).not.toContain("Start (make my own copy)");
+
+    // The instructor starts it (they see the values anyway); once revealed, the student does too.
+    expect((await instructor.post(`/api/v1/exercises/${exerciseId}/start`)).status).toBe(201);
+    expect((await instructor.patch(`/api/v1/examples/${exampleId}`, { reveal: true })).status).toBe(200);
+    expect((await student.client.post(`/api/v1/exercises/${exerciseId}/start`)).status).toBe(201);
+    expect(await ownBuilds()).toBe(1);
+
+    // Hiding the values again: the instructor is told that a student already holds a copy.
+    expect((await instructor.patch(`/api/v1/examples/${exampleId}`, { reveal: false })).status).toBe(200);
+    const examplePage = await instructor.get(`/classes/${cls.id}/examples/${exampleId}`);
+    expect(String(examplePage.body.text)).toMatch(/1 student already has their own copy of this example(&#x27;|')s build/);
+  });
+
+  it("share links of the build and of a review of it stay closed while the values are questions, and the owner is told why", async () => {
+    const cls = await newClass();
+    const { buildId, exampleId } = await hiddenExample(cls.id, "Shared behind questions");
+    const anonymous = new Client();
+    const made = await instructor.post(`/api/v1/builds/${buildId}/shares`, { revision: 1 });
+    expect(made.status, JSON.stringify(made.body)).toBe(201);
+    const token = body<{ token: string }>(made, "share").token;
+    const review = await instructor.post(`/api/v1/builds/${buildId}/reviews`, { reviewerEmail: "reviewer@sinkwise.test" });
+    expect(review.status, JSON.stringify(review.body)).toBe(201);
+    const reviewShare = await instructor.post(`/api/v1/reviews/${body<{ id: string }>(review, "review").id}/shares`, {});
+    expect(reviewShare.status, JSON.stringify(reviewShare.body)).toBe(201);
+    const reviewToken = body<{ token: string }>(reviewShare, "share").token;
+
+    const opened = await anonymous.get(`/api/v1/share/${token}`);
+    expect(opened.status).toBe(409);
+    expect(opened.body.error).toMatchObject({ code: "conflict:share", message: expect.stringMatching(/values are still questions for a class/) });
+    expect(JSON.stringify(opened.body)).not.toContain("temperaturesC");
+    const openedReview = await anonymous.get(`/api/v1/review-share/${reviewToken}`);
+    expect(openedReview.status).toBe(409);
+    expect(JSON.stringify(openedReview.body)).not.toContain("scenarios");
+    const sharedPage = await anonymous.get(`/share/${token}`);
+    expect(String(sharedPage.body.text)).toContain("Try the link again after the values are revealed.");
+    const heatPath = await instructor.get(`/builds/${buildId}`);
+    expect(String(heatPath.body.text)).toContain("links to this build do not open: they would show the answers");
+
+    expect((await instructor.patch(`/api/v1/examples/${exampleId}`, { reveal: true })).status).toBe(200);
+    expect((await anonymous.get(`/api/v1/share/${token}`)).status).toBe(200);
+    expect((await anonymous.get(`/api/v1/review-share/${reviewToken}`)).status).toBe(200);
+    expect(String((await instructor.get(`/builds/${buildId}`)).body.text)).not.toContain("they would show the answers");
+  });
+});
+
 describe("answer checks are rate limited", () => {
   it("20 checks per question in ten minutes, counted atomically under a burst; 429 names the field, and another question has its own allowance", async () => {
     const cls = await newClass();

@@ -305,6 +305,11 @@ describe("access", () => {
     expect((await anon.get("/api/v1/classes")).status).toBe(401);
     expect((await anon.get(`/api/v1/classes/${cls.id}`)).status).toBe(401);
     expect((await anon.get(`/api/v1/examples/${exampleId}`)).status).toBe(401);
+    expect((await anon.get(`/api/v1/exercises/${exerciseId}`)).status).toBe(401);
+    expect((await anon.get(`/api/v1/exercises/${exerciseId}/handins`)).status).toBe(401);
+    expect((await anon.get(`/api/v1/handins/${handinA}`)).status).toBe(401);
+    expect((await anon.post(`/api/v1/examples/${exampleId}/fork`)).status).toBe(401);
+    expect((await anon.get(`/api/v1/builds/${exampleBuild}`)).status).toBe(401);
     const on = await instructor.patch(`/api/v1/examples/${exampleId}`, { visibility: "link" });
     const url = body<string>(on, "linkUrl");
     const token = url.split("/examples/link/")[1]!;

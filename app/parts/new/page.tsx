@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { KIND_OPTIONS } from "@/components/parts/labels";
-import { PartForm } from "@/components/parts/part-form";
+import { PartForm } from "@/components/parts/part-form-lazy";
 import { PART_KINDS, type PartKind } from "@/lib/parts";
 import { requirePageUser } from "@/server/auth/session";
 

@@ -10,6 +10,7 @@ import { listComments } from "@/db/queries/reviews";
 import { ApiError } from "@/lib/http/api-error";
 import { anchorLabel, heatPathAnchors } from "@/lib/reviews/anchors";
 import { requirePageUser } from "@/server/auth/session";
+import { linkWarning } from "@/server/classes/withheld";
 import { reviewedSolve } from "@/server/reviews/anchors";
 import { loadReview } from "@/server/reviews/load";
 
@@ -28,6 +29,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
       throw e;
     })]);
   const evaluation = solved?.evaluation ?? null;
+  const shareWarning = role !== "admin" ? await linkWarning({ buildId: review.buildId }) : null;
   const anchors = evaluation ? heatPathAnchors(evaluation) : { nodes: [], links: [], figures: [] };
   const thread: CommentItem[] = comments.map((c) => ({ ...c, target: anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), createdAt: c.createdAt.toISOString() }));
   const ambientC = evaluation?.scenarios[0]?.network?.ambientC ?? 25;
@@ -69,7 +71,7 @@ export default async function ReviewPage({ params }: { params: Promise<{ id: str
 
       {role !== "admin" && (
         <section className="rounded-lg border border-line bg-white/60 p-4" data-testid="review-share">
-          <SharePanel scope={{ kind: "review", reviewId: review.id }} />
+          <SharePanel scope={{ kind: "review", reviewId: review.id }} warning={shareWarning} />
         </section>
       )}
 

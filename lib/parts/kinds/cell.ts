@@ -1,9 +1,9 @@
-import { z } from "zod";
-import { buildSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { CellSpecs } from "../kind-schemas";
 import type { PartNote } from "../notes";
 
 export const CELL_CHEMISTRIES = ["li-ion", "lifepo4", "nimh"] as const;
-const MILLIOHM = { math: "mohm", label: "mΩ" } as const;
+const MILLIOHM = { math: "mohm", label: "mΩ", scale: 1e-3 } as const;
 
 export const CELL_FIELDS = [
   { key: "chemistry", label: "Chemistry", type: "choice", options: CELL_CHEMISTRIES, required: true, help: "li-ion (3.6–3.7 V nominal), lifepo4 (3.2 V) or nimh (1.2 V)." },
@@ -22,27 +22,11 @@ export const CELL_FIELDS = [
 ] as const satisfies readonly FieldDef[];
 
 type Window = readonly [min: "chargeTempMinC" | "dischargeTempMinC", max: "chargeTempMaxC" | "dischargeTempMaxC"];
-const WINDOWS: readonly Window[] = [
+export const WINDOWS: readonly Window[] = [
   ["chargeTempMinC", "chargeTempMaxC"],
   ["dischargeTempMinC", "dischargeTempMaxC"],
 ];
 
-export const cellSpecsSchema = buildSpecsSchema(CELL_FIELDS).superRefine((specs, ctx) => {
-  if (!(specs.cutoffVoltageV < specs.nominalVoltageV)) {
-    ctx.addIssue({ code: "custom", path: ["cutoffVoltageV"], message: "must be below the nominal voltage" });
-  }
-  if (!(specs.nominalVoltageV < specs.chargeEndVoltageV)) {
-    ctx.addIssue({ code: "custom", path: ["chargeEndVoltageV"], message: "must be above the nominal voltage" });
-  }
-  for (const [min, max] of WINDOWS) {
-    const low = specs[min];
-    const high = specs[max];
-    if (low !== undefined && high !== undefined && !(low < high)) {
-      ctx.addIssue({ code: "custom", path: [max], message: "must be above the minimum of the window" });
-    }
-  }
-});
-export type CellSpecs = z.output<typeof cellSpecsSchema>;
 
 export function cellNotes(specs: CellSpecs): PartNote[] {
   const notes: PartNote[] = [];
@@ -55,3 +39,5 @@ export function cellNotes(specs: CellSpecs): PartNote[] {
   }
   return notes;
 }
+
+export type { CellSpecs };

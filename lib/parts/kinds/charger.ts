@@ -1,5 +1,5 @@
-import { z } from "zod";
-import { buildSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { ChargerSpecs } from "../kind-schemas";
 import type { PartNote } from "../notes";
 
 export const CHARGER_FIELDS = [
@@ -11,8 +11,6 @@ export const CHARGER_FIELDS = [
   { key: "parallelCount", label: "Count in parallel", type: "quantity", quantity: "count", required: false, min: 1, max: 16, help: "Number of identical chargers working in parallel on the pack (1 if not given)." },
 ] as const satisfies readonly FieldDef[];
 
-export const chargerSpecsSchema = buildSpecsSchema(CHARGER_FIELDS);
-export type ChargerSpecs = z.output<typeof chargerSpecsSchema>;
 
 export function chargerNotes(specs: ChargerSpecs): PartNote[] {
   if (specs.topology === "switching" && specs.efficiency === undefined) {
@@ -20,3 +18,5 @@ export function chargerNotes(specs: ChargerSpecs): PartNote[] {
   }
   return [];
 }
+
+export type { ChargerSpecs };

@@ -1,5 +1,5 @@
-import { z } from "zod";
-import { buildSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { DriverSpecs } from "../kind-schemas";
 import type { PartNote } from "../notes";
 
 export const DRIVER_TOPOLOGIES = ["linear", "buck", "boost"] as const;
@@ -14,15 +14,6 @@ export const DRIVER_FIELDS = [
   { key: "groundPlaneAreaM2", label: "Ground-plane area", type: "quantity", quantity: "area", required: false, min: 0, max: 1, help: "Exposed ground plane that can be pressed against metal to shed heat." },
 ] as const satisfies readonly FieldDef[];
 
-export const driverSpecsSchema = buildSpecsSchema(DRIVER_FIELDS).superRefine((specs, ctx) => {
-  if (specs.inputVoltageMinV > specs.inputVoltageMaxV) {
-    ctx.addIssue({ code: "custom", path: ["inputVoltageMaxV"], message: "must not be below the minimum input voltage" });
-  }
-  if (specs.groundPlaneAreaM2 !== undefined && specs.boardAreaM2 !== undefined && specs.groundPlaneAreaM2 > 2 * specs.boardAreaM2) {
-    ctx.addIssue({ code: "custom", path: ["groundPlaneAreaM2"], message: "must not exceed both sides of the board" });
-  }
-});
-export type DriverSpecs = z.output<typeof driverSpecsSchema>;
 
 export function driverNotes(specs: DriverSpecs): PartNote[] {
   const notes: PartNote[] = [];
@@ -31,3 +22,5 @@ export function driverNotes(specs: DriverSpecs): PartNote[] {
   }
   return notes;
 }
+
+export type { DriverSpecs };

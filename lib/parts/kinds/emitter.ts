@@ -1,4 +1,5 @@
-import { buildSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { EmitterSpecs } from "../kind-schemas";
 import type { PartNote } from "../notes";
 
 export const EMITTER_FIELDS = [
@@ -14,8 +15,6 @@ export const EMITTER_FIELDS = [
   { key: "boardWidthM", label: "Board width", type: "quantity", quantity: "length", required: false, gt: 0, max: 1, help: "Board width; equal to the length for a round or square board." },
 ] as const satisfies readonly FieldDef[];
 
-export const emitterSpecsSchema = buildSpecsSchema(EMITTER_FIELDS);
-export type EmitterSpecs = import("zod").output<typeof emitterSpecsSchema>;
 
 export function emitterNotes(specs: EmitterSpecs): PartNote[] {
   const notes: PartNote[] = [];
@@ -29,3 +28,5 @@ export function emitterNotes(specs: EmitterSpecs): PartNote[] {
   }
   return notes;
 }
+
+export type { EmitterSpecs };

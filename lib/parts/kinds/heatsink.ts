@@ -1,5 +1,5 @@
-import { z } from "zod";
-import { buildVariantSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { HeatsinkSpecs } from "../kind-schemas";
 import { FINISHES } from "../materials";
 import type { PartNote } from "../notes";
 
@@ -31,7 +31,7 @@ export const HEATSINK_FIELDS = [
   { key: "heatCapacityJPerK", label: "Heat capacity", type: "quantity", quantity: "heatCapacity", required: false, gt: 0, max: 1000000, help: "Heat it takes to warm the sink by 1 K, for warm-up time; measured on the bench or known. Used instead of mass × specific heat when given." },
 ] as const satisfies readonly FieldDef[];
 
-const FIN_FIELDS = ["finHeightM", "finThicknessM"] as const;
+export const FIN_FIELDS = ["finHeightM", "finThicknessM"] as const;
 
 /**
  * The clear gap between n straight fins of thickness t spread over a base of width w:
@@ -43,27 +43,6 @@ export function workedOutFinGap(w: number, n: number, t: number): number | null 
   return gap > 0 ? gap : null;
 }
 
-/**
- * A sink described by its geometry: a gap between fins left empty is worked out from the
- * base width, the fin count and the fin thickness (fins that do not fit on the base are
- * left without a gap; the evaluation names the fin count).
- */
-export const heatsinkSpecsSchema = buildVariantSpecsSchema(HEATSINK_FIELDS, "rating")
-  .superRefine((specs, ctx) => {
-    if (specs.rating !== "geometry") return;
-    if (specs.material === undefined) ctx.addIssue({ code: "custom", path: ["material"], message: "required when the heatsink is described by its geometry" });
-    if (specs.finCount > 0) {
-      for (const key of FIN_FIELDS) {
-        if (specs[key] === undefined) ctx.addIssue({ code: "custom", path: [key], message: "required when there are fins" });
-      }
-    }
-  })
-  .transform((specs) => {
-    if (specs.rating !== "geometry" || specs.finSpacingM !== undefined || specs.finCount < 1 || specs.finThicknessM === undefined) return specs;
-    const gap = specs.finCount === 1 ? specs.baseWidthM : workedOutFinGap(specs.baseWidthM, specs.finCount, specs.finThicknessM);
-    return gap === null || gap <= 0 ? specs : { ...specs, finSpacingM: gap };
-  });
-export type HeatsinkSpecs = z.output<typeof heatsinkSpecsSchema>;
 
 export function heatsinkNotes(specs: HeatsinkSpecs): PartNote[] {
   const notes: PartNote[] = [];
@@ -87,3 +66,5 @@ export function heatsinkNotes(specs: HeatsinkSpecs): PartNote[] {
   }
   return notes;
 }
+
+export type { HeatsinkSpecs };

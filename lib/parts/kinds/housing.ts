@@ -1,5 +1,5 @@
-import { z } from "zod";
-import { buildSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { HousingSpecs } from "../kind-schemas";
 import type { PartNote } from "../notes";
 
 export const HOUSING_FIELDS = [
@@ -15,21 +15,6 @@ export const HOUSING_FIELDS = [
   { key: "massKg", label: "Mass", type: "quantity", quantity: "mass", required: false, gt: 0, max: 100, help: "Mass of the housing, for warm-up time." },
 ] as const satisfies readonly FieldDef[];
 
-export const housingSpecsSchema = buildSpecsSchema(HOUSING_FIELDS).superRefine((specs, ctx) => {
-  if (specs.innerAreaM2 !== undefined && specs.innerAreaM2 > specs.outerAreaM2) {
-    ctx.addIssue({ code: "custom", path: ["innerAreaM2"], message: "must not exceed the outer area" });
-  }
-  if (specs.secondMaterial !== undefined && specs.secondAreaM2 === undefined) {
-    ctx.addIssue({ code: "custom", path: ["secondAreaM2"], message: "required when a second material is given" });
-  }
-  if (specs.secondAreaM2 !== undefined && specs.secondMaterial === undefined) {
-    ctx.addIssue({ code: "custom", path: ["secondMaterial"], message: "required when the second material's area is given" });
-  }
-  if (specs.secondAreaM2 !== undefined && specs.secondAreaM2 >= specs.outerAreaM2) {
-    ctx.addIssue({ code: "custom", path: ["secondAreaM2"], message: "must be less than the outer area (the two materials' areas add up to it)" });
-  }
-});
-export type HousingSpecs = z.output<typeof housingSpecsSchema>;
 
 export function housingNotes(specs: HousingSpecs): PartNote[] {
   if (specs.emissivity === undefined) {
@@ -37,3 +22,5 @@ export function housingNotes(specs: HousingSpecs): PartNote[] {
   }
   return [];
 }
+
+export type { HousingSpecs };

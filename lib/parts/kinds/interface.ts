@@ -1,5 +1,5 @@
-import { z } from "zod";
-import { buildVariantSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { InterfaceSpecs } from "../kind-schemas";
 import type { PartNote } from "../notes";
 
 /** A paste or pad is given either as a bulk conductivity and bond line, or as a resistance per area. */
@@ -10,8 +10,6 @@ export const INTERFACE_FIELDS = [
   { key: "resistancePerAreaKM2PerW", label: "Resistance per area", type: "quantity", quantity: "resistancePerArea", required: true, gt: 0, max: 0.1, variant: "perArea", help: "Area-specific thermal resistance, e.g. 0.5 K·cm²/W." },
 ] as const satisfies readonly FieldDef[];
 
-export const interfaceSpecsSchema = buildVariantSpecsSchema(INTERFACE_FIELDS, "specifiedAs");
-export type InterfaceSpecs = z.output<typeof interfaceSpecsSchema>;
 
 export function interfaceNotes(specs: InterfaceSpecs): PartNote[] {
   // Pastes and pads sit between about 0.5 and 15 W/(m·K); far above that is a solder or a typo.
@@ -20,3 +18,5 @@ export function interfaceNotes(specs: InterfaceSpecs): PartNote[] {
   }
   return [];
 }
+
+export type { InterfaceSpecs };

@@ -1,5 +1,5 @@
-import { z } from "zod";
-import { buildSpecsSchema, type FieldDef } from "../fields";
+import type { FieldDef } from "../fields";
+import type { SpreaderSpecs } from "../kind-schemas";
 import type { PartNote } from "../notes";
 
 export const SPREADER_FIELDS = [
@@ -9,9 +9,9 @@ export const SPREADER_FIELDS = [
   { key: "lengthM", label: "Length", type: "quantity", quantity: "length", required: true, gt: 0, max: 2, help: "Length along the heat flow, between the two parts it joins." },
 ] as const satisfies readonly FieldDef[];
 
-export const spreaderSpecsSchema = buildSpecsSchema(SPREADER_FIELDS);
-export type SpreaderSpecs = z.output<typeof spreaderSpecsSchema>;
 
 export function spreaderNotes(_specs: SpreaderSpecs): PartNote[] {
   return [];
 }
+
+export type { SpreaderSpecs };

@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { KIND_DEFINITIONS, PART_KINDS } from "@/lib/parts";
+import { KIND_SCHEMAS, PART_KINDS } from "@/lib/parts";
 import { buildDesignSchema, evaluateBuild, resolveBuild } from "@/lib/retrofit";
 import { STARTER_PARTS, STARTING_POINTS, startingDesign } from "@/lib/starter";
 
 describe("the starter bin", () => {
   it("every part reads with its kind's own schema (the same checks as the Parts bin)", () => {
     for (const p of STARTER_PARTS) {
-      const r = KIND_DEFINITIONS[p.kind].specsSchema.safeParse(p.specs);
+      const r = KIND_SCHEMAS[p.kind].safeParse(p.specs);
       expect(r.success, `${p.key}: ${JSON.stringify(r.error?.issues)}`).toBe(true);
     }
   });
@@ -31,7 +31,7 @@ describe("the starter bin", () => {
 
   it("the salvaged sinks' gaps between fins fit their base width", () => {
     for (const p of STARTER_PARTS.filter((x) => x.kind === "heatsink")) {
-      const s = KIND_DEFINITIONS.heatsink.specsSchema.parse(p.specs) as { rating: string; baseWidthM: number; finCount: number; finThicknessM: number; finSpacingM: number };
+      const s = KIND_SCHEMAS.heatsink.parse(p.specs) as { rating: string; baseWidthM: number; finCount: number; finThicknessM: number; finSpacingM: number };
       expect(s.finCount * s.finThicknessM + (s.finCount - 1) * s.finSpacingM).toBeCloseTo(s.baseWidthM, 3);
     }
   });

@@ -6,7 +6,9 @@ import {
   METRIC_PREFERENCES,
   parseQuantity,
   QUANTITIES,
+  QUANTITY_INFO,
   toDisplay,
+  unitChoiceOf,
   unitField,
   fieldErrors,
   type Quantity,
@@ -39,9 +41,52 @@ describe("formatQuantity", () => {
     expect(formatQuantity(Number.NaN, "length", METRIC_PREFERENCES)).toBe("—");
   });
   it("a forced unit keeps a table column in one unit", () => {
-    const mm = { math: "mm", label: "mm" };
+    const mm = { math: "mm", label: "mm", scale: 1e-3 };
     expect(formatQuantity(1.5, "length", METRIC_PREFERENCES, { unit: mm })).toBe("1500 mm");
     expect(toDisplay(0.0254, "length", METRIC_PREFERENCES, mm).value).toBeCloseTo(25.4, 12);
+  });
+});
+
+describe("display units without a unit library", () => {
+  // The browser shows stored values with each unit's scale and offset; the server's parser
+  // (mathjs) is the reference they must agree with, for every display unit of every quantity.
+  it("every display unit's scale and offset agree with the parser", () => {
+    for (const quantity of QUANTITIES) {
+      const info = QUANTITY_INFO[quantity];
+      for (const unit of [...info.metric, ...(info.imperial ?? []), info.bare]) {
+        if (unit.label === "") continue;
+        const zero = parseQuantity(`0 ${unit.label}`, quantity);
+        const one = parseQuantity(`1 ${unit.label}`, quantity);
+        if (!zero.ok || !one.ok) throw new Error(`${quantity} ${unit.label} does not parse`);
+        const offset = quantity === "temperature" ? (unit.offset ?? 0) : 0;
+        // The parser keeps 12 significant digits, so agreement is to about 1e-10 relative.
+        expect(Math.abs(one.si - zero.si - unit.scale) / unit.scale, `${quantity} in ${unit.label}`).toBeLessThan(1e-9);
+        expect(zero.si, `${quantity} zero in ${unit.label}`).toBeCloseTo(offset, 9);
+      }
+    }
+  });
+  it("a stored value shown in any unit parses back to itself", () => {
+    for (const quantity of QUANTITIES) {
+      const info = QUANTITY_INFO[quantity];
+      if (info.storage === "") continue;
+      fc.assert(
+        fc.property(fc.double({ min: 1e-3, max: 1e3, noNaN: true }), (stored) => {
+          for (const unit of [...info.metric, ...(info.imperial ?? [])]) {
+            const shown = toDisplay(stored, quantity, METRIC_PREFERENCES, unit).value;
+            const back = parseQuantity(`${shown} ${unit.label}`, quantity);
+            expect(back.ok && Math.abs(back.si - stored) <= 1e-9 * Math.max(1, Math.abs(stored))).toBe(true);
+          }
+        }),
+        { numRuns: 50 },
+      );
+    }
+  });
+  it("a unit named in a header reads its scale and offset from the parser", () => {
+    const f = unitChoiceOf("°F", "temperature");
+    expect(f && toDisplay(100, "temperature", METRIC_PREFERENCES, f).value).toBeCloseTo(212, 6);
+    const g = unitChoiceOf("g", "mass");
+    expect(g?.scale).toBeCloseTo(1e-3, 15);
+    expect(unitChoiceOf("g", "length")).toBeNull();
   });
 });
 

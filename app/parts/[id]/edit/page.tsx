@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { redirect } from "next/navigation";
-import { PartForm } from "@/components/parts/part-form";
+import { PartForm } from "@/components/parts/part-form-lazy";
 import { loadPartPage } from "@/server/parts/api";
 
 export const metadata = { title: "Edit part" };

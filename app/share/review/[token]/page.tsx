@@ -20,7 +20,7 @@ export default async function SharedReviewPage({ params }: { params: Promise<{ t
       <section className="mx-auto max-w-lg space-y-2 rounded-lg border border-line bg-white/60 p-6">
         <h1 className="text-xl font-semibold">This link does not open anything</h1>
         <p role="alert" className="text-sm text-over">{shared.message}</p>
-        <p className="text-sm text-ink-soft">Ask the reviewer or the build&apos;s owner for a new link.</p>
+        <p className="text-sm text-ink-soft">{shared.code === "conflict:share" ? "Try the link again after the values are revealed." : "Ask the reviewer or the build\u2019s owner for a new link."}</p>
       </section>
     );
   }

@@ -1,4 +1,4 @@
-import { fitInputSchema, fitWarmUp } from "@/lib/bench";
+import { fitInputSchema, fitWarmUp, READINGS_BODY_LIMIT } from "@/lib/bench";
 import { json, readJson, route } from "@/server/route";
 
 /** Fits a heatsink's resistance and heat capacity to a warm-up: computes and stores nothing, so like the quick check it needs no account. */
@@ -7,5 +7,5 @@ export const POST = route(
     const input = await readJson(request, fitInputSchema, "bench");
     return json(fitWarmUp(input));
   },
-  { stateless: true },
+  { stateless: true, ...READINGS_BODY_LIMIT },
 );

@@ -1,4 +1,5 @@
 import { listVisibleRuns } from "@/server/bench/load";
+import { READINGS_BODY_LIMIT } from "@/lib/bench/schema";
 import { saveRunSchema } from "@/lib/bench/run-schema";
 import { runSummaryJson } from "@/server/bench/json";
 import { saveRun } from "@/server/bench/save";
@@ -18,4 +19,4 @@ export const POST = route(async (request) => {
   const input = await readJson(request, saveRunSchema, "bench_run");
   const { id, fit } = await saveRun({ input, viewer: user });
   return json({ run: { id, url: `/bench/${id}` }, fit }, 201);
-});
+}, READINGS_BODY_LIMIT);

@@ -8,6 +8,7 @@ import { valuesWithheld } from "@/lib/classroom/access";
 import { requirePageUser } from "@/server/auth/session";
 import { exampleView } from "@/server/classes/examples";
 import { loadExample, orNotFound } from "@/server/classes/load";
+import { copiesWarning } from "@/server/classes/withheld";
 
 export const metadata = { title: "Worked example" };
 
@@ -18,6 +19,7 @@ export default async function ExamplePage({ params }: { params: Promise<{ id: st
   if (cls.id !== id) notFound();
   const view = await exampleView({ example, canTeach: cls.access.canTeach });
   const withheld = valuesWithheld(example, cls.access.canTeach);
+  const copies = cls.access.canTeach ? await copiesWarning({ example }) : null;
   const e = view.example;
   return (
     <article className="space-y-5">
@@ -44,6 +46,7 @@ export default async function ExamplePage({ params }: { params: Promise<{ id: st
           archived={!cls.access.canWrite}
         />
       )}
+      {copies && <p role="note" data-testid="copies-warning" className="no-print rounded border border-tight/40 bg-tight/10 p-2 text-sm">{copies}</p>}
       {!view.canTeach && e.hiddenCount > 0 && !e.revealed && (
         <p className="rounded border border-ember/30 bg-ember-soft/40 p-2 text-sm">
           {e.hiddenCount} value{e.hiddenCount === 1 ? " is" : "s are"} hidden: work {e.hiddenCount === 1 ? "it" : "them"} out and check your answer (within {e.tolerancePercent} %).

@@ -9,6 +9,7 @@ import { getCopy, listHandins } from "@/db/queries/classwork";
 import { requirePageUser } from "@/server/auth/session";
 import { loadExercise, orNotFound } from "@/server/classes/load";
 import { handinJson, roster } from "@/server/classes/roster";
+import { starterWarning, starterWithheldFor } from "@/server/classes/withheld";
 
 export const metadata = { title: "Exercise" };
 
@@ -27,11 +28,12 @@ export default async function ExercisePage({ params }: { params: Promise<{ id: s
     </div>
   );
   if (cls.access.canTeach) {
-    const r = await roster(exercise);
+    const [r, warning] = await Promise.all([roster(exercise), starterWarning({ exercise })]);
     const rows = JSON.parse(JSON.stringify(r.rows));
     return (
       <div className="space-y-5">
         {head}
+        {warning && <p role="note" data-testid="starter-warning" className="rounded border border-tight/40 bg-tight/10 p-2 text-sm">{warning}</p>}
         <section className="space-y-2">
           <h2 className="text-lg font-medium">Roster</h2>
           <p className="text-xs text-ink-soft">Each student&apos;s counting (latest) hand-in; figures are the hottest over the driver modes, with the change against the starter (green cooler, red hotter). Click a heading to sort.</p>
@@ -40,13 +42,13 @@ export default async function ExercisePage({ params }: { params: Promise<{ id: s
       </div>
     );
   }
-  const [copy, mine] = await Promise.all([getCopy({ exerciseId: exercise.id, userId: user.id }), listHandins({ exerciseId: exercise.id, studentId: user.id })]);
+  const [copy, mine, startBlocked] = await Promise.all([getCopy({ exerciseId: exercise.id, userId: user.id }), listHandins({ exerciseId: exercise.id, studentId: user.id }), starterWithheldFor({ exercise, cls, viewer: user })]);
   const copyBuild = copy ? await getBuild({ id: copy.buildId, viewer: user }) : undefined;
   const handins = mine.map((h) => handinJson(h, exercise));
   return (
     <div className="space-y-5">
       {head}
-      <StudentExercise exerciseId={exercise.id} myCopy={copyBuild?.id ?? null} currentRevision={copyBuild?.currentRevision ?? null} dueAt={exercise.dueAt.toISOString()} archived={archived} />
+      <StudentExercise exerciseId={exercise.id} myCopy={copyBuild?.id ?? null} currentRevision={copyBuild?.currentRevision ?? null} dueAt={exercise.dueAt.toISOString()} archived={archived} startBlocked={startBlocked} />
       <section className="space-y-2">
         <h2 className="text-lg font-medium">My hand-ins</h2>
         {handins.length === 0 ? <p className="text-sm text-ink-soft">Nothing handed in yet.</p> : (

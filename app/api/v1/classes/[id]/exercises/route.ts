@@ -4,6 +4,7 @@ import { ApiError } from "@/lib/http/api-error";
 import { requireUser } from "@/server/auth/session";
 import { loadBuild, loadRevision } from "@/server/builds/load";
 import { assertTeaching, loadClass } from "@/server/classes/load";
+import { starterWarning } from "@/server/classes/withheld";
 import { json, readJson, route } from "@/server/route";
 
 type Ctx = { params: Promise<{ id: string }> };
@@ -38,5 +39,6 @@ export const POST = route<Ctx>(async (request, { params }) => {
   const build = await loadBuild({ id: input.buildId, viewer: user });
   const revision = await loadRevision({ build, number: input.revision });
   const id = await createExercise({ classId: cls.id, title: input.title, instructions: input.instructions, starterBuildId: build.id, starterRevision: revision.number, dueAt, createdBy: user.id });
-  return json({ exercise: { id, classId: cls.id, dueAt, starterBuildId: build.id, starterRevision: revision.number } }, 201);
+  const warning = await starterWarning({ exercise: { starterBuildId: build.id, classId: cls.id } });
+  return json({ exercise: { id, classId: cls.id, dueAt, starterBuildId: build.id, starterRevision: revision.number }, warning }, 201);
 });

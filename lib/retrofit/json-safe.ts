@@ -6,7 +6,28 @@ import type { ProblemList } from "./problems";
  * this finds nothing; if it does, the problem list says so instead of a chart breaking.
  */
 export function jsonSafe<T>(value: T, problems: ProblemList, path = "result"): T {
+  // The usual case finds nothing: a look without copying, and the value goes out as it is.
+  if (allFinite(value)) return value;
   return walk(value, problems, [path]) as T;
+}
+
+/** Whether every number inside is finite (reads only; `walk` copies). */
+function allFinite(v: unknown): boolean {
+  if (typeof v === "number") return Number.isFinite(v);
+  if (v === null || typeof v !== "object") return true;
+  if (Array.isArray(v)) {
+    for (let i = 0; i < v.length; i++) {
+      const x: unknown = v[i];
+      if (typeof x === "number" ? !Number.isFinite(x) : typeof x === "object" && x !== null && !allFinite(x)) return false;
+    }
+    return true;
+  }
+  const src = v as Record<string, unknown>;
+  for (const k in src) {
+    const x = src[k];
+    if (typeof x === "number" ? !Number.isFinite(x) : typeof x === "object" && x !== null && !allFinite(x)) return false;
+  }
+  return true;
 }
 
 /**

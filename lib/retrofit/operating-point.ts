@@ -62,7 +62,7 @@ export function modeElectrical(build: ResolvedBuild, e: ResolvedPart<"emitter">,
 }
 
 /** Steady solve that turns engine errors into a problem. */
-export function trySteady(compiled: CompiledBuild, field: string, problems: ProblemList, validate: boolean): SteadyResult | null {
+export function trySteady(compiled: CompiledBuild, field: string, problems: ProblemList, validate: boolean, startC?: Readonly<Record<string, number>>): SteadyResult | null {
   if (validate) {
     const parsed = networkSchema.safeParse(compiled.network);
     if (!parsed.success) {
@@ -72,7 +72,7 @@ export function trySteady(compiled: CompiledBuild, field: string, problems: Prob
     }
   }
   try {
-    return solveSteady(compiled.network);
+    return solveSteady(compiled.network, undefined, startC);
   } catch (err) {
     if (isThermalInputError(err)) {
       problems.add(field, `no steady state: ${err.message}`);
@@ -95,6 +95,7 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
   let tj = build.environment.ambientC;
   let sinkR: number | null = null;
   let sinkRise: number | null = null;
+  let risePass: { used: number; gave: number } | null = null;
   let last: { el: ModeElectrical; compiled: CompiledBuild; steady: SteadyResult; heat: ScenarioHeat } | null = null;
   for (let k = 1; k <= o.maxIterations; k++) {
     const el = modeElectrical(build, e, d, mode, pack, tj);
@@ -111,16 +112,22 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
     const compiled = compileBuild(build, heat, { sinkToAirKPerW: sinkR ?? null, sinkRiseK: sinkRise }, problems);
     if (!compiled) return null;
     if (sinkR === null) sinkR = compiled.sinkEstimateKPerW;
-    const steady = trySteady(compiled, field, problems, k === 1);
+    // Each pass changes the network a little: the last answer is a close start.
+    const steady = trySteady(compiled, field, problems, k === 1, last?.steady.temperaturesC);
     if (!steady) return null;
     const tjNew = steady.temperaturesC.junction ?? tj;
     const newSinkR: number | null = compiled.sinkLink !== null ? pathResistance(compiled.network, steady, sinkLinks(compiled)) : sinkR;
     last = { el, compiled, steady, heat };
-    const riseBefore = sinkRise;
-    if (compiled.sinkLink !== null) sinkRise = declaredRise.at(compiled.network, steady.temperaturesC, compiled.sinkLink);
+    const riseBefore: number | null = sinkRise;
     // Only a declared rating depends on the rise (its correction); a geometry sink's model follows it by itself.
     const declared = build.lightEngine.heatsink?.specs.rating === "declared";
-    const riseMoved = !declared ? 0 : declaredRise.moved(riseBefore, sinkRise ?? 0);
+    let riseMoved = 0;
+    if (compiled.sinkLink !== null) {
+      const gave = declaredRise.at(compiled.network, steady.temperaturesC, compiled.sinkLink);
+      riseMoved = !declared ? 0 : declaredRise.moved(riseBefore, gave);
+      sinkRise = riseBefore !== null ? declaredRise.next(build.lightEngine.heatsink?.specs, risePass, riseBefore, gave) : gave;
+      if (riseBefore !== null) risePass = { used: riseBefore, gave };
+    }
     const moved = Math.abs(tjNew - tj);
     const sinkMoved = sinkR !== null && newSinkR !== null ? Math.abs(newSinkR - sinkR) / sinkR : 0;
     tj = tjNew;

@@ -1,4 +1,4 @@
-import { isThermalInputError, monotoneRoot, solveSteady } from "@/lib/thermal";
+import { isThermalInputError, monotoneRoot, steadyTemperatures } from "@/lib/thermal";
 import { compileBuild, type CompiledBuild, type ScenarioHeat } from "./compile";
 import { chargePlan, DEFAULT_REGULATION_C, type ChargePlan } from "./electrical/charger";
 import { cellHeat, type PackSummary } from "./electrical/pack";
@@ -94,9 +94,13 @@ function throttledCurrent(charger: ResolvedPart<"charger">, count: number, pack:
   if (charger.specs.topology !== "linear" || boardC === undefined) return null;
   const reg = charger.specs.regulationTempC ?? DEFAULT_REGULATION_C;
   if (boardC <= reg) return null;
+  // Each solve starts from the last answer: the networks differ only in the charge's heat.
+  let last: Readonly<Record<string, number>> | undefined;
   const f = (i: number) => {
     const c = compileAt(chargePlan(charger, count, pack, Math.max(i, 1e-6)), new ProblemList());
-    return c ? (solveSteady(c.network, { toleranceK: 1e-4 }).temperaturesC.charger ?? reg) - reg : 0;
+    if (!c) return 0;
+    last = steadyTemperatures(c.network, { toleranceK: 1e-4 }, last);
+    return (last.charger ?? reg) - reg;
   };
   const rated = plan.ratedCurrentA;
   try {

@@ -6,7 +6,7 @@ import { linkModel } from "./link-models";
 import type { Network } from "./schema";
 import { groupLinks } from "./solver/assemble";
 import type { CompiledLink, CompiledNetwork } from "./solver/compiled";
-import { minimumDegreeOrder } from "./solver/ordering";
+import { minimumDegreeOrder, type EliminationOrder } from "./solver/ordering";
 import { scratch } from "./solver/scratch";
 import { checkReferences } from "./validate";
 
@@ -46,7 +46,7 @@ function compileChecked(network: Network, original: Map<string, number>): Compil
   }
   assertPathToAmbient(network, ends);
 
-  const { order, solverIndex, pattern } = minimumDegreeOrder(nodeCount, ends);
+  const { order, solverIndex, pattern } = orderFor(nodeCount, ends);
   // One buffer for the three per-node arrays (see solver/scratch.ts on what each allocation costs).
   const perNode = new Float64Array(3 * nodeCount);
   const capacity = perNode.subarray(0, nodeCount);
@@ -74,6 +74,34 @@ function compileChecked(network: Network, original: Map<string, number>): Compil
   const ids = new Array<string>(nodeCount);
   for (let k = 0; k < nodeCount; k++) ids[k] = network.nodes[order[k]!]!.id;
   return { n: nodeCount, ids, solverIndex, ambientK, capacity, p0, p1, links, pattern, groups: groupLinks(links), linear, network };
+}
+
+/**
+ * The last few elimination orders worked out, with the link ends they were for. A search or
+ * a fixed point solves the same heat path dozens of times with other values (a resistance,
+ * a source): its order and fill pattern, a third of a compilation, are then looked up (the
+ * solvers only read them). Four entries cover a search alternating between the network and
+ * its variant with a link left out.
+ */
+const ORDER_CACHE_SIZE = 4;
+const orderCache: { n: number; ends: Int32Array; order: EliminationOrder }[] = [];
+let orderCacheNext = 0;
+
+function orderFor(n: number, ends: Int32Array): EliminationOrder {
+  for (const c of orderCache) if (c.n === n && sameInts(c.ends, ends)) return c.order;
+  const order = minimumDegreeOrder(n, ends);
+  // `ends` is scratch memory: the entry keeps a copy.
+  const entry = { n, ends: Int32Array.from(ends), order };
+  if (orderCache.length < ORDER_CACHE_SIZE) orderCache.push(entry);
+  else orderCache[orderCacheNext] = entry;
+  orderCacheNext = (orderCacheNext + 1) % ORDER_CACHE_SIZE;
+  return order;
+}
+
+function sameInts(a: Int32Array, b: Int32Array): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
 }
 
 /** Representative of i's set, halving the path on the way. */

@@ -25,9 +25,9 @@ export {
 export { ThermalInputError, isThermalInputError, type ThermalErrorCode } from "./errors";
 export { AMBIENT_ID } from "./ids";
 export { STEFAN_BOLTZMANN, STANDARD_GRAVITY, ZERO_CELSIUS_K, NETWORK_LIMITS, toKelvin, toCelsius } from "./constants";
-export { solveSteady, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
+export { solveSteady, steadyTemperatures, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
 export type { SteadyOptions } from "./solver/steady";
-export { solveTransient, type TransientResult, type Crossing, type TransientSolverSettings } from "./solve-transient";
+export { solveTransient, prepareTransient, type PreparedTransient, type TransientResult, type Crossing, type TransientSolverSettings } from "./solve-transient";
 export { makeTrace, quantity, elementResult, type Trace, type TraceQuantity, type TraceValidity, type ElementResult } from "./trace";
 export { airPropertiesAt, type AirProperties } from "./air-properties";
 export { MATERIALS, getMaterial, emissivityFor, type Material, type Finish } from "./materials";
@@ -44,7 +44,7 @@ export {
 export { naturalConvection, naturalConvectionCoefficient, rayleighNumber, type NaturalConvectionInput, type NaturalConvectionCoefficient } from "./elements/natural-convection";
 export { radiationExchange, type RadiationInput } from "./elements/radiation";
 export { finEfficiency, type FinEfficiency, type FinEfficiencyInput } from "./elements/fin";
-export { finnedHeatsink, evaluateFinnedHeatsink, finnedEnvelopeAreaM2, type FinnedHeatsinkGeometry, type FinnedHeatsinkEvaluation } from "./elements/heatsink";
+export { finnedHeatsink, evaluateFinnedHeatsink, finnedHeatsinkConductance, finnedEnvelopeAreaM2, type FinnedHeatsinkGeometry, type FinnedHeatsinkEvaluation } from "./elements/heatsink";
 export { spreadingResistance, type SpreadingInput, type SpreadingResult } from "./elements/spreading";
 export {
   maxSourcePower,

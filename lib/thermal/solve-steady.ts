@@ -1,9 +1,9 @@
 import { compileNetwork, type CompiledNetwork } from "./compile";
-import { toCelsius } from "./constants";
+import { toCelsius, toKelvin } from "./constants";
 import { ThermalInputError } from "./errors";
 import { setEntry } from "./record";
 import type { LinkType, Network } from "./schema";
-import { resolveSteadyOptions, solveCompiledSteady, type SteadyOptions } from "./solver/steady";
+import { resolveSteadyOptions, solveCompiledSteady, type CompiledSteadySolution, type SteadyOptions } from "./solver/steady";
 
 export interface SteadyLinkResult {
   from: string;
@@ -28,9 +28,45 @@ export interface SteadyResult {
 }
 
 /** Solves the steady state of a network (parsed by `networkSchema`). Throws ThermalInputError for networks it cannot answer. */
-export function solveSteady(network: Network, options?: SteadyOptions): SteadyResult {
-  const compiled = compileNetwork(network);
-  const solution = solveCompiledSteady(compiled, resolveSteadyOptions(options));
+export function solveSteady(network: Network, options?: SteadyOptions, startC?: Readonly<Record<string, number>>): SteadyResult {
+  const { compiled, solution } = solveChecked(network, options, startC);
+  return steadyResult(compiled, solution.t, solution.iterations, solution.residualW);
+}
+
+/**
+ * The steady temperatures alone (°C by node id), with every check `solveSteady` makes: what
+ * a search needs of each of its probes, without the heat of every link.
+ */
+export function steadyTemperatures(network: Network, options?: SteadyOptions, startC?: Readonly<Record<string, number>>): Record<string, number> {
+  return compiledSteadyTemperatures(compileNetwork(network), options, startC);
+}
+
+/** The same for a network compiled already (a search changes one value in it between its probes). */
+export function compiledSteadyTemperatures(compiled: CompiledNetwork, options?: SteadyOptions, startC?: Readonly<Record<string, number>>): Record<string, number> {
+  const { solution } = solveCheckedCompiled(compiled, options, startC);
+  assertPhysical(compiled, solution.t);
+  return temperaturesOf(compiled, solution.t);
+}
+
+function solveChecked(network: Network, options: SteadyOptions | undefined, startC: Readonly<Record<string, number>> | undefined): { compiled: CompiledNetwork; solution: CompiledSteadySolution } {
+  return solveCheckedCompiled(compileNetwork(network), options, startC);
+}
+
+function solveCheckedCompiled(compiled: CompiledNetwork, options: SteadyOptions | undefined, startC: Readonly<Record<string, number>> | undefined): { compiled: CompiledNetwork; solution: CompiledSteadySolution } {
+  const network = compiled.network;
+  const resolved = resolveSteadyOptions(options);
+  // A start near the answer (the last solve of a slightly different network) saves Newton
+  // steps; should it not converge to a stable state, the solve starts over from its own guess.
+  const start = startC ? startKelvin(compiled, startC) : undefined;
+  let solution: CompiledSteadySolution | null = null;
+  if (start) {
+    try {
+      solution = solveCompiledSteady(compiled, resolved, start);
+    } catch (err) {
+      if (!(err instanceof ThermalInputError)) throw err;
+    }
+  }
+  if (!solution || !(solution.converged && solution.stable)) solution = solveCompiledSteady(compiled, resolved);
   if (!solution.converged) {
     throw new ThermalInputError(
       "unprocessable:convergence",
@@ -39,7 +75,18 @@ export function solveSteady(network: Network, options?: SteadyOptions): SteadyRe
     );
   }
   if (!solution.stable) throw runawayError(network);
-  return steadyResult(compiled, solution.t, solution.iterations, solution.residualW);
+  return { compiled, solution };
+}
+
+/** Start temperatures in solver order, kelvin; undefined unless every node has a finite one. */
+function startKelvin(c: CompiledNetwork, startC: Readonly<Record<string, number>>): Float64Array | undefined {
+  const t = new Float64Array(c.n);
+  for (let k = 0; k < c.n; k++) {
+    const v = startC[c.ids[k]!];
+    if (v === undefined || !Number.isFinite(v)) return undefined;
+    t[k] = toKelvin(v);
+  }
+  return t;
 }
 
 /** A steady state exists only as an unstable balance (or not at all): heat grows faster with temperature than the links remove it. */
@@ -55,11 +102,7 @@ export function runawayError(network: Network): ThermalInputError {
 
 /** Builds the public answer from solver-order kelvin temperatures. */
 export function steadyResult(c: CompiledNetwork, t: Float64Array, iterations: number, residualW: number): SteadyResult {
-  for (let i = 0; i < c.n; i++) {
-    if (!Number.isFinite(t[i]!) || !(t[i]! > 0)) {
-      throw new ThermalInputError("unprocessable:solution", `node "${c.ids[i]}" has no physical steady temperature (the sources remove more heat than can reach it)`, `nodes[${c.network.nodes.findIndex((x) => x.id === c.ids[i])}]`);
-    }
-  }
+  assertPhysical(c, t);
   const out = new Float64Array(3);
   let toAmbient = 0;
   const links = c.network.links.map((link, l): SteadyLinkResult => {
@@ -78,9 +121,23 @@ export function steadyResult(c: CompiledNetwork, t: Float64Array, iterations: nu
   });
   let sources = 0;
   for (let i = 0; i < c.n; i++) sources += c.p0[i]! + c.p1[i]! * t[i]!;
+  return { converged: true, iterations, temperaturesC: temperaturesOf(c, t), links, energyBalanceW: sources - toAmbient, residualW };
+}
+
+/** Every node at a finite temperature above absolute zero, or the error naming the first that is not. */
+function assertPhysical(c: CompiledNetwork, t: Float64Array): void {
+  for (let i = 0; i < c.n; i++) {
+    if (!Number.isFinite(t[i]!) || !(t[i]! > 0)) {
+      throw new ThermalInputError("unprocessable:solution", `node "${c.ids[i]}" has no physical steady temperature (the sources remove more heat than can reach it)`, `nodes[${c.network.nodes.findIndex((x) => x.id === c.ids[i])}]`);
+    }
+  }
+}
+
+/** °C by node id, in the network's node order. */
+function temperaturesOf(c: CompiledNetwork, t: Float64Array): Record<string, number> {
   const temperaturesC: Record<string, number> = {};
   const nodes = c.network.nodes;
   for (let i = 0; i < nodes.length; i++) setEntry(temperaturesC, nodes[i]!.id, toCelsius(t[c.solverIndex[i]!]!));
-  return { converged: true, iterations, temperaturesC, links, energyBalanceW: sources - toAmbient, residualW };
+  return temperaturesC;
 }
 

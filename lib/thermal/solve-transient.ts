@@ -1,5 +1,5 @@
 import { labelFor } from "@/lib/messages/plain-issues";
-import { compileNetwork, formatPath } from "./compile";
+import { compileNetwork, formatPath, type CompiledNetwork } from "./compile";
 import { NETWORK_LIMITS, toKelvin, ZERO_CELSIUS_K } from "./constants";
 import { ThermalInputError } from "./errors";
 import { setEntry } from "./record";
@@ -56,12 +56,26 @@ function resolveOptions(network: Network, solverIndex: Int32Array, options: Tran
   };
 }
 
+/** A network compiled once for several warm-up runs (the chunks of a long warm-up, each starting where the last ended). */
+export interface PreparedTransient {
+  solve(options: TransientOptions, settings?: TransientSolverSettings): TransientResult;
+}
+
+/** Compiles the network once; each `solve` is what `solveTransient` answers for it. */
+export function prepareTransient(network: Network): PreparedTransient {
+  const compiled = compileNetwork(network);
+  return { solve: (options, settings = {}) => solveCompiled(network, compiled, options, settings) };
+}
+
 /**
  * Warm-up of a network from ambient (or `initialC`): temperatures at every `stepS` from 0
  * to `durationS`. Nodes without heat capacity follow their neighbours at once, t = 0 included.
  */
 export function solveTransient(network: Network, options: TransientOptions, settings: TransientSolverSettings = {}): TransientResult {
-  const compiled = compileNetwork(network);
+  return solveCompiled(network, compileNetwork(network), options, settings);
+}
+
+function solveCompiled(network: Network, compiled: CompiledNetwork, options: TransientOptions, settings: TransientSolverSettings): TransientResult {
   const resolved = resolveOptions(network, compiled.solverIndex, options, settings);
   const solution = solveCompiledTransient(compiled, resolved);
   const temperaturesC: Record<string, number[]> = {};

@@ -1,4 +1,5 @@
 import "server-only";
+import { after } from "next/server";
 import { getCachedResultText, putCachedResult, type RevisionRow } from "@/db/queries/builds";
 import type { PartRecord } from "@/db/queries/parts";
 import { getPreviousResultText, getSnapshot, getSolverChange, putSnapshotOnce, putSolverChange, type SolverChange } from "@/db/queries/snapshots";
@@ -12,7 +13,7 @@ import { loadDesignParts, type LoadedBuild } from "./load";
  * Bump when the engine or the compiler changes what a result contains or how it is worked
  * out: cached results of another version are recomputed.
  */
-export const SOLVER_VERSION = `e${EVALUATION_VERSION}.7`;
+export const SOLVER_VERSION = `e${EVALUATION_VERSION}.8`;
 
 /** Warm-up curves as the charts draw them, or every node and sample. */
 export type Curves = "chart" | "full";
@@ -94,44 +95,70 @@ function roundedForDisplay(value: unknown): unknown {
 }
 
 /**
+ * Work for after the answer has left (Next's `after`): its CPU time and database writes cost
+ * the caller nothing. Outside a request (a script) it runs on the next turn instead.
+ */
+function afterAnswer(work: () => Promise<void>): void {
+  const run = () =>
+    work().catch((e: unknown) => {
+      console.error("[solve] after the answer:", e instanceof Error ? e.message : e);
+    });
+  try {
+    after(run);
+  } catch {
+    setImmediate(run);
+  }
+}
+
+/**
  * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when it holds this key. The answer is
  * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
  */
-async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number }> {
+async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
+  const keys: Record<Curves, string> = { full: SOLVER_VERSION, chart: `${SOLVER_VERSION}:chart` };
+  const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
   // The snapshot holds the parts as the owner saw them: whoever may see the build (a
   // reviewer, a class member, a share link) gets the owner's Budget, though the owner's
   // private part records themselves stay private (only their effect on the figures shows).
-  const records = await revisionPartRecords({ build, revision });
-  const keys: Record<Curves, string> = { full: SOLVER_VERSION, chart: `${SOLVER_VERSION}:chart` };
-  const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
+  // It is read while the cache is asked, so a miss waits for one round trip, not two.
+  const recordsRead = revisionPartRecords({ build, revision });
+  recordsRead.catch(() => undefined);
   const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: keys[curves] });
   if (hit !== undefined) {
     const solverChange = await getSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
     return { head: { ...base, solverChange, cached: true }, evaluationJson: hit };
   }
+  const records = await recordsRead;
+  // An older solver's result for this revision, asked for while the evaluation runs.
+  const previousRead = getPreviousResultText({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
+  previousRead.catch(() => undefined);
   const t0 = performance.now();
   const full = evaluateRevision({ design: revision.design, records });
   const evaluateMs = performance.now() - t0;
   const shapes: Record<Curves, () => BuildEvaluation> = { full: () => full, chart: () => forCharts(full) };
   const evaluation = shapes[curves]();
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
-  const solverChange = await noteSolverChange(revision.id, full);
-  // Both shapes are cached after the answer has left: a slow or failed cache write costs the
-  // next caller a recomputation, never this caller time or an error.
-  setImmediate(() => {
-    for (const c of ["chart", "full"] as const) {
-      const text = c === curves ? evaluationJson : JSON.stringify(roundedForDisplay(shapes[c]()));
-      putCachedResult({ revisionId: revision.id, cacheKey: keys[c], resultJson: text }).catch((e: unknown) => {
-        console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
-      });
-    }
+  const serializeMs = performance.now() - t0 - evaluateMs;
+  const solverChange = solverChangeFrom(await previousRead, full);
+  // What moved and both shapes are kept after the answer has left: a slow or failed write
+  // costs the next caller a recomputation, never this caller time or an error. The change
+  // goes first, so whoever reads the cached result finds it.
+  afterAnswer(async () => {
+    if (solverChange) await putSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION, change: solverChange });
+    await Promise.all(
+      (["chart", "full"] as const).map((c) => {
+        const text = c === curves ? evaluationJson : JSON.stringify(roundedForDisplay(shapes[c]()));
+        return putCachedResult({ revisionId: revision.id, cacheKey: keys[c], resultJson: text }).catch((e: unknown) => {
+          console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
+        });
+      }),
+    );
   });
-  return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation, evaluateMs };
+  return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation, evaluateMs, serializeMs };
 }
 
-/** Compares a fresh result with the last one an older solver gave, and keeps what moved. */
-async function noteSolverChange(revisionId: string, evaluation: BuildEvaluation): Promise<SolverChange | null> {
-  const previous = await getPreviousResultText({ revisionId, solverVersion: SOLVER_VERSION });
+/** Compares a fresh result with the last one an older solver gave: what moved, or null when there was none. */
+function solverChangeFrom(previous: { solverVersion: string; text: string } | undefined, evaluation: BuildEvaluation): SolverChange | null {
   if (!previous) return null;
   let before: unknown;
   try {
@@ -139,9 +166,7 @@ async function noteSolverChange(revisionId: string, evaluation: BuildEvaluation)
   } catch {
     return null;
   }
-  const change: SolverChange = { previousVersion: previous.solverVersion, changes: figureChanges(before, evaluation) };
-  await putSolverChange({ revisionId, solverVersion: SOLVER_VERSION, change });
-  return change;
+  return { previousVersion: previous.solverVersion, changes: figureChanges(before, evaluation) };
 }
 
 export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
@@ -151,11 +176,12 @@ export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
 
 /**
  * The solve route's body as JSON text (`RevisionSolve`), built around the cached text, and
- * how long the evaluation itself took when it ran (not on a cache hit).
+ * how long the evaluation itself and its serialisation (the chart shape, rounded) took when
+ * they ran (not on a cache hit).
  */
-export async function solveRevisionJson(args: SolveArgs): Promise<{ json: string; evaluateMs?: number }> {
+export async function solveRevisionJson(args: SolveArgs): Promise<{ json: string; evaluateMs?: number; serializeMs?: number }> {
   const r = await solveToText(args);
-  return { json: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs };
+  return { json: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
 }
 
 /** Resolves the design against the part records and runs the evaluation (pure from here on). */

@@ -1,4 +1,4 @@
-import { declaredResistance, makeTrace, type Network, quantity, emissivityFor, finnedEnvelopeAreaM2, finnedHeatsink, getMaterial, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
+import { declaredResistance, makeTrace, type Network, quantity, emissivityFor, finnedEnvelopeAreaM2, finnedHeatsinkConductance, getMaterial, toKelvin, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
 import type { SpecsOfKind } from "@/lib/parts";
 import type { ProblemList } from "../problems";
 import { PLACES, type NetworkBuilder } from "./builder";
@@ -28,16 +28,23 @@ export const CONVECTIVE_SHARE = 0.7;
  * (laminar: h ∝ ΔT^¼), so the convective share of the conductance is scaled by
  * (ΔT/ΔT_rated)^¼; the radiative share is taken as unchanged.
  */
-export function declaredAtRise(s: Extract<HeatsinkSpecs, { rating: "declared" }>, riseK: number | null): { kelvinPerWatt: number; ratedRiseK: number; trace: Trace } {
+type DeclaredSpecs = Extract<HeatsinkSpecs, { rating: "declared" }>;
+
+const ratedRise = (s: DeclaredSpecs): number => s.ratedDeltaK ?? (s.ratedPowerW !== undefined ? s.ratedPowerW * s.sinkToAirKPerW : DEFAULT_RATED_RISE_K);
+
+/** Conductance relative to the rating at a rise: s_c·(ΔT/ΔT_rated)^n + (1 − s_c). */
+const riseFactor = (riseK: number, rated: number): number => CONVECTIVE_SHARE * (riseK / rated) ** LAMINAR_EXPONENT + (1 - CONVECTIVE_SHARE);
+
+export function declaredAtRise(s: DeclaredSpecs, riseK: number | null): { kelvinPerWatt: number; ratedRiseK: number; trace: Trace } {
   const base = declaredResistance({ kelvinPerWatt: s.sinkToAirKPerW, source: "the heatsink's declared sink-to-air resistance, as entered by the part's author" });
-  const rated = s.ratedDeltaK ?? (s.ratedPowerW !== undefined ? s.ratedPowerW * s.sinkToAirKPerW : DEFAULT_RATED_RISE_K);
+  const rated = ratedRise(s);
   const ratedFrom = s.ratedDeltaK !== undefined ? "rated rise from the part" : s.ratedPowerW !== undefined ? "rated rise = rated power × rated resistance" : `no rated rise or power on the part: ${DEFAULT_RATED_RISE_K} K assumed (from memory of heatsink catalogues' usual basis — check against a copy)`;
   // Forced-air ratings are not natural convection: no correction.
   if (s.ratedAirflow === "forced" || riseK === null || !(riseK > 0)) {
     base.trace.notes.push(riseK === null ? "Rating used as declared until the sink's rise is known." : "Rated in forced air: no natural-convection correction.");
     return { kelvinPerWatt: s.sinkToAirKPerW, ratedRiseK: rated, trace: base.trace };
   }
-  const factor = CONVECTIVE_SHARE * (riseK / rated) ** LAMINAR_EXPONENT + (1 - CONVECTIVE_SHARE);
+  const factor = riseFactor(riseK, rated);
   const r = s.sinkToAirKPerW / factor;
   const trace = makeTrace({
     element: "declared-sink",
@@ -66,9 +73,18 @@ export function declaredAtRise(s: Extract<HeatsinkSpecs, { rating: "declared" }>
  * check both step through.
  */
 export const declaredRise = {
-  /** First guess: the given heat through the rating as declared; null for a sink that is not declared. */
+  /**
+   * First guess: the rise at which the given heat through the rating, corrected to that
+   * rise, gives that rise (a few passes of ΔT = P·R(ΔT), which shrink the gap about fourfold
+   * each, R falling with ΔT^¼); null for a sink that is not declared.
+   */
   start(s: HeatsinkSpecs | undefined, heatW: number): number | null {
-    return s?.rating === "declared" ? Math.max(heatW * s.sinkToAirKPerW, 1e-3) : null;
+    if (s?.rating !== "declared") return null;
+    let rise = Math.max(heatW * s.sinkToAirKPerW, 1e-3);
+    if (s.ratedAirflow === "forced") return rise;
+    const rated = ratedRise(s);
+    for (let i = 0; i < 4; i++) rise = Math.max((heatW * s.sinkToAirKPerW) / riseFactor(rise, rated), 1e-3);
+    return rise;
   },
   /** The rise of the sink link's `from` node above its `to` node in a solution. */
   at(network: Network, temperaturesC: Readonly<Record<string, number>>, link: number): number {
@@ -79,6 +95,29 @@ export const declaredRise = {
   /** Relative change between two rises (1 when there was none before). */
   moved(before: number | null, after: number): number {
     return before === null ? 1 : Math.abs(after - before) / Math.max(before, 1e-3);
+  },
+  /**
+   * The rise to compile with next, from this pass (rise compiled with → rise the solve gave)
+   * and the one before: a Newton step on "gave minus used", which lands on the rise that
+   * reproduces itself in a pass or two where plain repetition (the rise the solve gave)
+   * shrinks the gap only about sevenfold each pass. The slope of "gave" is the secant of
+   * the two passes, or in the first pass that of P·R(ΔT) at a fixed heat through the sink
+   * (R ∝ 1/factor). Plain repetition for a sink that is not declared, or when the step
+   * would leave [½, 2] × the rise just given.
+   */
+  next(s: HeatsinkSpecs | undefined, earlier: { used: number; gave: number } | null, used: number, gave: number): number {
+    if (s?.rating !== "declared") return gave;
+    const h = gave - used;
+    let slope: number;
+    if (earlier) slope = used !== earlier.used ? (gave - earlier.gave) / (used - earlier.used) : 0;
+    else if (s.ratedAirflow === "forced") return gave;
+    else {
+      const rated = ratedRise(s);
+      const dFactor = (CONVECTIVE_SHARE * LAMINAR_EXPONENT * (used / rated) ** LAMINAR_EXPONENT) / used;
+      slope = (-gave * dFactor) / riseFactor(used, rated);
+    }
+    const x = slope !== 1 ? used + h / (1 - slope) : gave;
+    return Number.isFinite(x) && x >= 0.5 * gave && x <= 2 * gave ? Math.max(x, 1e-3) : gave;
   },
   /** A relative change below this ends the fixed point. */
   tolerance: 1e-3,
@@ -165,8 +204,9 @@ export function compileSinkToAir(
     const envelope = finnedEnvelopeAreaM2(g);
     const em = sinkEmissivity(s);
     const radiationLink = b.link({ from: "sink", to: sees, type: "radiation", areaM2: envelope, emissivity: em.e }, `heatsink envelope → ${seen} (radiation, ε ${em.e.toFixed(2)})`, field);
-    const est = finnedHeatsink({ ...g, finDirection: direction, surfaceC: guessC + 30, ambientC: guessC });
-    return { link, radiationLink, estimateKPerW: est.kelvinPerWatt };
+    // Only the figure is wanted here (the link's trace is worked out at the solution): no trace.
+    const est = finnedHeatsinkConductance({ ...g, finDirection: direction }, toKelvin(guessC + 30), toKelvin(guessC));
+    return { link, radiationLink, estimateKPerW: Math.min(1 / Math.max(est, 1e-300), Number.MAX_VALUE) };
   }
   // A flat plate (or one fin): its open face convects and radiates. Upright (fins vertical or
   // level): a vertical plate; a level base faces up or down.

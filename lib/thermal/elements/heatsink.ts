@@ -1,8 +1,8 @@
-import { airPropertiesAt, type AirProperties } from "../air-properties";
+import { AIR, airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, STEFAN_BOLTZMANN, toKelvin } from "../constants";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
 import { channelNusselt, CHANNEL_SOURCE, FIN_DIRECTION_SOURCE, FIN_DIRECTIONS, type FinDirection } from "../correlations";
-import { naturalConvectionH } from "../solver/convection-kernel";
+import { coefficientAt, filmAir, FILM_SLOTS, naturalConvectionH, SURFACE_CODE } from "../solver/convection-kernel";
 
 /** Straight-fin heatsink, all lengths in metres; the fins stand as `finDirection` says (default: vertical channels). */
 export interface FinnedHeatsinkGeometry {
@@ -73,30 +73,77 @@ export function finnedEnvelopeAreaM2(g: FinnedHeatsinkGeometry): number {
   return g.baseWidthM * lv + 2 * depth * lv + 2 * g.baseWidthM * depth + (g.backExposed ? g.baseWidthM * lv : 0);
 }
 
-/** The numbers of the model at one pair of temperatures; the solver calls this in its loop, the trace formats it. */
-export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): FinnedHeatsinkEvaluation {
+// Slots of the scratch `finnedCore` writes its intermediates into (the trace reads them; the
+// solver's loop, which calls it several times per link and iteration, reads only the result).
+const S_SPACING = 0;
+const S_FILM = 1;
+const S_EL = 2;
+const S_NU_CH = 3;
+const S_H_NAT_CH = 4;
+const S_H_FORCED_CH = 5;
+const S_H_CH = 6;
+const S_H_OUTER = 7;
+const S_ETA_CH = 8;
+const S_ETA_OUT = 9;
+const S_LC = 10;
+const S_G_FINS_CH = 11;
+const S_G_FINS_OUT = 12;
+const S_G_BASE = 13;
+const S_G_BACK = 14;
+const S_G_RAD = 15;
+const S_ENVELOPE = 16;
+const S_RE = 17;
+const S_RISE = 18;
+const S_LEVEL_FIN = 19;
+const S_UNDERSIDE = 20;
+const SLOTS = 21;
+
+// Module-local copies: a transpiled import is a property getter per read, and this runs in the solver's loop.
+const G = STANDARD_GRAVITY;
+const SIGMA = STEFAN_BOLTZMANN;
+const AIR_K = AIR.k;
+const AIR_NU = AIR.nu;
+const AIR_ALPHA = AIR.alpha;
+const AIR_PR = AIR.pr;
+const AIR_BETA = AIR.beta;
+const film = filmAir;
+const VERTICAL = SURFACE_CODE["vertical-plate"];
+const hNatural = naturalConvectionH;
+const channelNu = channelNusselt;
+const FILM_SCRATCH = new Float64Array(FILM_SLOTS);
+const LOOP_SCRATCH = new Float64Array(SLOTS);
+
+/** Cube rule for assisting flows (Churchill): natural and forced coefficients combined. */
+const combine = (a: number, b: number) => (b > 0 ? Math.cbrt(a ** 3 + b ** 3) : a);
+
+/**
+ * The model at one pair of temperatures: returns the conductance and writes every
+ * intermediate into `out` (slots S_*). Written without closures, objects or strings: the
+ * solver evaluates it three times per link and Newton iteration (value and two slopes).
+ */
+function finnedCore(g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number, out: Float64Array): number {
   const n = g.finCount;
   const lv = g.baseLengthM;
   const direction = g.finDirection ?? "vertical";
   const s = (g.baseWidthM - n * g.finThicknessM) / (n - 1);
   const filmK = 0.5 * (surfaceK + ambientK);
-  const air = airPropertiesAt(filmK);
-  const k = air.conductivityWPerMK;
+  const air = FILM_SCRATCH;
+  film(filmK, air, false);
+  const k = air[AIR_K]!;
+  const nuAir = air[AIR_NU]!;
   const dT = Math.max(Math.abs(surfaceK - ambientK), MIN_DELTA_K);
 
   // Bar-Cohen & Rohsenow composite for isothermal symmetric vertical channels: spans the
   // fully developed (choked) limit Nu = El/24 and the isolated-plate limit Nu ∝ El^(1/4).
   // The channel's rise is the base length for vertical fins and the fin height for fins
   // pointing up from a level base.
-  const channelH = (rise: number) => {
-    const el = (STANDARD_GRAVITY * air.expansionPerK * dT * s ** 4) / (air.kinematicViscosityM2PerS * air.diffusivityM2PerS * rise);
-    return { el, nu: channelNusselt(el), h: (channelNusselt(el) * k) / s };
-  };
   const h = g.finHeightM;
   const rise = direction === "up" ? h : lv;
-  const ch = channelH(rise);
-  let hNatCh = ch.h;
-  let hNatOuter = naturalConvectionH("vertical-plate", rise, surfaceK, ambientK);
+  const el = (G * air[AIR_BETA]! * dT * s ** 4) / (nuAir * air[AIR_ALPHA]! * rise);
+  const nuCh = channelNu(el);
+  let hNatCh = (nuCh * k) / s;
+  // The outer faces stand vertical, at the same film temperature: the air looked up above serves.
+  let hNatOuter = coefficientAt(VERTICAL, rise, G * rise ** 3, air, surfaceK, ambientK);
   let levelFin = 0;
   let underside = 0;
   if (direction === "horizontal") {
@@ -106,9 +153,9 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
     // The two end fins' free faces are horizontal plates (upper and lower face of a hot
     // plate, L = A/P), no better than the same faces stood vertical.
     const lFace = (h * lv) / (2 * (h + lv));
-    const hUp = naturalConvectionH("horizontal-plate-up", lFace, surfaceK, ambientK);
-    const hDown = naturalConvectionH("horizontal-plate-down", lFace, surfaceK, ambientK);
-    levelFin = naturalConvectionH("vertical-plate", g.baseWidthM, surfaceK, ambientK);
+    const hUp = hNatural("horizontal-plate-up", lFace, surfaceK, ambientK);
+    const hDown = hNatural("horizontal-plate-down", lFace, surfaceK, ambientK);
+    levelFin = hNatural("vertical-plate", g.baseWidthM, surfaceK, ambientK);
     hNatCh = 0;
     hNatOuter = Math.min(0.5 * (hUp + hDown), hNatOuter);
   } else if (direction === "down") {
@@ -116,8 +163,8 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
     // as a block at the base temperature shedding heat from its underside (a hot surface
     // facing down) and from its two open ends (vertical faces of the fin height).
     const lUnder = (g.baseWidthM * lv) / (2 * (g.baseWidthM + lv));
-    underside = naturalConvectionH("horizontal-plate-down", lUnder, surfaceK, ambientK);
-    hNatOuter = naturalConvectionH("vertical-plate", h, surfaceK, ambientK);
+    underside = hNatural("horizontal-plate-down", lUnder, surfaceK, ambientK);
+    hNatOuter = hNatural("vertical-plate", h, surfaceK, ambientK);
     hNatCh = 0;
   }
 
@@ -125,10 +172,9 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
   // flow between parallel plates (Nu_Dh = 7.54, Dh = 2s); combined with natural convection
   // by Churchill's cube rule for assisting flow.
   const v = g.airSpeedMPerS ?? 0;
-  const re = (v * lv) / air.kinematicViscosityM2PerS;
-  const hDev = v > 0 ? (0.664 * Math.sqrt(re) * air.prandtl ** (1 / 3) * k) / lv : 0;
+  const re = (v * lv) / nuAir;
+  const hDev = v > 0 ? (0.664 * Math.sqrt(re) * air[AIR_PR]! ** (1 / 3) * k) / lv : 0;
   const hForcedCh = v > 0 ? Math.max(hDev, (7.54 * k) / (2 * s)) : 0;
-  const combine = (a: number, b: number) => (b > 0 ? Math.cbrt(a ** 3 + b ** 3) : a);
   const hCh = combine(hNatCh, hForcedCh);
   const hOuter = combine(hNatOuter, hDev);
 
@@ -149,45 +195,72 @@ export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: numb
     : direction === "vertical"
       ? hOuter
       : direction === "horizontal"
-        ? naturalConvectionH("vertical-plate", g.baseWidthM, surfaceK, ambientK)
-        : naturalConvectionH(direction === "up" ? "horizontal-plate-down" : "horizontal-plate-up", (g.baseWidthM * lv) / (2 * (g.baseWidthM + lv)), surfaceK, ambientK);
+        ? hNatural("vertical-plate", g.baseWidthM, surfaceK, ambientK)
+        : hNatural(direction === "up" ? "horizontal-plate-down" : "horizontal-plate-up", (g.baseWidthM * lv) / (2 * (g.baseWidthM + lv)), surfaceK, ambientK);
   const gBack = g.backExposed ? backH * g.baseWidthM * lv : 0;
 
   // Fins mostly see each other; what leaves by radiation is what the enclosing box sees.
   const envelope = finnedEnvelopeAreaM2(g);
-  const gRad = g.emissivity * STEFAN_BOLTZMANN * envelope * (surfaceK * surfaceK + ambientK * ambientK) * (surfaceK + ambientK);
+  const gRad = g.emissivity * SIGMA * envelope * (surfaceK * surfaceK + ambientK * ambientK) * (surfaceK + ambientK);
 
+  out[S_SPACING] = s;
+  out[S_FILM] = filmK;
+  out[S_EL] = el;
+  out[S_NU_CH] = nuCh;
+  out[S_H_NAT_CH] = hNatCh;
+  out[S_H_FORCED_CH] = hForcedCh;
+  out[S_H_CH] = hCh;
+  out[S_H_OUTER] = hOuter;
+  out[S_ETA_CH] = etaCh;
+  out[S_ETA_OUT] = etaOut;
+  out[S_LC] = lc;
+  out[S_G_FINS_CH] = gFinsChannel;
+  out[S_G_FINS_OUT] = gFinsOuter;
+  out[S_G_BASE] = gBaseChannel;
+  out[S_G_BACK] = gBack;
+  out[S_G_RAD] = gRad;
+  out[S_ENVELOPE] = envelope;
+  out[S_RE] = re;
+  out[S_RISE] = direction === "down" ? 0 : rise;
+  out[S_LEVEL_FIN] = levelFin;
+  out[S_UNDERSIDE] = underside;
+  return gFinsChannel + gFinsOuter + gBaseChannel + gBack + gRad;
+}
+
+/** The numbers of the model at one pair of temperatures, for the trace. */
+export function evaluateFinnedHeatsink(g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): FinnedHeatsinkEvaluation {
+  const o = new Float64Array(SLOTS);
+  const conductanceWPerK = finnedCore(g, surfaceK, ambientK, o);
   return {
-    conductanceWPerK: gFinsChannel + gFinsOuter + gBaseChannel + gBack + gRad,
-    spacingM: s,
-    filmK,
-    air,
-    elenbaas: ch.el,
-    channelNusselt: ch.nu,
-    channelNaturalWPerM2K: hNatCh,
-    channelForcedWPerM2K: hForcedCh,
-    channelWPerM2K: hCh,
-    outerWPerM2K: hOuter,
-    finEfficiencyChannel: etaCh,
-    finEfficiencyOuter: etaOut,
-    correctedFinLengthM: lc,
-    gFinsChannel,
-    gFinsOuter,
-    gBaseChannel,
-    gBack,
-    gRadiation: gRad,
-    envelopeAreaM2: envelope,
-    reynolds: re,
-    direction,
-    channelRiseM: direction === "down" ? 0 : rise,
-    levelFinWPerM2K: levelFin,
-    undersideWPerM2K: underside,
+    conductanceWPerK,
+    spacingM: o[S_SPACING]!,
+    filmK: o[S_FILM]!,
+    air: airPropertiesAt(o[S_FILM]!),
+    elenbaas: o[S_EL]!,
+    channelNusselt: o[S_NU_CH]!,
+    channelNaturalWPerM2K: o[S_H_NAT_CH]!,
+    channelForcedWPerM2K: o[S_H_FORCED_CH]!,
+    channelWPerM2K: o[S_H_CH]!,
+    outerWPerM2K: o[S_H_OUTER]!,
+    finEfficiencyChannel: o[S_ETA_CH]!,
+    finEfficiencyOuter: o[S_ETA_OUT]!,
+    correctedFinLengthM: o[S_LC]!,
+    gFinsChannel: o[S_G_FINS_CH]!,
+    gFinsOuter: o[S_G_FINS_OUT]!,
+    gBaseChannel: o[S_G_BASE]!,
+    gBack: o[S_G_BACK]!,
+    gRadiation: o[S_G_RAD]!,
+    envelopeAreaM2: o[S_ENVELOPE]!,
+    reynolds: o[S_RE]!,
+    direction: g.finDirection ?? "vertical",
+    channelRiseM: o[S_RISE]!,
+    levelFinWPerM2K: o[S_LEVEL_FIN]!,
+    undersideWPerM2K: o[S_UNDERSIDE]!,
   };
 }
 
-/** Conductance alone, for the solver's loop. */
-export const finnedHeatsinkConductance = (g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): number =>
-  evaluateFinnedHeatsink(g, surfaceK, ambientK).conductanceWPerK;
+/** Conductance alone, for the solver's loop: no allocation. */
+export const finnedHeatsinkConductance = (g: FinnedHeatsinkGeometry, surfaceK: number, ambientK: number): number => finnedCore(g, surfaceK, ambientK, LOOP_SCRATCH);
 
 const BCR = CHANNEL_SOURCE;
 

@@ -14,20 +14,22 @@ export function groupLinks(links: readonly CompiledLink[]): LinkGroups {
   // Two buffers carved into views rather than ten arrays (see scratch.ts on what each allocation costs).
   const ints = new Int32Array(2 * (lin + rad + nat + oth));
   const reals = new Float64Array(lin + rad);
-  let at = 0;
-  const take = (length: number) => ints.subarray(at, (at += length));
+  // Consecutive views: lin, lin, rad, rad, nat, nat, oth, oth (no closure: set-up time counts for small networks).
+  const r1 = 2 * lin;
+  const n1 = r1 + 2 * rad;
+  const o1 = n1 + 2 * nat;
   const g: LinkGroups = {
-    linA: take(lin),
-    linB: take(lin),
+    linA: ints.subarray(0, lin),
+    linB: ints.subarray(lin, r1),
     linG: reals.subarray(0, lin),
-    radA: take(rad),
-    radB: take(rad),
+    radA: ints.subarray(r1, r1 + rad),
+    radB: ints.subarray(r1 + rad, n1),
     radC: reals.subarray(lin),
-    natA: take(nat),
-    natB: take(nat),
+    natA: ints.subarray(n1, n1 + nat),
+    natB: ints.subarray(n1 + nat, o1),
     nat: [],
-    othA: take(oth),
-    othB: take(oth),
+    othA: ints.subarray(o1, o1 + oth),
+    othB: ints.subarray(o1 + oth, o1 + 2 * oth),
     oth: [],
   };
   lin = 0;

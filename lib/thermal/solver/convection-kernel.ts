@@ -25,6 +25,8 @@ const ALPHA = AIR.alpha;
 const PR = AIR.pr;
 const BETA = AIR.beta;
 const ZERO_C = ZERO_CELSIUS_K;
+const G = STANDARD_GRAVITY;
+const CODE = SURFACE_CODE;
 const airOutside = airInto;
 
 /**
@@ -119,7 +121,7 @@ const H_SCRATCH = new Float64Array(FILM_SLOTS);
 /** h of a surface in W/(m²·K), allocation-free: what the element model and the heatsink model ask for. */
 export function naturalConvectionH(surface: Surface, lengthM: number, surfaceK: number, fluidK: number): number {
   filmAir(0.5 * (surfaceK + fluidK), H_SCRATCH, false);
-  return coefficientAt(SURFACE_CODE[surface], lengthM, STANDARD_GRAVITY * lengthM ** 3, H_SCRATCH, surfaceK, fluidK);
+  return coefficientAt(CODE[surface], lengthM, G * lengthM ** 3, H_SCRATCH, surfaceK, fluidK);
 }
 
 // Scratch shared by every link: evaluations never overlap, and a network with hundreds of
@@ -145,7 +147,7 @@ export class NaturalConvectionLink implements LinkModel {
     readonly lengthM: number,
   ) {
     this.code = SURFACE_CODE[surface];
-    this.gL3 = STANDARD_GRAVITY * lengthM ** 3;
+    this.gL3 = G * lengthM ** 3;
   }
   evaluate(ti: number, tj: number, out: Float64Array, derivatives: boolean): void {
     const { code, lengthM, gL3, areaM2 } = this;

@@ -26,8 +26,12 @@ export async function benchBuilds(): Promise<void> {
       const text = await r.text();
       const ms = performance.now() - t0;
       if (r.status !== 200) throw new Error(`solve ${id} → ${r.status}`);
-      const evaluate = /evaluate;dur=([\d.]+)/.exec(r.headers.get("server-timing") ?? "")?.[1];
-      return { ms, evaluateMs: evaluate === undefined ? null : Number(evaluate), bytes: Buffer.byteLength(text), cached: text.slice(0, 400).includes('"cached":true') };
+      const timing = r.headers.get("server-timing") ?? "";
+      const dur = (name: string) => {
+        const v = new RegExp(`${name};dur=([\\d.]+)`).exec(timing)?.[1];
+        return v === undefined ? null : Number(v);
+      };
+      return { ms, evaluateMs: dur("evaluate"), serializeMs: dur("serialize"), handlerMs: dur("handler"), bytes: Buffer.byteLength(text), cached: text.slice(0, 400).includes('"cached":true') };
     };
     const clear = (id: string) => conn.query("DELETE r FROM solve_cache r JOIN build_revision v ON v.id = r.revision_id WHERE v.build_id = ?", [id]);
     // The cache is written after the answer has left: wait for both shapes to land, so a
@@ -46,6 +50,8 @@ export async function benchBuilds(): Promise<void> {
     for (const b of list.mine) {
       const cold: number[] = [];
       const evals: number[] = [];
+      const serials: number[] = [];
+      const handlers: number[] = [];
       let bytes = 0;
       for (let i = 0; i < COLD_RUNS; i++) {
         await clear(b.id);
@@ -54,13 +60,20 @@ export async function benchBuilds(): Promise<void> {
         await settled(b.id);
         cold.push(r.ms);
         if (r.evaluateMs !== null) evals.push(r.evaluateMs);
+        if (r.serializeMs !== null) serials.push(r.serializeMs);
+        if (r.handlerMs !== null) handlers.push(r.handlerMs);
         bytes = r.bytes;
       }
       await clear(b.id);
       const full = await solve(b.id, JSON.stringify({ curves: "full" }));
       await settled(b.id);
       const cached: number[] = [];
-      for (let i = 0; i < CACHED_RUNS; i++) cached.push((await solve(b.id)).ms);
+      const cachedHandlers: number[] = [];
+      for (let i = 0; i < CACHED_RUNS; i++) {
+        const r = await solve(b.id);
+        cached.push(r.ms);
+        if (r.handlerMs !== null) cachedHandlers.push(r.handlerMs);
+      }
       allCold.push(...cold);
       allCached.push(...cached);
       const evalMs = median(evals);
@@ -68,7 +81,7 @@ export async function benchBuilds(): Promise<void> {
       const coldMs = median(cold);
       if (coldMs <= limit) met++;
       console.log(
-        `[bench:builds]   ${b.title.padEnd(46)} cold median ${coldMs.toFixed(1)} ms, evaluation ${evalMs.toFixed(1)} ms (cold ÷ evaluation ${(coldMs / evalMs).toFixed(2)}; the rest ${(coldMs - evalMs).toFixed(1)} ms) · cached median ${median(cached).toFixed(1)} ms · answer ${(bytes / 1000).toFixed(0)} kB (full curves ${(full.bytes / 1000).toFixed(0)} kB)`,
+        `[bench:builds]   ${b.title.padEnd(46)} cold median ${coldMs.toFixed(1)} ms, evaluation ${evalMs.toFixed(1)} ms (cold ÷ evaluation ${(coldMs / evalMs).toFixed(2)}; the rest ${(coldMs - evalMs).toFixed(1)} ms: serialising ${median(serials).toFixed(1)}, handler in all ${median(handlers).toFixed(1)}) · cached median ${median(cached).toFixed(1)} ms (handler ${median(cachedHandlers).toFixed(1)}) · answer ${(bytes / 1000).toFixed(0)} kB (full curves ${(full.bytes / 1000).toFixed(0)} kB)`,
       );
       console.log(`[bench:builds]     ${target(`cold solve over HTTP, ${b.title} (≤ 2 × its evaluation ${evalMs.toFixed(1)} ms + 5 ms)`, coldMs, limit, "ms")}`);
     }

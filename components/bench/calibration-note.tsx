@@ -1,6 +1,6 @@
 import Link from "next/link";
 import type { Calibration } from "@/lib/retrofit/design-schema";
-import { CALIBRATION_LABELS } from "@/lib/retrofit/compile/calibration";
+import { CALIBRATION_LABELS } from "@/lib/retrofit/design-labels";
 
 const f2 = (x: number) => x.toFixed(2);
 

@@ -1,8 +1,8 @@
 "use client";
 
 import Link from "next/link";
-import { CALIBRATION_LABELS } from "@/lib/retrofit/compile/calibration";
-import { calibrationSchema } from "@/lib/retrofit/design-schema";
+import { CALIBRATION_LABELS } from "@/lib/retrofit/design-labels";
+import type { Calibration } from "@/lib/retrofit/design-schema";
 import type { Json } from "./design-state";
 
 const f2 = (x: number) => x.toFixed(2);
@@ -11,11 +11,10 @@ const f2 = (x: number) => x.toFixed(2);
  * The bench-run calibration a revision carries (it is worked out on the bench screen, never
  * typed): what it corrects, by how much, from which run; the maker may take it out of the
  * draft (the model's own figures come back once saved) or put it back before saving.
+ * `saved` is the revision's calibration as the server read it; `current` the draft's.
  */
-export function CalibrationSection({ saved, current, canEdit, onChange }: { saved: Json | undefined; current: Json | undefined; canEdit: boolean; onChange: (value: Json | undefined) => void }) {
-  const kept = calibrationSchema.safeParse(saved);
-  if (!kept.success) return null;
-  const c = kept.data;
+export function CalibrationSection({ saved: c, current, canEdit, onChange }: { saved: Calibration | null; current: Json | undefined; canEdit: boolean; onChange: (value: Json | undefined) => void }) {
+  if (!c) return null;
   const label = CALIBRATION_LABELS[c.parameter];
   const removed = current === undefined;
   return (
@@ -34,7 +33,7 @@ export function CalibrationSection({ saved, current, canEdit, onChange }: { save
         </p>
       )}
       {canEdit && (
-        <button type="button" onClick={() => onChange(removed ? saved : undefined)} className="mt-2 rounded border border-line px-3 py-1 hover:border-ember" data-testid="calibration-toggle">
+        <button type="button" onClick={() => onChange(removed ? c : undefined)} className="mt-2 rounded border border-line px-3 py-1 hover:border-ember" data-testid="calibration-toggle">
           {removed ? "Keep the calibration" : "Remove the calibration"}
         </button>
       )}

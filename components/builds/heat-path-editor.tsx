@@ -13,11 +13,11 @@ import { ApiClientError, fetchJson } from "@/components/ui/fetch-json";
 import { materialOptions } from "@/lib/parts";
 import { FIN_DIRECTION_CHOICES } from "@/lib/retrofit/design-labels";
 import { getPath, type Json, type JsonObject, setPath } from "./design-state";
-import { CalibrationSection } from "./calibration-section";
 import { ChoiceSelect, IntInput, PartSelect, UnitInput } from "./editor-fields";
 import { editorFieldFor, placeProblems, ProblemsSummary } from "./editor-problems";
 import { useDesignPreview } from "./use-design-preview";
 import { DESIGN_LABELS, type DesignField } from "@/lib/retrofit/design-labels";
+import type { Calibration } from "@/lib/retrofit/design-schema";
 
 /** The live check draws what the preview answers, so it loads beside that first answer, not before the page. */
 const LiveCheck = dynamic(() => import("./live-check").then((m) => m.LiveCheck), {
@@ -25,9 +25,13 @@ const LiveCheck = dynamic(() => import("./live-check").then((m) => m.LiveCheck),
   loading: () => <div className="h-40 animate-pulse rounded bg-line/30" aria-busy="true" aria-label="Loading the live check" />,
 });
 
+// Only a calibrated revision shows it: loaded when shown, out of the page's first load.
+const CalibrationSection = dynamic(() => import("./calibration-section").then((m) => m.CalibrationSection));
+
 const MATERIAL_CHOICES = materialOptions().map((m) => [m.value, m.label] as const);
 
-type Props = { buildId: string; title: string; revision: number; design: JsonObject; canEdit: boolean };
+/** `calibration`: the bench-run calibration the saved revision carries (read on the server), or null. */
+type Props = { buildId: string; title: string; revision: number; design: JsonObject; canEdit: boolean; calibration: Calibration | null };
 
 function Section({ title, children, note }: { title: string; children: ReactNode; note?: string }) {
   return (
@@ -65,7 +69,7 @@ function fieldForIssue(path: string, fields: readonly string[]): string | null {
  * on screen is checked as it is edited (the preview route evaluates the unsaved draft and
  * writes nothing); saving makes the revision.
  */
-export function HeatPathEditor({ buildId, title, revision, design: initial, canEdit }: Props) {
+export function HeatPathEditor({ buildId, title, revision, design: initial, canEdit, calibration }: Props) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [design, setDesign] = useState<JsonObject>(initial);
@@ -77,7 +81,6 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
   // What the last saved revision holds, as edited here (the server stores it in SI units).
   const [savedJson, setSavedJson] = useState(() => JSON.stringify(initial));
   const dirty = JSON.stringify(design) !== savedJson;
-  const savedCalibration = useMemo(() => getPath(JSON.parse(savedJson) as JsonObject, "calibration"), [savedJson]);
   const solved = useSolve(buildId, revision);
   const preview = useDesignPreview(buildId, design, dirty && canEdit);
   const live = dirty && canEdit;
@@ -227,7 +230,7 @@ export function HeatPathEditor({ buildId, title, revision, design: initial, canE
         />
         <IntInput min={0} max={100000} {...f("costs.comparableNewLightEur")} />
       </Section>
-      <CalibrationSection saved={savedCalibration} current={getPath(design, "calibration")} canEdit={canEdit} onChange={(v) => change("calibration", v)} />
+      {calibration && <CalibrationSection saved={calibration} current={getPath(design, "calibration")} canEdit={canEdit} onChange={(v) => change("calibration", v)} />}
     </>
   );
   placeIssues();

@@ -58,7 +58,7 @@ function Step({ step, exampleId, hiddenKeys, open, depth = 0 }: { step: Derivati
 export function DerivationView({ derivation: d, exampleId, hiddenKeys, open = false }: Props) {
   return (
     <div className="derivation space-y-5 text-sm">
-      <p className="text-ink-soft">Scenario: <strong className="text-ink">{d.scenarioName}</strong>{d.ambientC !== null && <> · surrounding air {fmtValue(d.ambientC, "°C")}</>}</p>
+      <p className="text-ink-soft">Case: <strong className="text-ink">{d.scenarioLabel}</strong>{d.ambientC !== null && <> · surrounding air {fmtValue(d.ambientC, "°C")}</>}</p>
       <section className="space-y-1.5">
         <h3 className="font-medium">1. Heat from the electrical side</h3>
         <div className="step-list space-y-1.5">{d.heat.map((s) => <Step key={s.key} step={s} exampleId={exampleId} hiddenKeys={hiddenKeys} open={open} />)}</div>
@@ -132,7 +132,7 @@ export function HandoutDerivation({ derivation: d }: { derivation: Derivation })
   );
   return (
     <div className="handout-derivation space-y-2 text-xs">
-      <p>Scenario: <strong>{d.scenarioName}</strong>{d.ambientC !== null && <> · surrounding air {fmtValue(d.ambientC, "°C")}</>}</p>
+      <p>Case: <strong>{d.scenarioLabel}</strong>{d.ambientC !== null && <> · surrounding air {fmtValue(d.ambientC, "°C")}</>}</p>
       <h3 className="font-medium">1. Heat from the electrical side</h3>
       <ol className="step-list space-y-1">{d.heat.map(step)}</ol>
       <h3 className="font-medium">2. Each link&apos;s resistance</h3>

@@ -18,7 +18,7 @@ function FigureCell({ value, starter, unit }: { value: number | null | undefined
   if (value === null || value === undefined) return <span className="text-ink-soft">–</span>;
   const d = starter !== null && starter !== undefined ? value - starter : null;
   return (
-    <span className="font-mono">
+    <span className="whitespace-nowrap font-mono">
       {fmtValue(value, unit)}
       {d !== null && Math.abs(d) >= 0.05 && <span className={`ml-1 text-xs ${d < 0 ? "text-ok" : "text-over"}`}>{d > 0 ? "+" : "−"}{fmtValue(Math.abs(d), unit === "°C" ? "K" : unit)}</span>}
     </span>
@@ -33,7 +33,7 @@ export function RosterTable({ rows, starter }: { rows: RosterRow[]; starter: Fig
     col.accessor("studentName", { id: "student", header: "Student" }),
     col.accessor((r) => r.latest?.submittedAt ?? "", { id: "handedIn", header: "Handed in", cell: (c) => (c.row.original.latest ? <span>{fmtDate(c.row.original.latest.submittedAt)}{c.row.original.handins > 1 && <span className="text-xs text-ink-soft"> ({c.row.original.handins}×)</span>}</span> : <span className="text-ink-soft">not yet</span>) }),
     col.accessor((r) => (r.latest ? (r.latest.late ? 1 : 0) : -1), { id: "late", header: "Late", cell: (c) => (c.row.original.latest ? (c.row.original.latest.late ? <span className="text-over">late</span> : "on time") : "") }),
-    col.accessor((r) => (r.figures?.verdict ? VERDICT_ORDER[r.figures.verdict] ?? 3 : 4), { id: "verdict", header: "Verdict", cell: (c) => { const v = c.row.original.figures?.verdict; return v ? <span className={`rounded border px-1 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : "–"; } }),
+    col.accessor((r) => (r.figures?.verdict ? VERDICT_ORDER[r.figures.verdict] ?? 3 : 4), { id: "verdict", header: "Verdict", cell: (c) => { const v = c.row.original.figures?.verdict; return v ? <span className={`whitespace-nowrap rounded border px-1 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : "–"; } }),
     col.accessor((r) => r.figures?.junctionC ?? null, { id: "junction", header: "Junction", sortUndefined: "last", cell: (c) => <FigureCell value={c.getValue()} starter={starter?.junctionC} unit="°C" /> }),
     col.accessor((r) => r.figures?.driverBoardC ?? null, { id: "driver", header: "Driver board", cell: (c) => <FigureCell value={c.getValue()} starter={starter?.driverBoardC} unit="°C" /> }),
     col.accessor((r) => r.figures?.housingC ?? null, { id: "housing", header: "Housing surface", cell: (c) => <FigureCell value={c.getValue()} starter={starter?.housingC} unit="°C" /> }),
@@ -80,7 +80,7 @@ export function RosterTable({ rows, starter }: { rows: RosterRow[]; starter: Fig
           <tbody>
             <tr className="border-b border-line bg-ember-soft/40 text-xs">
               <td className="px-2 py-1 italic">Starter</td><td /><td />
-              <td className="px-2">{starter?.verdict ? <span className={`rounded border px-1 ${VERDICT_STYLE[starter.verdict] ?? ""}`}>{starter.verdict}</span> : "–"}</td>
+              <td className="px-2">{starter?.verdict ? <span className={`whitespace-nowrap rounded border px-1 ${VERDICT_STYLE[starter.verdict] ?? ""}`}>{starter.verdict}</span> : "–"}</td>
               <td className="px-2 font-mono">{fmtValue(starter?.junctionC, "°C")}</td>
               <td className="px-2 font-mono">{fmtValue(starter?.driverBoardC, "°C")}</td>
               <td className="px-2 font-mono">{fmtValue(starter?.housingC, "°C")}</td>

@@ -60,6 +60,8 @@ export interface LimitStep {
 export interface Derivation {
   scenarioId: string;
   scenarioName: string;
+  /** The case in words: "driver mode “high”, steady state" or "charging, steady state". */
+  scenarioLabel: string;
   ambientC: number | null;
   heat: DerivationStep[];
   links: DerivationStep[];
@@ -109,10 +111,19 @@ function heatSteps(s: ScenarioResult): DerivationStep[] {
   return steps;
 }
 
-/** Picks the scenario: the one asked for, else the first driver mode, else the first that solved. */
+/** The least headroom over a scenario's limits (Infinity without limits). */
+const tightest = (s: ScenarioResult) => Math.min(...(s.thermal?.limits ?? []).map((l) => l.headroomK));
+
+/**
+ * Picks the scenario: the one asked for, else the driver mode with the least headroom (the
+ * case a class asks "why does it run hot" about), else the first that solved.
+ */
 export function pickScenario(evaluation: BuildEvaluation, scenarioId: string | null | undefined): ScenarioResult | null {
   const solved = evaluation.scenarios.filter((s) => s.thermal);
-  return solved.find((s) => s.id === scenarioId) ?? solved.find((s) => s.kind === "mode") ?? solved[0] ?? null;
+  const asked = solved.find((s) => s.id === scenarioId);
+  if (asked) return asked;
+  const modes = solved.filter((s) => s.kind === "mode");
+  return modes.reduce<ScenarioResult | null>((hot, s) => (hot === null || tightest(s) < tightest(hot) ? s : hot), null) ?? solved[0] ?? null;
 }
 
 export function deriveExample(evaluation: BuildEvaluation, scenarioId?: string | null): Derivation | null {
@@ -161,6 +172,7 @@ export function deriveExample(evaluation: BuildEvaluation, scenarioId?: string |
   return {
     scenarioId: s.id,
     scenarioName: s.name,
+    scenarioLabel: `${s.kind === "mode" ? `driver mode “${s.name}”` : s.name}, steady state`,
     ambientC: s.network?.ambientC ?? null,
     heat,
     links,

@@ -1,6 +1,6 @@
 import type { PartKind } from "@/lib/parts";
 import type { FinDirection } from "@/lib/thermal/correlations";
-import type { Environment } from "./design-schema";
+import type { CalibrationParameter, Environment } from "./design-schema";
 
 /**
  * The label of every field of a build design as the Heat path editor shows it. The editor
@@ -108,3 +108,10 @@ export const FIN_DIRECTION_CHOICES: readonly (readonly [FinDirection, string])[]
 export function finDirectionOf(le: { finDirection?: FinDirection }, env: { orientation: Environment["orientation"] }): FinDirection {
   return le.finDirection ?? (env.orientation === "upright" ? "vertical" : "horizontal");
 }
+
+/** What each calibratable figure is, in the words the Budget and the bench screen use. */
+export const CALIBRATION_LABELS: Readonly<Record<CalibrationParameter, { name: string; links: string }>> = {
+  "sink-rating": { name: "the heatsink's declared rating", links: "the heatsink's link to the air" },
+  "inside-air": { name: "the inside air's coefficient", links: "convection to and from the air inside the housing" },
+  "outside-air": { name: "the housing's outside convection", links: "convection from the housing to the air outside" },
+};

@@ -1,9 +1,10 @@
-import { compileNetwork } from "./compile";
+import { compileNetwork, type CompiledNetwork } from "./compile";
+import { LinearLink } from "./link-models";
 import { toCelsius } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
 import type { Network } from "./schema";
-import { solveSteady, steadyTemperatures, type SteadyResult } from "./solve-steady";
+import { compiledSteadyTemperatures, solveSteady, type SteadyResult } from "./solve-steady";
 import { resolveSteadyOptions, solveCompiledSteady } from "./solver/steady";
 
 /** Target: keep `node` at or below `limitC` in steady state. */
@@ -246,11 +247,16 @@ export function pathResistance(network: Network, at: SteadyResult, links: readon
 export function requiredLinkResistance(network: Network, at: SteadyResult, index: number, node: string, limitC: number, tolK = 0.02, alsoRemove: readonly number[] = []): ResistanceAnswer {
   const link = network.links[index]!;
   const drop = new Set(alsoRemove);
-  // Each probe starts from the last answer (the first from the present one): a few Newton steps fewer.
+  // The probes differ only in the resistance of one link: compiled once, with that value
+  // set in place for each probe. Each starts from the last answer (the first from the
+  // present one): a few Newton steps fewer.
+  const probeLinks = network.links.flatMap((l, i) => (i === index ? [{ from: link.from, to: link.to, type: "resistance" as const, kelvinPerWatt: 1 }] : drop.has(i) ? [] : [l]));
+  const compiled = compileNetwork({ ...network, links: probeLinks });
+  const setResistance = resistanceSetter(compiled, index - alsoRemove.filter((i) => i < index).length);
   let last = at.temperaturesC;
   const f = (r: number) => {
-    const links = network.links.flatMap((l, i) => (i === index ? [{ from: link.from, to: link.to, type: "resistance" as const, kelvinPerWatt: r }] : drop.has(i) ? [] : [l]));
-    last = steadyTemperatures({ ...network, links }, PROBE, last);
+    setResistance(r);
+    last = compiledSteadyTemperatures(compiled, PROBE, last);
     return (last[node] ?? 0) - limitC;
   };
   const r0 = pathResistance(network, at, [index, ...alsoRemove]);
@@ -262,6 +268,23 @@ export function requiredLinkResistance(network: Network, at: SteadyResult, index
   if (root.outside === -1) return { kelvinPerWatt: null, feasible: true, solves: root.solves };
   if (root.outside === 1) return { kelvinPerWatt: 0, feasible: false, solves: root.solves };
   return { kelvinPerWatt: root.x, feasible: true, solves: root.solves };
+}
+
+/**
+ * Sets the resistance of a compiled plain-resistance link (index in `c.links`) in place:
+ * its model, and its conductance where the assembly loop reads it.
+ */
+function resistanceSetter(c: CompiledNetwork, index: number): (kelvinPerWatt: number) => void {
+  const at = c.links[index]!;
+  if (at.model.kind !== "linear") throw new Error("resistanceSetter: not a plain resistance");
+  // Linear links keep their order in the assembly group.
+  let slot = 0;
+  for (let l = 0; l < index; l++) if (c.links[l]!.model.kind === "linear") slot++;
+  return (kelvinPerWatt) => {
+    const model = new LinearLink(1 / kelvinPerWatt);
+    c.links[index] = { a: at.a, b: at.b, model };
+    c.groups.linG[slot] = model.conductance;
+  };
 }
 
 export interface ScaleAnswer {
@@ -288,8 +311,13 @@ export function maxCommonScale(network: Network, at: SteadyResult, limits: reado
   };
   let lastWho = 0;
   let last = at.temperaturesC;
+  // The probes differ only in the scale of the sources: compiled once (sources as plain
+  // watts), the scale applied to the compiled heat for each probe.
+  const compiled = compileNetwork({ ...network, sources: network.sources.map((x) => ({ node: x.node, watts: x.watts })) });
+  const heat = Float64Array.from(compiled.p0);
   const f = (s: number) => {
-    last = steadyTemperatures({ ...network, sources: network.sources.map((x) => ({ node: x.node, watts: x.watts * s })) }, PROBE, last);
+    for (let k = 0; k < heat.length; k++) compiled.p0[k] = heat[k]! * s;
+    last = compiledSteadyTemperatures(compiled, PROBE, last);
     const r = excess(last);
     lastWho = r.who;
     return r.worst;

@@ -38,13 +38,22 @@ export function solveSteady(network: Network, options?: SteadyOptions, startC?: 
  * a search needs of each of its probes, without the heat of every link.
  */
 export function steadyTemperatures(network: Network, options?: SteadyOptions, startC?: Readonly<Record<string, number>>): Record<string, number> {
-  const { compiled, solution } = solveChecked(network, options, startC);
+  return compiledSteadyTemperatures(compileNetwork(network), options, startC);
+}
+
+/** The same for a network compiled already (a search changes one value in it between its probes). */
+export function compiledSteadyTemperatures(compiled: CompiledNetwork, options?: SteadyOptions, startC?: Readonly<Record<string, number>>): Record<string, number> {
+  const { solution } = solveCheckedCompiled(compiled, options, startC);
   assertPhysical(compiled, solution.t);
   return temperaturesOf(compiled, solution.t);
 }
 
 function solveChecked(network: Network, options: SteadyOptions | undefined, startC: Readonly<Record<string, number>> | undefined): { compiled: CompiledNetwork; solution: CompiledSteadySolution } {
-  const compiled = compileNetwork(network);
+  return solveCheckedCompiled(compileNetwork(network), options, startC);
+}
+
+function solveCheckedCompiled(compiled: CompiledNetwork, options: SteadyOptions | undefined, startC: Readonly<Record<string, number>> | undefined): { compiled: CompiledNetwork; solution: CompiledSteadySolution } {
+  const network = compiled.network;
   const resolved = resolveSteadyOptions(options);
   // A start near the answer (the last solve of a slightly different network) saves Newton
   // steps; should it not converge to a stable state, the solve starts over from its own guess.

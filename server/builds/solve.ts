@@ -114,7 +114,7 @@ function afterAnswer(work: () => Promise<void>): void {
  * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when it holds this key. The answer is
  * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
  */
-async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number }> {
+async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const keys: Record<Curves, string> = { full: SOLVER_VERSION, chart: `${SOLVER_VERSION}:chart` };
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
   // The snapshot holds the parts as the owner saw them: whoever may see the build (a
@@ -138,6 +138,7 @@ async function solveToText({ build, revision, curves = "full" }: SolveArgs): Pro
   const shapes: Record<Curves, () => BuildEvaluation> = { full: () => full, chart: () => forCharts(full) };
   const evaluation = shapes[curves]();
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
+  const serializeMs = performance.now() - t0 - evaluateMs;
   const solverChange = solverChangeFrom(await previousRead, full);
   // What moved and both shapes are kept after the answer has left: a slow or failed write
   // costs the next caller a recomputation, never this caller time or an error. The change
@@ -153,7 +154,7 @@ async function solveToText({ build, revision, curves = "full" }: SolveArgs): Pro
       }),
     );
   });
-  return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation, evaluateMs };
+  return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation, evaluateMs, serializeMs };
 }
 
 /** Compares a fresh result with the last one an older solver gave: what moved, or null when there was none. */
@@ -175,11 +176,12 @@ export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
 
 /**
  * The solve route's body as JSON text (`RevisionSolve`), built around the cached text, and
- * how long the evaluation itself took when it ran (not on a cache hit).
+ * how long the evaluation itself and its serialisation (the chart shape, rounded) took when
+ * they ran (not on a cache hit).
  */
-export async function solveRevisionJson(args: SolveArgs): Promise<{ json: string; evaluateMs?: number }> {
+export async function solveRevisionJson(args: SolveArgs): Promise<{ json: string; evaluateMs?: number; serializeMs?: number }> {
   const r = await solveToText(args);
-  return { json: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs };
+  return { json: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
 }
 
 /** Resolves the design against the part records and runs the evaluation (pure from here on). */

@@ -8,12 +8,14 @@ import { MembersPanel } from "@/components/builds/members-panel";
 import { PartsChangedNotice } from "@/components/builds/parts-changed-notice";
 import { loadBuildPage } from "@/server/builds/load";
 import { partChangesSince } from "@/server/builds/part-changes";
+import { calibrationSchema } from "@/lib/retrofit/design-schema";
 
 export const metadata = { title: "Heat path" };
 
 export default async function HeatPathPage({ params }: { params: Promise<{ id: string }> }) {
   const { user, build, revision } = await loadBuildPage(params);
   const [history, partChanges] = await Promise.all([listRevisions({ buildId: build.id }), partChangesSince({ build, revision })]);
+  const calibration = calibrationSchema.safeParse((revision.design as { calibration?: unknown }).calibration);
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_16rem]">
       <div className="space-y-4">
@@ -24,7 +26,7 @@ export default async function HeatPathPage({ params }: { params: Promise<{ id: s
         {build.variantNote && <p className="text-sm">Variant: <span className="rounded bg-ember-soft px-1.5 text-ember">{build.variantNote}</span></p>}
         <BuildNav buildId={build.id} current="heat-path" />
         <PartsChangedNotice buildId={build.id} revision={revision.number} design={revision.design} changes={partChanges} canEdit={build.access.canEdit} />
-        <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} />
+        <HeatPathEditor key={build.id} buildId={build.id} title={build.title} revision={revision.number} design={revision.design as JsonObject} canEdit={build.access.canEdit} calibration={calibration.success ? calibration.data : null} />
       </div>
       <aside className="space-y-4">
         <BuildActions buildId={build.id} isOwner={build.access.isOwner} />

@@ -33,7 +33,7 @@ export default async function ClassPage({ params }: { params: Promise<{ id: stri
         <Link href="/classes" className="text-sm text-ink-soft hover:text-ember">← Classroom</Link>
         <h1 className="text-2xl font-semibold">{cls.name}</h1>
         <p className="text-sm text-ink-soft">
-          {cls.term && <>{cls.term} · </>}you are {cls.access.role === "admin" ? "an admin here" : `a ${cls.access.role}`}
+          {cls.term && <>{cls.term} · </>}you are {cls.access.role === "admin" ? "an admin here" : cls.access.role === "instructor" ? "an instructor" : "a student"}
           {archived && <span className="ml-2 rounded bg-line px-1.5 text-xs text-ink">archived: read-only</span>}
         </p>
       </div>

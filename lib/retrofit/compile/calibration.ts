@@ -1,13 +1,9 @@
 import { makeTrace, quantity, type NetworkLink, type Trace } from "@/lib/thermal";
 import type { Calibration, CalibrationParameter } from "../design-schema";
+import { CALIBRATION_LABELS } from "../design-labels";
 import type { LinkCalibration, NetworkBuilder } from "./builder";
 
-/** What each calibratable figure is, in the words the Budget and the bench screen use. */
-export const CALIBRATION_LABELS: Readonly<Record<CalibrationParameter, { name: string; links: string }>> = {
-  "sink-rating": { name: "the heatsink's declared rating", links: "the heatsink's link to the air" },
-  "inside-air": { name: "the inside air's coefficient", links: "convection to and from the air inside the housing" },
-  "outside-air": { name: "the housing's outside convection", links: "convection from the housing to the air outside" },
-};
+export { CALIBRATION_LABELS };
 
 export const CALIBRATION_SOURCE =
   'measured: one factor fitted by least squares to a bench run of the finished build; Press, Teukolsky, Vetterling & Flannery, "Numerical Recipes", 3rd ed., §15.5–15.6 (from memory — check against a copy)';

@@ -48,7 +48,7 @@ export default async function ExercisePage({ params }: { params: Promise<{ id: s
   return (
     <div className="space-y-5">
       {head}
-      <StudentExercise exerciseId={exercise.id} myCopy={copyBuild?.id ?? null} currentRevision={copyBuild?.currentRevision ?? null} dueAt={exercise.dueAt.toISOString()} archived={archived} startBlocked={startBlocked} />
+      <StudentExercise exerciseId={exercise.id} myCopy={copyBuild?.id ?? null} currentRevision={copyBuild?.currentRevision ?? null} countingRevision={mine.find((h) => h.buildId === copyBuild?.id)?.revisionNumber ?? null} dueAt={exercise.dueAt.toISOString()} archived={archived} startBlocked={startBlocked} />
       <section className="space-y-2">
         <h2 className="text-lg font-medium">My hand-ins</h2>
         {handins.length === 0 ? <p className="text-sm text-ink-soft">Nothing handed in yet.</p> : (

@@ -6,16 +6,22 @@ import { readJson, route } from "@/server/route";
 
 /**
  * Evaluates a revision (the current one unless `revision` is given): every mode and charging.
- * Warm-up curves come as the charts draw them unless `curves: "full"` is asked for; a fresh
- * evaluation says its own time in Server-Timing (`npm run bench` reads it).
+ * Warm-up curves come as the charts draw them unless `curves: "full"` is asked for. Server-Timing
+ * says the handler's time and, for a fresh evaluation, its own and its serialisation's
+ * (`npm run bench` reads them).
  */
 export const POST = route<{ params: Promise<{ id: string }> }>(async (request, { params }) => {
+  const t0 = performance.now();
   const user = await requireUser();
   const build = await loadBuild({ id: (await params).id, viewer: user });
   const { revision: number, curves } = await readJson(request, solveBuildSchema, "solve");
   const revision = await loadRevision({ build, number });
-  const { json, evaluateMs } = await solveRevisionJson({ build, revision, curves });
+  const { json, evaluateMs, serializeMs } = await solveRevisionJson({ build, revision, curves });
   const headers: Record<string, string> = { "content-type": "application/json" };
-  if (evaluateMs !== undefined) headers["server-timing"] = `evaluate;dur=${evaluateMs.toFixed(2)}`;
+  // The handler's whole time, and of it the evaluation and its serialisation when they ran.
+  const timing = [`handler;dur=${(performance.now() - t0).toFixed(2)}`];
+  if (evaluateMs !== undefined) timing.push(`evaluate;dur=${evaluateMs.toFixed(2)}`);
+  if (serializeMs !== undefined) timing.push(`serialize;dur=${serializeMs.toFixed(2)}`);
+  headers["server-timing"] = timing.join(", ");
   return new Response(json, { headers });
 });

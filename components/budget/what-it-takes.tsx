@@ -1,6 +1,7 @@
 "use client";
 
 import { formatFigure as fig } from "@/lib/units/figures";
+import { limitLabel } from "./format";
 import { Traceable } from "./trace-view";
 import type { Scenario } from "./types";
 
@@ -9,6 +10,8 @@ export function WhatItTakes({ scenario }: { scenario: Scenario }) {
   const w = scenario.whatItTakes;
   if (!w) return <p className="text-sm text-ink-soft">Not worked out for this scenario.</p>;
   const s = w.sinkToAir;
+  // The limit that stops more power, by its place in words.
+  const binding = w.bindingLimit ? scenario.thermal?.limits.find((l) => l.id === w.bindingLimit) : undefined;
   const enough = s && s.presentKPerW.value !== null && s.forBudgetKPerW.value !== null ? s.presentKPerW.value <= s.forBudgetKPerW.value : null;
   return (
     <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm" data-testid="what-it-takes">
@@ -31,7 +34,7 @@ export function WhatItTakes({ scenario }: { scenario: Scenario }) {
         </>
       )}
       <dt className="text-ink-soft">Highest drive power the build holds</dt>
-      <dd>{w.maxDrivePowerW ? <Traceable label={fig(w.maxDrivePowerW.value, "power")} trace={w.maxDrivePowerW.trace} /> : "–"}{w.bindingLimit && <span className="ml-2 text-xs text-ink-soft">(limited by {w.bindingLimit})</span>}</dd>
+      <dd>{w.maxDrivePowerW ? <Traceable label={fig(w.maxDrivePowerW.value, "power")} trace={w.maxDrivePowerW.trace} /> : "–"}{binding && <span className="ml-2 text-xs text-ink-soft">(limited by the {limitLabel(binding)})</span>}</dd>
     </dl>
   );
 }

@@ -229,7 +229,14 @@ function summariseScenario(input: SummaryInput, id: string): ScenarioSummary {
     const runnerUp = rest[0]!;
     // When even the best is over a limit, it is the least over budget, not a winner.
     const over = d.headroomK < 0;
-    const head = winners.length === 1 ? (over ? `${capital(w[0]!)} is the least over budget ${where(label)}` : `${capital(w[0]!)} wins ${where(label)}`) : `${capital(listWords(w))} tie ${where(label)} (within ${SIGNIFICANT})`;
+    const head =
+      winners.length === 1
+        ? over
+          ? `${capital(w[0]!)} is the least over budget ${where(label)}`
+          : `${capital(w[0]!)} wins ${where(label)}`
+        : over
+          ? `${capital(listWords(w))} are the least over budget ${where(label)}, within ${SIGNIFICANT} of each other`
+          : `${capital(listWords(w))} tie ${where(label)} (within ${SIGNIFICANT})`;
     const why = over ? `${winnerPhrase(d)}, ${kelvin(leadK)} less over than ${name(runnerUp)}` : `${winnerPhrase(d)}, ${kelvin(leadK)} more than ${name(runnerUp)}`;
     const losers = rest.map((i) => `${name(i)} ${loserPhrase(cells[i]!.deciding!)}`);
     parts.push(`${head}: ${why}; ${listWords(losers)}.`);

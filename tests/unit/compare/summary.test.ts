@@ -84,6 +84,17 @@ describe("the comparison summary", () => {
     expect(s.lines[0]).toBe("No variant wins any scenario by 1 K or more of headroom.");
   });
 
+  it("calls a tie among variants that are all over budget the least over budget, not a win", () => {
+    const s = summarise({
+      names: NAMES,
+      differsIn: ["Driver cooling"],
+      evaluations: [evaluation([charging([limit({ id: "charger-board", place: "charger board", headroomK: -36, limitC: 100 })])]), evaluation([charging([limit({ id: "charger-board", place: "charger board", headroomK: -35, limitC: 100 })])]), evaluation([charging([limit({ id: "charger-board", place: "charger board", headroomK: -35.2, limitC: 100 })])])],
+    });
+    expect(s.scenarios[0]!.winners).toEqual([1, 2]);
+    expect(s.lines[1]).toMatch(/^Pressed to the wall and floating free are the least over budget while charging, within 1 K of each other: the charger board is over its limit by 35 K/);
+    expect(s.lines[1]).not.toContain(" tie ");
+  });
+
   it("lets a variant win one mode and lose another", () => {
     const s = summarise({
       names: ["strap", "wall"],

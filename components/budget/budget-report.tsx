@@ -14,7 +14,9 @@ import { VERDICTS } from "@/lib/retrofit/limits";
 import { NodeTemperatures } from "./node-temperatures";
 import type { Evaluation, Scenario } from "./types";
 import { WhatItTakes } from "./what-it-takes";
-import { formatMoney } from "@/lib/units/figures";
+import { formatInUnit, formatMoney } from "@/lib/units/figures";
+import { partsCostTrace } from "@/lib/retrofit/derivations";
+import { Traceable } from "./trace-view";
 
 // Charts (Chart.js) load when one is shown, not with the page.
 function ChartLoading() {
@@ -100,10 +102,14 @@ export function BudgetReport({ evaluation, ambientC, unit = "C" }: { evaluation:
             ))}
           </ul>
           <p className="text-sm">
-            Parts: <strong>{formatMoney(evaluation.costs.totalEur)}</strong>
+            Parts: <strong><Traceable label={formatMoney(evaluation.costs.totalEur)} trace={partsCostTrace(evaluation.costs)} /></strong>
             {evaluation.costs.comparableNewLightEur !== null && ` · a comparable new light: ${formatMoney(evaluation.costs.comparableNewLightEur)}`}
             {evaluation.costs.savingEur !== null && ` · ${evaluation.costs.savingEur >= 0 ? "saving" : "extra"} ${formatMoney(Math.abs(evaluation.costs.savingEur))}`}
           </p>
+          {/* A result cached before masses were worked out has none. */}
+          {(evaluation.mass as Evaluation["mass"] | undefined) && evaluation.mass.totalKg > 0 && (
+            <p className="text-sm">Mass of the parts that give one: <Traceable label={formatInUnit(evaluation.mass.totalKg, "kg")} trace={evaluation.mass.trace} /></p>
+          )}
         </Panel>
       )}
     </div>

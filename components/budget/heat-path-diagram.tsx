@@ -7,7 +7,8 @@ import { heatColour, type TempUnit } from "./format";
 type DiagramScenario = {
   thermal: {
     nodes: readonly { id: string; place: string }[];
-    links: readonly { index: number; from: string; to: string; place: string; watts: number; kelvinPerWatt: number }[];
+    /** null figures: withheld (a link through a part a share link does not publish), drawn without labels of value. */
+    links: readonly { index: number; from: string; to: string; place: string; watts: number | null; kelvinPerWatt: number | null }[];
     temperaturesC: Record<string, number>;
   } | null;
 };
@@ -58,7 +59,7 @@ export function HeatPathDiagram({
   const fits = (name: string) => name.length * L.nodeFont * 0.55 <= nameRoom;
   const y = (id: string) => all.findIndex((n) => n.id === id) * L.rowH + L.rowH / 2;
   const edge = L.boxW + 10;
-  const links = t.links.filter((l) => Math.abs(l.watts) > 1e-6);
+  const links = t.links.filter((l) => l.watts === null || Math.abs(l.watts) > 1e-6);
   const placed = links.map((l, i) => {
     const y1 = y(l.from);
     const y2 = y(l.to);
@@ -91,12 +92,12 @@ export function HeatPathDiagram({
       {placed.map(({ l, y1, y2, x, ax, ay, ly }) => {
         const id = linkId(l.from, l.to);
         const on = selected === `link:${id}`;
-        const figures = `${formatFigure(l.watts, "power")} · ${formatFigure(l.kelvinPerWatt, "thermalResistance")}`;
+        const figures = l.watts === null || l.kelvinPerWatt === null ? "figures not published" : `${formatFigure(l.watts, "power")} · ${formatFigure(l.kelvinPerWatt, "thermalResistance")}`;
         const pinCount = pins?.[`link:${id}`] ?? 0;
         const d = `M ${edge} ${y1} C ${x} ${y1}, ${x} ${y2}, ${edge} ${y2}`;
         return (
           <g key={l.index} {...pickable("link", id, `${l.place}: ${figures}`)} data-link={id}>
-            <path d={d} fill="none" stroke={on ? "#9a3412" : "#c2410c"} strokeOpacity={on ? 0.95 : 0.55} strokeWidth={Math.min(6, 1 + Math.abs(l.watts)) + (on ? 2 : 0)} />
+            <path d={d} fill="none" stroke={on ? "#9a3412" : "#c2410c"} strokeOpacity={on ? 0.95 : 0.55} strokeWidth={Math.min(6, 1 + Math.abs(l.watts ?? 0.5)) + (on ? 2 : 0)} />
             {onPick && <path d={d} fill="none" stroke="transparent" strokeWidth={12} />}
             <path d={`M ${ax} ${ay} L ${L.labelX - 4} ${ly}`} fill="none" stroke="#d6cfc7" strokeWidth={0.8} />
             <text x={L.labelX} y={ly + 3.5} fontSize={L.labelFont} fill={on ? "#9a3412" : "#6b6158"}>{figures}</text>

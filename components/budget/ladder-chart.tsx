@@ -3,7 +3,9 @@
 import { Bar } from "react-chartjs-2";
 import "./chart-setup";
 import { formatFigure } from "@/lib/units/figures";
+import { ladderTotalTrace } from "@/lib/retrofit/derivations";
 import { heatColour } from "./format";
+import { Traceable } from "./trace-view";
 import type { Scenario } from "./types";
 
 /**
@@ -26,7 +28,10 @@ export function LadderChart({ scenario, ambientC }: { scenario: Scenario; ambien
     return bar;
   });
   const top = base;
+  const hot = ladder.steps[0]?.from ?? "";
+  const place = scenario.thermal?.nodes.find((n) => n.id === hot)?.place ?? "the hottest place";
   return (
+    <div className="space-y-1">
     <div className="h-72" data-testid="ladder-chart">
       <Bar
         data={{
@@ -62,6 +67,11 @@ export function LadderChart({ scenario, ambientC }: { scenario: Scenario; ambien
           },
         }}
       />
+    </div>
+      <p className="text-sm" data-testid="ladder-total">
+        {place}: {formatFigure(ambientC, "temperature")} ambient + {formatFigure(ladder.riseK, "temperatureDifference")} rise ={" "}
+        <Traceable label={formatFigure(ambientC + ladder.riseK, "temperature")} trace={ladderTotalTrace(ladder, place, ambientC)} />
+      </p>
     </div>
   );
 }

@@ -42,7 +42,8 @@ export function Traceable({ label, trace }: { label: string; trace: Trace | null
   return (
     <details className="group inline-block align-top">
       <summary className="cursor-pointer list-none underline decoration-dotted underline-offset-2 hover:text-ember">{label}</summary>
-      <div className="mt-2 max-w-xl rounded border border-line bg-white p-3 shadow-sm">
+      {/* The derivation reads in plain ink even where the figure is coloured (over budget, tight). */}
+      <div className="mt-2 max-w-xl rounded border border-line bg-white p-3 font-normal text-ink shadow-sm">
         <TraceView trace={trace} />
       </div>
     </details>

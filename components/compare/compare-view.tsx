@@ -20,6 +20,8 @@ const JUDGED = { better: "bg-ok/10 text-ok", worse: "bg-over/10 text-over", same
 function show(row: FigureRow, v: number | string | null): string {
   if (row.kind === "verdict") return typeof v === "string" ? v : compareFormat.DASH;
   if (row.kind === "time" && v === null) return "not reached";
+  // A headroom reads as on the Budget: a negative one never rounds to "0 K".
+  if (row.unit === "K" && row.key.includes("/headroom:") && typeof v === "number") return compareFormat.kelvin(v);
   return typeof v === "number" ? compareFormat.inUnit(v, row.unit) : compareFormat.DASH;
 }
 
@@ -35,7 +37,7 @@ function FigureRowView({ f }: { f: CompareAnswer["figures"][number] }) {
         return (
           <td key={i} className={`py-1 pr-3 ${j ? JUDGED[j] : ""}`} data-judgement={j ?? undefined}>
             {f.kind === "verdict" && typeof v === "string" ? <span className={`rounded border px-1.5 text-xs ${VERDICT_STYLE[v] ?? ""}`}>{v}</span> : <Traceable label={against ? against.value : show(f, v)} trace={f.traces?.[i]} />}
-            {against && <span className="ml-1 text-xs text-ink-soft">(limit {against.limit})</span>}
+            {against && <span className="ml-1 text-xs text-ink-soft">(limit <Traceable label={against.limit} trace={f.limitTraces?.[i]} />)</span>}
             {i > 0 && f.deltas[i] !== null && <span className="ml-1.5 text-xs">{compareFormat.signedInUnit(f.deltas[i] ?? null, f.unit)}</span>}
             {i > 0 && f.kind === "time" && j && j !== "same" && f.deltas[i] === null && <span className="ml-1.5 text-xs">{j}</span>}
           </td>

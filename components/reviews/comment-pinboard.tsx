@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { type TempUnit, limitLabel } from "@/components/budget/format";
@@ -8,12 +9,16 @@ import { formatAgainstLimit, formatHeadroom } from "@/lib/units/figures";
 import { type DiagramTarget, HeatPathDiagram } from "@/components/budget/heat-path-diagram";
 import type { Evaluation } from "@/components/budget/types";
 import { ApiClientError } from "@/components/ui/fetch-json";
-import { anchorLabel, inScenario, scenarioWords, type AnchorKind } from "@/lib/reviews/anchors";
+import type { CurvePin } from "@/components/budget/warmup-chart";
+import { anchorLabel, curvePoint, diagramPins, curvePointKey, inScenario, scenarioWords, type AnchorKind } from "@/lib/reviews/anchors";
 import type { Anchors, CommentItem } from "./types";
 import { PinIcon } from "./pin-icon";
 import { useComment } from "./use-reviews";
 
 type Picked = { kind: AnchorKind; key: string };
+
+// The Budget's warm-up chart (Chart.js), loaded when shown.
+const WarmupChart = dynamic(() => import("@/components/budget/warmup-chart").then((m) => m.WarmupChart), { ssr: false });
 
 /**
  * The reviewed revision's heat path to pin comments on: click a place or a link on the
@@ -52,18 +57,23 @@ export function CommentPinboard({
   const words = (a: Picked) => anchorLabel(anchors, a);
 
   // Comments drawn on this scenario's diagram: those pinned to it, and those pinned to the heat path as a whole.
-  const pins: Record<string, number> = {};
-  for (const c of comments) {
-    if (c.anchorKind === "figure") continue;
-    const [target, sid] = c.anchorKey.split("#");
-    if (sid && sid !== scenario?.id) continue;
-    const k = `${c.anchorKind}:${target}`;
-    pins[k] = (pins[k] ?? 0) + 1;
-  }
+  const pins = diagramPins(comments, scenario?.id);
   const pick = (t: DiagramTarget) => scenario && setAnchor({ kind: t.kind, key: inScenario(t.id, scenario.id) });
   const selectedOnDiagram = anchor && anchor.kind !== "figure" && anchor.key.endsWith(`#${scenario?.id}`) ? `${anchor.kind}:${anchor.key.split("#")[0]}` : null;
   const figureCount = (key: string) => comments.filter((c) => c.anchorKind === "figure" && c.anchorKey === key).length;
   const otherFigures = anchors.figures.filter((f) => !f.scenarioId || (f.scenarioId === scenario?.id && !f.key.includes("/headroom/")));
+  // Comments on this scenario's warm-up curves, drawn on the chart: at their point, or at the curve's end for a whole curve.
+  const curvePins: CurvePin[] = [];
+  const warmupPrefix = `${scenario?.id}/warmup/`;
+  for (const c of comments) {
+    if (c.anchorKind !== "figure" || !c.anchorKey.startsWith(warmupPrefix)) continue;
+    const point = curvePoint(anchors, c.anchorKey);
+    const limitId = (point ? point.curve.key : c.anchorKey).slice(warmupPrefix.length);
+    const minutes = point ? point.minutes : null;
+    const same = curvePins.find((p) => p.limitId === limitId && p.minutes === minutes);
+    if (same) same.count += 1;
+    else curvePins.push({ limitId, minutes, count: 1 });
+  }
 
   function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
@@ -111,6 +121,9 @@ export function CommentPinboard({
                     })}
                   </tbody>
                 </table>
+                <h3 className="text-sm font-medium">Warm-up from a cold start, {scenarioWords(scenario)}</h3>
+                <p className="text-xs text-ink-soft">Click a point of a curve to pin a comment to that place at that time.</p>
+                <WarmupChart scenario={scenario} pins={curvePins} onPick={(p) => setAnchor({ kind: "figure", key: curvePointKey(`${scenario.id}/warmup/${p.limitId}`, p.minutes) })} />
               </>
             )}
           </>
@@ -139,7 +152,7 @@ export function CommentPinboard({
         {canComment && (
           <form onSubmit={onSubmit} noValidate className="space-y-2 text-sm" aria-label="Pin a comment">
             <p className="text-ink-soft" data-testid="pin-target">
-              {anchor ? <>Pinned to: <strong className="text-ink">{words(anchor)}</strong></> : "Click a place, a link or a row to pin the comment to."}
+              {anchor ? <>Pinned to: <strong className="text-ink">{words(anchor)}</strong></> : "Click a place, a link, a row or a point of the warm-up chart to pin the comment to."}
             </p>
             <label className="block">
               <span className="sr-only">Comment</span>

@@ -2,7 +2,7 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/components/ui/fetch-json";
-import type { NotificationItem, ShareItem } from "./types";
+import type { CommentItem, NotificationItem, ShareItem } from "./types";
 
 export function useNotifications() {
   return useQuery({
@@ -31,8 +31,19 @@ export function useRequestReview(buildId: string) {
 }
 
 export function useComment(reviewId: string) {
+  const qc = useQueryClient();
   return useMutation({
     mutationFn: (body: { anchor: { kind: "node" | "link" | "figure"; key: string }; body: string }) => fetchJson<{ comment: { id: string } }>(`/api/v1/reviews/${reviewId}/comments`, { method: "POST", body }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: ["review", reviewId, "comments"] }),
+  });
+}
+
+/** A review's comments with their targets in words (for pins drawn outside the review page). */
+export function useReviewComments(reviewId: string | null) {
+  return useQuery({
+    queryKey: ["review", reviewId, "comments"],
+    queryFn: () => fetchJson<{ comments: Omit<CommentItem, "createdAt">[] }>(`/api/v1/reviews/${reviewId}/comments`),
+    enabled: reviewId !== null,
   });
 }
 

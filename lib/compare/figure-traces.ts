@@ -1,7 +1,8 @@
 import type { BuildEvaluation } from "@/lib/retrofit";
-import { driveTrace, limitTimeTrace, nodeBalanceTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
+import { driveTrace, limitTimeTrace, nodeBalanceTrace, partsCostTrace, savingTrace, totalFluxTrace } from "@/lib/retrofit/derivations";
 import type { Trace } from "@/lib/thermal";
 import type { FigureRow } from "./figures";
+import type { ComparisonSummary } from "./summary";
 
 /**
  * The derivation behind each figure of Side by side, per column: a place's temperature
@@ -20,6 +21,9 @@ export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildE
       if (what === "energy") return el.pack?.energyWh.trace ?? null;
       if (what === "charge-time") return el.charge?.totalHours.trace ?? null;
       if (what === "charger-heat") return el.charge?.lossW.trace ?? null;
+      if (what === "cost") return partsCostTrace(e.costs);
+      if (what === "mass") return (e.mass as BuildEvaluation["mass"] | undefined)?.trace ?? null;
+      if (what === "saving") return savingTrace(e.costs);
       return null;
     }
     const s = e.scenarios.find((x) => x.id === scope);
@@ -51,7 +55,41 @@ export function figureTraces(row: Pick<FigureRow, "key">, evals: readonly BuildE
   });
 }
 
-/** Every row with its derivations beside its values. */
-export function withTraces<R extends FigureRow>(rows: readonly R[], evals: readonly BuildEvaluation[]): (R & { traces: (Trace | null)[] })[] {
-  return rows.map((r) => ({ ...r, traces: figureTraces(r, evals) }));
+/** The derivation of the limit shown beside a temperature row, per column (the place's upper limit). */
+function limitBeside(row: Pick<FigureRow, "key" | "limits">, evals: readonly BuildEvaluation[]): (Trace | null)[] | undefined {
+  if (!row.limits) return undefined;
+  const m = /^(.*)\/temperature:(.*)$/.exec(row.key);
+  return evals.map((e) => {
+    const t = m ? e.scenarios.find((x) => x.id === m[1])?.thermal : undefined;
+    return t?.limits.find((l) => l.kind === "max" && t.nodes.find((n) => n.id === l.node)?.place === m![2])?.limitTrace ?? null;
+  });
+}
+
+/** Every row with its derivations beside its values (and beside its limits, where it shows them). */
+export function withTraces<R extends FigureRow>(rows: readonly R[], evals: readonly BuildEvaluation[]): (R & { traces: (Trace | null)[]; limitTraces?: (Trace | null)[] })[] {
+  return rows.map((r) => {
+    const limitTraces = limitBeside(r, evals);
+    return { ...r, traces: figureTraces(r, evals), ...(limitTraces ? { limitTraces } : {}) };
+  });
+}
+
+/** A limit's temperature (its place's heat balance) and headroom derivations in one scenario of one evaluation. */
+export function limitTraces(e: BuildEvaluation, scenarioId: string, limitId: string): { temperature: Trace | null; headroom: Trace | null } {
+  const s = e.scenarios.find((x) => x.id === scenarioId);
+  const l = s?.thermal?.limits.find((x) => x.id === limitId);
+  if (!s?.thermal || !l) return { temperature: null, headroom: null };
+  return { temperature: nodeBalanceTrace(s.thermal, l.node, s.network?.ambientC ?? 25), headroom: l.trace };
+}
+
+/** The summary with the derivation of every figure in its table (each cell's deciding limit). */
+export function summaryWithTraces(summary: ComparisonSummary, evals: readonly BuildEvaluation[]) {
+  return {
+    ...summary,
+    scenarios: summary.scenarios.map((s) => ({
+      ...s,
+      cells: s.cells.map((c, i) => ({ ...c, traces: c.deciding && evals[i] ? limitTraces(evals[i], s.id, c.deciding.id) : null })),
+    })),
+    costTraces: evals.map((e) => partsCostTrace(e.costs)),
+    massTraces: evals.map((e) => (e.mass as BuildEvaluation["mass"] | undefined)?.trace ?? null),
+  };
 }

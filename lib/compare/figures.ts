@@ -122,6 +122,8 @@ export function figureRows(evals: readonly BuildEvaluation[]): FigureRow[] {
   const rows: FigureRow[] = [
     verdictRow("build/verdict", overall, "Verdict (worst scenario)", evals.map((e) => e.verdict)),
     numberRow("build/cost", overall, "Parts cost", "€", evals.map((e) => e.costs.totalEur), "lower"),
+    // An evaluation cached before masses were worked out has none (null, never NaN).
+    numberRow("build/mass", overall, "Mass", "kg", evals.map((e) => (e.mass as BuildEvaluation["mass"] | undefined)?.totalKg ?? null), "lower"),
     numberRow("build/saving", overall, "Saving against a new light", "€", evals.map((e) => e.costs.savingEur), "higher"),
     numberRow("build/capacity", overall, "Pack capacity", "mAh", evals.map((e) => e.electrical.pack?.capacityMAh ?? null), "higher"),
     numberRow("build/energy", overall, "Pack energy", "Wh", evals.map((e) => e.electrical.pack?.energyWh.value ?? null), "higher"),

@@ -22,6 +22,9 @@ export function celsiusAgainst(c: number, limitC: number, kind: "max" | "min"): 
 
 export const euros = (eur: number | null | undefined): string => formatMoney(eur);
 
+/** A mass given in kg, shown in grams ("412 g"). */
+export const mass = (kg: number | null | undefined): string => formatInUnit(kg, "kg");
+
 export const lumens = (lm: number | null | undefined): string => formatFigure(lm, "flux");
 
 /** A runtime given in hours, shown as every time is ("6 h 30 min", "47 min"). */

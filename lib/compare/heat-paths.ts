@@ -1,5 +1,6 @@
-import { breakdownRise, isThermalInputError, type SteadyResult } from "@/lib/thermal";
+import { breakdownRise, isThermalInputError, type SteadyResult, type Trace } from "@/lib/thermal";
 import type { BuildEvaluation } from "@/lib/retrofit";
+import { ladderTotalTrace, nodeBalanceTrace } from "@/lib/retrofit/derivations";
 
 /**
  * Side by side, one scenario at a time: each column's heat path (nodes with temperatures,
@@ -17,7 +18,16 @@ export interface PlaceLadder {
   /** The limited place in words ("driver board", "cells (upper limit)"). */
   place: string;
   limitId: string;
-  columns: ({ temperatureC: number; limitC: number; headroomK: number; riseK: number; remainderK: number; steps: { place: string; deltaK: number; watts: number; kelvinPerWatt: number }[] } | null)[];
+  columns: ({
+    temperatureC: number;
+    limitC: number;
+    headroomK: number;
+    riseK: number;
+    remainderK: number;
+    steps: { place: string; deltaK: number; watts: number; kelvinPerWatt: number }[];
+    /** Derivations of the ladder's total (ambient + rungs), of the place's temperature (its heat balance), of the limit and of the headroom. */
+    traces: { total: Trace; temperature: Trace | null; limit: Trace | null; headroom: Trace };
+  } | null)[];
 }
 
 export interface ScenarioSideBySide {
@@ -46,13 +56,20 @@ function ladderFor(s: Scenario | undefined, limitId: string): PlaceLadder["colum
   };
   try {
     const r = breakdownRise(net, steady, limit.node);
+    const steps = r.steps.map((st) => ({ place: t.links[st.link]?.place ?? `${st.from} → ${st.to}`, deltaK: st.deltaK, watts: st.watts, kelvinPerWatt: st.kelvinPerWatt }));
     return {
       temperatureC: limit.temperatureC,
       limitC: limit.limitC,
       headroomK: limit.headroomK,
       riseK: r.riseK,
       remainderK: r.remainderK,
-      steps: r.steps.map((st) => ({ place: t.links[st.link]?.place ?? `${st.from} → ${st.to}`, deltaK: st.deltaK, watts: st.watts, kelvinPerWatt: st.kelvinPerWatt })),
+      steps,
+      traces: {
+        total: ladderTotalTrace({ riseK: r.riseK, remainderK: r.remainderK, steps }, limit.place, net.ambientC),
+        temperature: nodeBalanceTrace(t, limit.node, net.ambientC),
+        limit: limit.limitTrace ?? null,
+        headroom: limit.trace,
+      },
     };
   } catch (error) {
     if (isThermalInputError(error)) return null;

@@ -5,7 +5,7 @@
  */
 export const SIGNIFICANCE = { kelvin: 1, relative: 0.02 } as const;
 
-const FLOOR: Record<string, number> = { "€": 0.05, lm: 1, h: 1 / 60, min: 0.5, W: 0.01, mAh: 1, Wh: 0.01 };
+const FLOOR: Record<string, number> = { kg: 0.001, "€": 0.05, lm: 1, h: 1 / 60, min: 0.5, W: 0.01, mAh: 1, Wh: 0.01 };
 
 /** True when `delta` (in `unit`) matters against `reference` (the first column's value). */
 export function significantlyDifferent(delta: number, unit: string, reference?: number | null): boolean {

@@ -1,5 +1,5 @@
 import type { LimitResult, Verdict } from "@/lib/retrofit";
-import { celsiusAgainst, euros, kelvin, lumens, runtime } from "./format";
+import { celsiusAgainst, euros, kelvin, lumens, mass, runtime } from "./format";
 import { SIGNIFICANCE, significantlyDifferent } from "./significance";
 
 /**
@@ -22,6 +22,8 @@ export interface ScenarioLike {
 export interface EvaluationLike {
   scenarios: readonly ScenarioLike[];
   costs: { totalEur: number };
+  /** Mass of the parts that give one; absent from a result worked out before masses were. */
+  mass?: { totalKg: number } | null;
 }
 
 export interface DecidingLimit {
@@ -81,6 +83,8 @@ export interface ComparisonSummary {
   scenarios: ScenarioSummary[];
   /** Parts cost per column. */
   costsEur: number[];
+  /** Mass per column, kg; null where a column has none. */
+  massesKg: (number | null)[];
 }
 
 export interface SummaryInput {
@@ -312,7 +316,14 @@ export function summarise(input: SummaryInput): ComparisonSummary {
   const cheapest = Math.min(...costsEur);
   if (costsEur.some((c) => significantlyDifferent(c - cheapest, "€", cheapest))) lines.push(`Parts cost: ${listWords(costsEur.map((c, i) => `${name(i)} ${euros(c)}`))}.`);
   else if (n > 1) lines.push(`Parts cost: ${euros(costsEur[0])} for ${allOf(n)} (within ${SIGNIFICANCE.relative * 100} %).`);
-  return { lines, scenarios, costsEur };
+  const massesKg = input.evaluations.map((e) => (e.mass && e.mass.totalKg > 0 ? e.mass.totalKg : null));
+  const weighed = massesKg.filter((m): m is number => m !== null);
+  if (weighed.length === n && n > 0) {
+    const lightest = Math.min(...weighed);
+    if (weighed.some((m) => significantlyDifferent(m - lightest, "kg", lightest))) lines.push(`Mass: ${listWords(weighed.map((m, i) => `${name(i)} ${mass(m)}`))}.`);
+    else if (n > 1) lines.push(`Mass: ${mass(weighed[0])} for ${allOf(n)} (within ${SIGNIFICANCE.relative * 100} %).`);
+  }
+  return { lines, scenarios, costsEur, massesKg };
 }
 
 /** "in high and mid mode and while charging". */

@@ -1,7 +1,7 @@
 import type { Trace } from "@/lib/thermal";
 import type { ModeFigures } from "./scenario-mode";
 import type { ThermalResult, Warmup } from "./scenario";
-import { formatDuration } from "@/lib/units/figures";
+import { formatDuration, formatFigure } from "@/lib/units/figures";
 import { q, trace } from "./trace";
 
 /** The ambient node's id in every network (lib/thermal reserves it). */
@@ -153,5 +153,56 @@ export function enteredTrace(what: string, partName: string, value: number, unit
     inputs: [],
     result: q("x", what, value, unit),
     source: `as entered by the part's author: ${partName}`,
+  });
+}
+
+/**
+ * A ladder's total: the place's temperature is ambient plus the rise across every link the
+ * heat crosses on its way out (the rungs), plus what the ladder does not split into rungs
+ * (heat arriving from other sources along the way). Each rung is ΔT = q·R at the solution.
+ */
+export function ladderTotalTrace(
+  ladder: { riseK: number; remainderK: number; steps: readonly { place: string; deltaK: number; watts: number; kelvinPerWatt: number }[] },
+  place: string,
+  ambientC: number,
+): Trace {
+  const rungs = ladder.steps.map((s, i) => q(`ΔT${i + 1}`, `${s.place} (${formatFigure(s.watts, "power")} × ${formatFigure(s.kelvinPerWatt, "thermalResistance")})`, s.deltaK, "K"));
+  const rest = Math.abs(ladder.remainderK) > 1e-9 ? [q("ΔT_rest", "rise not split into rungs (heat from other sources joining the path)", ladder.remainderK, "K")] : [];
+  return trace({
+    element: "ladder-total",
+    formula: `Temperature of ${place}: ambient plus every rung of the ladder`,
+    equation: `T = T_ambient + ${[...rungs, ...rest].map((r) => r.symbol).join(" + ") || "0"}`,
+    inputs: [q("T_ambient", "ambient air", ambientC, "°C"), ...rungs, ...rest],
+    result: q("T", `${place} temperature`, ambientC + ladder.riseK, "°C"),
+    source: BALANCE_SOURCE,
+    notes: ["Each rung is the heat the link carries times its resistance at the solution; its own derivation is on the heat path and in the place's heat balance."],
+  });
+}
+
+/** Parts cost: the sum of the priced lines (a line without a price is left out and said so). */
+export function partsCostTrace(costs: { totalEur: number; unpriced: number; lines: readonly { name: string; count: number; totalEur: number | null }[] }): Trace {
+  const priced = costs.lines.filter((l): l is typeof l & { totalEur: number } => l.totalEur !== null);
+  return trace({
+    element: "parts-cost",
+    formula: "Parts cost: every priced part times its count",
+    equation: priced.length > 0 ? `C = ${priced.map((_, i) => `C${i + 1}`).join(" + ")}` : "C = 0",
+    inputs: priced.map((l, i) => q(`C${i + 1}`, `${l.count} × ${l.name}`, l.totalEur, "€")),
+    result: q("C", "parts cost", costs.totalEur, "€"),
+    source: "as entered (each part's price in the Parts bin or the build)",
+    notes: costs.unpriced > 0 ? [`${costs.unpriced} part${costs.unpriced > 1 ? "s have" : " has"} no price and ${costs.unpriced > 1 ? "are" : "is"} left out.`] : [],
+  });
+}
+
+/** Saving against a comparable new light (positive: the retrofit is cheaper). */
+export function savingTrace(costs: { totalEur: number; comparableNewLightEur: number | null; savingEur: number | null; unpriced: number; lines: readonly { name: string; count: number; totalEur: number | null }[] }): Trace | null {
+  if (costs.comparableNewLightEur === null || costs.savingEur === null) return null;
+  return trace({
+    element: "saving",
+    formula: "Saving against a comparable new light",
+    equation: "S = C_new − C_parts",
+    inputs: [q("C_new", "a comparable new light", costs.comparableNewLightEur, "€"), q("C_parts", "parts cost of the retrofit", costs.totalEur, "€")],
+    result: q("S", "saving", costs.savingEur, "€"),
+    source: "as entered by the build's author (the new light's price)",
+    parts: [partsCostTrace(costs)],
   });
 }

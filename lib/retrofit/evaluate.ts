@@ -2,6 +2,7 @@ import type { ModeDrive } from "@/lib/parts";
 import { cautionsFor, type Caution } from "./cautions";
 import { checkPackVoltage, selectedModes } from "./checks";
 import { costSummary, type CostSummary } from "./costs";
+import { massSummary, type MassSummary } from "./mass";
 import type { ChargePlan } from "./electrical/charger";
 import { packSummary, type PackSummary } from "./electrical/pack";
 import { jsonSafe } from "./json-safe";
@@ -44,6 +45,8 @@ export interface BuildEvaluation {
   };
   cautions: Caution[];
   costs: CostSummary;
+  /** Mass of the parts that give one (what a heavier or lighter variant weighs). */
+  mass: MassSummary;
   problems: Problem[];
 }
 
@@ -95,6 +98,7 @@ export function evaluateBuild(build: ResolvedBuild, options: EvaluateOptions = {
     },
     cautions: cautionsFor(build, { maxDriveW: Math.max(0, ...modes.map((m) => m.driveW ?? 0)), hotSurface: touchTight }),
     costs: costSummary(build, chargerCount(build)),
+    mass: massSummary(build),
     problems: [],
   };
   const safe = jsonSafe(result, problems);

@@ -42,6 +42,7 @@ export const FIGURE_KINDS = [
   "resistance",
   "efficacy",
   "heatCapacity",
+  "mass",
 ] as const;
 export type FigureKind = (typeof FIGURE_KINDS)[number];
 
@@ -93,6 +94,7 @@ const RULES: Record<Exclude<FigureKind, "time" | "money">, Rule> = {
   resistance: { unit: () => "mΩ", scale: (v) => v * 1000, decimals: sig(1) },
   efficacy: plain("lm/W", fixed(0)),
   heatCapacity: plain("J/K", sig(2)),
+  mass: { unit: () => "g", scale: (v) => v * 1000, decimals: sig(1) },
 };
 
 /** Prints `v` with `decimals` decimals; a result that rounds to zero is "0", never "−0". */
@@ -249,6 +251,7 @@ const TRACE_UNITS: Record<string, FigureKind> = {
   ohm: "resistance",
   "lm/W": "efficacy",
   "J/K": "heatCapacity",
+  kg: "mass",
   "€": "money",
   EUR: "money",
 };

@@ -2,12 +2,13 @@ import "server-only";
 import type { RevisionRow } from "@/db/queries/builds";
 import { getComparison } from "@/db/queries/comparisons";
 import type { BuildViewer } from "@/lib/builds/access";
-import { columnNamesFor, designDiff, figureRows, ladders, sideBySide, summarise, warmupSeries, withTraces } from "@/lib/compare";
+import { columnNamesFor, designDiff, figureRows, ladders, sideBySide, summarise, summaryWithTraces, warmupSeries, withTraces } from "@/lib/compare";
 import { ApiError } from "@/lib/http/api-error";
 import type { CompareItem } from "@/lib/reviews/api-schemas";
 import { buildDesignSchema, type BuildDesign } from "@/lib/retrofit";
 import { loadBuild, loadDesignParts, loadRevision, type LoadedBuild } from "@/server/builds/load";
 import { solveRevision } from "@/server/builds/solve";
+import { reviewsAsReviewer } from "@/server/reviews/load";
 
 type Viewer = NonNullable<BuildViewer>;
 
@@ -62,6 +63,7 @@ export async function compareItems({ items, viewer }: { items: readonly CompareI
   const columnNames = columnNamesFor(differing, loaded.map(({ build }) => build.variantNote ?? build.title));
   const summary = summarise({ names: columnNames, differsIn: differing.map((d) => d.label), evaluations: evals });
   const scenarioIds = [...new Set(evals.flatMap((e) => e.scenarios.map((s) => s.id)))];
+  const reviews = await reviewsAsReviewer({ viewer, revisions: loaded.map(({ build, revision }) => ({ buildId: build.id, revision: revision.number })) });
   return {
     columns: loaded.map(({ build, revision }, i) => ({
       buildId: build.id,
@@ -72,9 +74,11 @@ export async function compareItems({ items, viewer }: { items: readonly CompareI
       ownerName: build.ownerName,
       verdict: evals[i]?.verdict ?? null,
       problems: (evals[i]?.problems ?? []).filter((p) => p.severity !== "info"),
+      /** The viewer's review of this revision (they are its reviewer): comments may be pinned on its heat path here. */
+      review: reviews[i] ?? null,
     })),
     columnNames,
-    summary,
+    summary: summaryWithTraces(summary, evals),
     differences,
     sideBySide: sideBySide(evals),
     ambientC: designs.map((d) => d.environment.ambientC),

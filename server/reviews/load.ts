@@ -1,5 +1,5 @@
 import "server-only";
-import { getReview, listReviewsForBuild, type ReviewRow } from "@/db/queries/reviews";
+import { getReview, listReviewsForBuild, listReviewsForReviewer, type ReviewRow } from "@/db/queries/reviews";
 import type { BuildViewer } from "@/lib/builds/access";
 import { ApiError } from "@/lib/http/api-error";
 import type { LoadedBuild } from "@/server/builds/load";
@@ -31,4 +31,16 @@ export async function loadReview({ id, viewer }: { id: string; viewer: NonNullab
   const role: ReviewRole | null = !row ? null : row.reviewerId === viewer.id ? "reviewer" : row.buildOwnerId === viewer.id ? "owner" : viewer.role === "admin" ? "admin" : null;
   if (!row || !role) throw new ApiError("not_found:review", "No such review, or you take no part in it.", "id");
   return { review: reviewView(row), role };
+}
+
+/**
+ * The viewer's own review (as its reviewer) of each build revision, an open one before a
+ * decided one; null where the viewer reviews none. Side by side lets them pin comments there.
+ */
+export async function reviewsAsReviewer({ viewer, revisions }: { viewer: NonNullable<BuildViewer>; revisions: readonly { buildId: string; revision: number }[] }): Promise<({ id: string; status: ReviewRow["status"] } | null)[]> {
+  const mine = await listReviewsForReviewer({ reviewerId: viewer.id });
+  return revisions.map((r) => {
+    const hit = mine.find((x) => x.buildId === r.buildId && x.revisionNumber === r.revision);
+    return hit ? { id: hit.id, status: hit.status } : null;
+  });
 }

@@ -1,11 +1,13 @@
 import "server-only";
 import { getReview, listComments } from "@/db/queries/reviews";
 import { findReviewShareByHash } from "@/db/queries/review-shares";
+import { getUserById } from "@/db/queries/users";
 import { ApiError } from "@/lib/http/api-error";
-import { anchorLabel, heatPathAnchors } from "@/lib/reviews/anchors";
+import { type UnpublishedPart, withholdUnpublished } from "@/lib/reviews/publish";
+import { anchorLabel, diagramPins, heatPathAnchors } from "@/lib/reviews/anchors";
 import { REVIEW_STATUS_LABELS } from "@/lib/reviews/api-schemas";
 import { SHARE_TOKEN_PATTERN, shareState } from "@/lib/reviews/share-token";
-import { sharedReviewResults, type SharedReviewResults } from "@/lib/reviews/shared-review";
+import { sharedHeatPaths, sharedReviewResults, type SharedHeatPath, type SharedReviewResults } from "@/lib/reviews/shared-review";
 import { loadDesignParts } from "@/server/builds/load";
 import { assertLinkOpen } from "@/server/classes/withheld";
 import { reviewedRevision } from "./anchors";
@@ -16,6 +18,8 @@ export interface SharedReview {
   review: { buildTitle: string; variantNote: string | null; revisionNumber: number; status: string; statusLabel: string; summary: string; reviewerName: string; ownerName: string; createdAt: Date; decidedAt: Date | null };
   comments: { authorName: string; target: string; body: string; createdAt: Date }[];
   results: SharedReviewResults | null;
+  /** Each scenario's heat path, figures withheld where they would show an unpublished part, with the comments pinned on it. */
+  heatPaths: (SharedHeatPath & { pins: Record<string, number> })[];
   expiresAt: Date | null;
 }
 
@@ -50,11 +54,19 @@ export async function openReviewShare({ token }: { token: string }): Promise<Sha
   const solved = reviewed?.solved ?? null;
   const anchors = solved ? heatPathAnchors(solved.evaluation) : { nodes: [], links: [], figures: [] };
   let results: SharedReviewResults | null = null;
+  let heatPaths: SharedReview["heatPaths"] = [];
+  let unpublished: UnpublishedPart[] = [];
   if (reviewed && solved) {
     const publicParts = await loadDesignParts({ design: reviewed.design, viewer: null });
+    const isPublic = (id: string) => publicParts.get(id)?.visibility === "public";
+    // A link's name may quote its part ("strap <name>: …"): an unpublished part is not named through the link.
+    const owner = await getUserById({ id: review.buildOwnerId });
+    const ownerParts = owner ? await loadDesignParts({ design: reviewed.design, viewer: { id: owner.id, role: owner.role } }) : new Map<string, { id: string; name: string }>();
+    unpublished = [...ownerParts.values()].filter((p) => !isPublic(p.id)).map((p) => ({ id: p.id, name: p.name }));
+    heatPaths = withholdUnpublished(sharedHeatPaths(solved.evaluation, reviewed.design, isPublic), unpublished).map((h) => ({ ...h, pins: diagramPins(comments, h.scenarioId) }));
     const open = new Set<Slot>((Object.keys(SLOT_PATHS) as Slot[]).filter((slot) => {
       const id = partIdAt(reviewed.design, SLOT_PATHS[slot]);
-      return id !== null && publicParts.get(id)?.visibility === "public";
+      return id !== null && isPublic(id);
     }));
     results = sharedReviewResults(solved.evaluation, open);
   }
@@ -71,8 +83,9 @@ export async function openReviewShare({ token }: { token: string }): Promise<Sha
       createdAt: review.createdAt,
       decidedAt: review.decidedAt,
     },
-    comments: comments.map((c) => ({ authorName: c.authorName, target: anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), body: c.body, createdAt: c.createdAt })),
+    comments: comments.map((c) => ({ authorName: c.authorName, target: withholdUnpublished(anchorLabel(anchors, { kind: c.anchorKind, key: c.anchorKey }), unpublished), body: c.body, createdAt: c.createdAt })),
     results,
+    heatPaths,
     expiresAt: link.expiresAt,
   };
 }

@@ -120,7 +120,27 @@ describe("Side by side and the Review desk in chromium", () => {
     // Its first line says which driver cooling wins in each mode; the next lines say why, with numbers.
     await expect.poll(() => lines.first().textContent()).toMatch(/^Driver (strapped to the housing|pressed to the wall|floating free) wins in /);
     expect(await lines.nth(1).textContent()).toMatch(/(wins|tie|no variant wins).* K /);
+    // Every figure of the summary table opens to its derivation, as on the Budget: formula, inputs, source.
+    const cell = page.getByTestId("compare-summary-table").locator("td[data-winner]").first();
+    await cell.locator("summary").first().click();
+    await expect.poll(() => cell.textContent()).toMatch(/Source: /);
+    const costRow = page.getByTestId("compare-summary-table").locator("tr").filter({ hasText: "parts cost" });
+    await costRow.locator("summary").first().click();
+    await expect.poll(() => costRow.textContent()).toContain("Parts cost: every priced part times its count");
     await shot(page, "reviewer-compare-summary");
+    // A ladder's total opens to ambient plus its rungs.
+    const totals = page.getByTestId("compare-place-ladders").getByRole("region", { name: "Ladder, driver board" }).getByTestId("ladder-totals").first();
+    await totals.locator("summary").first().click();
+    await expect.poll(() => totals.textContent()).toContain("ambient plus every rung of the ladder");
+    // Pins where the reviewer reviews: on Side by side, click the driver board in the column under review.
+    const reviewed = page.getByTestId("compare-heat-path").filter({ hasText: "you review this" }).first();
+    await reviewed.locator('[data-pin-target="node:driver"]').click();
+    const pinForm = page.getByRole("form", { name: "Pin a comment" });
+    await expect.poll(() => pinForm.getByTestId("pin-target").textContent()).toMatch(/Pinned to: driver board, (\w+ mode|charging) — in your review of /);
+    await pinForm.getByLabel("Comment").fill("Side by side: this column's driver board is the one to watch.");
+    await pinForm.getByRole("button", { name: "Pin the comment" }).click();
+    await reviewed.locator('[data-pin-target="node:driver"]').getByTestId("pin-mark").waitFor();
+    await shot(page, "reviewer-compare-pinned");
 
     await page.goto(`${BASE_URL}/reviews`);
     await page.getByRole("button", { name: /^Notifications/ }).click();
@@ -141,6 +161,16 @@ describe("Side by side and the Review desk in chromium", () => {
     // The pin is drawn on the diagram.
     await page.getByTestId("heat-path-diagram").first().locator('[data-pin-target="node:driver"]').getByTestId("pin-mark").waitFor();
     await shot(page, "review-pinned-on-driver-board");
+    // A point of the warm-up chart takes a pin too, named by place, time and scenario, and is drawn on the chart.
+    const chart = page.getByTestId("warmup-chart").first();
+    const box = (await chart.locator("canvas").boundingBox())!;
+    await chart.locator("canvas").click({ position: { x: box.width * 0.6, y: box.height * 0.35 } });
+    await expect.poll(() => page.getByTestId("pin-target").textContent()).toMatch(/Pinned to: warm-up of the [A-Za-z ]+ at \d+ (s|min|h)( \d+ min)?, (\w+ mode|charging)$/);
+    await page.getByLabel("Comment", { exact: true }).fill("Look at how fast it climbs here.");
+    await page.getByRole("button", { name: "Pin the comment" }).click();
+    await page.getByTestId("review-comment").filter({ hasText: "how fast it climbs" }).waitFor();
+    await expect.poll(() => page.getByTestId("chart-pins").textContent()).toMatch(/1 comment on the [A-Za-z ]+ at \d+/);
+    await shot(page, "review-pinned-on-warmup-chart");
     const verdict = page.getByRole("form", { name: "Verdict" });
     await verdict.getByLabel("changes requested").check();
     // Before the button is pressed the form says the summary is still missing.
@@ -165,6 +195,11 @@ describe("Side by side and the Review desk in chromium", () => {
       await expect.poll(() => anon.getByTestId("shared-verdict").textContent()).toContain("Keep the copper strap");
       await expect.poll(() => anon.getByTestId("shared-comment").filter({ hasText: "keeps its headroom" }).textContent()).toMatch(/driver board, \w+ mode/);
       expect(await anon.locator("body").textContent()).not.toMatch(/@sinkwise\.test/);
+      // The reviewed revision's heat path, with the pin on the driver board drawn on it.
+      const shared = anon.getByTestId("shared-heat-path");
+      await shared.getByTestId("heat-path-diagram").waitFor();
+      await shared.getByRole("tab").filter({ hasText: "pinned" }).first().click();
+      await shared.getByTestId("pin-mark").first().waitFor();
       await shot(anon, "review-share-link-signed-out");
     } finally {
       await stranger.close();

@@ -14,6 +14,7 @@ let strapped = "";
 let pressed = "";
 let floating = "";
 let hidden = "";
+let reviewId = "";
 
 type Row = { key: string; label: string; values: (number | string | null)[]; deltas: (number | null)[]; judgements: (string | null)[] };
 type Diff = { slot: string; values: string[]; differs: boolean };
@@ -35,7 +36,9 @@ beforeAll(async () => {
   floating = await fork("driver floating free", "floating");
   hidden = await newBuild(otherMaker, { title: "Someone else's lamp", design: { lightEngine: { count: 1 } } });
   // The demo reviewer reviews the strapped one, so may see it (and only it).
-  expect((await owner.post(`/api/v1/builds/${strapped}/reviews`, { reviewerEmail: "reviewer@sinkwise.test" })).status).toBe(201);
+  const asked = await owner.post(`/api/v1/builds/${strapped}/reviews`, { reviewerEmail: "reviewer@sinkwise.test" });
+  expect(asked.status).toBe(201);
+  reviewId = (asked.body.review as { id: string }).id;
 }, 60_000);
 
 describe("side by side: the comparison", () => {
@@ -103,7 +106,12 @@ describe("side by side: the comparison", () => {
   });
 
   it("by role: the assigned reviewer sees the reviewed build only; others 404; admin sees all; anonymous 401", async () => {
-    expect((await reviewer.get(`/api/v1/compare?items=${strapped},${strapped}@1`)).status).toBe(200);
+    const own = await reviewer.get(`/api/v1/compare?items=${strapped},${strapped}@1`);
+    expect(own.status).toBe(200);
+    // The reviewer's own review of that revision comes with each column, so its heat path takes pins there.
+    expect((own.body.columns as { review: { id: string; status: string } | null }[]).map((c) => c.review)).toEqual([{ id: reviewId, status: "requested" }, { id: reviewId, status: "requested" }]);
+    const byOwner = await owner.get(`/api/v1/compare?items=${strapped},${pressed}`);
+    expect((byOwner.body.columns as { review: unknown }[]).map((c) => c.review)).toEqual([null, null]);
     const mixed = await reviewer.get(`/api/v1/compare?items=${strapped},${pressed}`);
     expect(mixed.status).toBe(404);
     expect(mixed.body.error?.path).toBe("items[1]");

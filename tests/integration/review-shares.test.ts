@@ -27,6 +27,7 @@ type Shared = {
   review: { buildTitle: string; status: string; statusLabel: string; summary: string; reviewerName: string; ownerName: string };
   comments: { authorName: string; target: string; body: string }[];
   results: { verdict: string | null; scenarios: { label: string; limits: { place: string; temperatureC: number; limitC: number | null; headroomK: number | null }[] }[] } | null;
+  heatPaths: { scenarioId: string; label: string; pins: Record<string, number>; thermal: { nodes: { id: string; place: string }[]; links: { from: string; to: string; place: string; watts: number | null; kelvinPerWatt: number | null }[]; temperaturesC: Record<string, number> } }[];
 };
 
 beforeAll(async () => {
@@ -110,6 +111,16 @@ describe("review share links", () => {
     expect(Number.isFinite(place("driver board")!.temperatureC)).toBe(true);
     // The housing surface limit is a touch threshold, not a part's rating: it is shown.
     expect(place("housing surface")?.limitC).toEqual(expect.any(Number));
+    // The heat path is drawn with the reviewer's pin on the driver board in high mode; links through the
+    // owner's private emitter and driver carry no figures, the housing's (a public part) do.
+    const path = body.heatPaths.find((h) => h.scenarioId === "mode:high");
+    expect(path?.pins).toEqual({ "node:driver": 1 });
+    expect(path!.thermal.nodes.map((n) => n.place)).toEqual(expect.arrayContaining(["driver board", "LED junction"]));
+    const fromDriver = path!.thermal.links.filter((l) => l.from === "driver");
+    expect(fromDriver.length).toBeGreaterThan(0);
+    for (const l of fromDriver) expect(l).toMatchObject({ watts: null, kelvinPerWatt: null });
+    for (const l of path!.thermal.links.filter((x) => x.from === "junction")) expect(l.kelvinPerWatt).toBeNull();
+    expect(path!.thermal.links.some((l) => l.kelvinPerWatt !== null && Number.isFinite(l.kelvinPerWatt))).toBe(true);
     // The page reads the same.
     const page = await anonymous.request("GET", `/share/review/${s.token}`);
     expect(page.status).toBe(200);

@@ -192,6 +192,22 @@ describe("reviews: pinned comments and the verdict", () => {
     expect(notes.some((n) => n.kind === "comment" && n.reviewId === id)).toBe(true);
   });
 
+  it("takes a comment pinned on a point of a warm-up curve, named in words, and refuses a point the curve does not have", async () => {
+    const id = await requestReview(await privateBuild("Lantern with a warm-up to pin"));
+    const before = ((await owner.get(`/api/v1/reviews/${id}`)).body.comments as Comment[]).length;
+    const onCurve = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "figure", key: "mode:high/warmup/driver-board/at/2" }, body: "Already close after two minutes." });
+    expect(onCurve.status, JSON.stringify(onCurve.body)).toBe(201);
+    expect((onCurve.body.comment as Comment).target).toBe("warm-up of the driver board at 2 min, high mode");
+    const past = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "figure", key: "mode:high/warmup/driver-board/at/99999" }, body: "x" });
+    expect(past.status).toBe(400);
+    expect(past.body.error?.path).toBe("anchor.key");
+    expect(past.body.error?.message).toMatch(/^Pinned to: that point is not on a warm-up curve of revision \d+/);
+    const nowhere = await reviewer.post(`/api/v1/reviews/${id}/comments`, { anchor: { kind: "figure", key: "mode:turbo/warmup/driver-board/at/2" }, body: "x" });
+    expect(nowhere.status).toBe(400);
+    // Nothing written by the refusals.
+    expect(((await owner.get(`/api/v1/reviews/${id}`)).body.comments as Comment[]).length).toBe(before + 1);
+  });
+
   it("takes the verdict from the assigned reviewer only, e-mails and notifies the maker, and takes it once", async () => {
     const title = `Inspection lamp ${Date.now().toString(36)}`;
     const buildId = await newBuild(owner, { title, design: retrofitDesign(parts, "ground-plane-to-wall") });

@@ -104,6 +104,29 @@ describe("the comparison summary", () => {
     });
     expect(s.lines).toContain("In high mode, wall gives 40 lm less light than strap.");
     expect(s.lines).toContain("Parts cost: strap €18.50 and wall €21.00.");
+    // No masses given: nothing said about mass.
+    expect(s.lines.some((l) => l.startsWith("Mass"))).toBe(false);
+  });
+
+  it("says what each variant weighs when the masses differ, and once when they do not", () => {
+    const heavy = summarise({
+      names: ["strap", "wall"],
+      differsIn: ["Driver cooling"],
+      evaluations: [{ ...evaluation([mode("High", [driver(5)])]), mass: { totalKg: 0.412 } }, { ...evaluation([mode("High", [driver(35)])]), mass: { totalKg: 0.455 } }],
+    });
+    expect(heavy.lines).toContain("Mass: strap 412 g and wall 455 g.");
+    expect(heavy.massesKg).toEqual([0.412, 0.455]);
+    // A strap of copper tape weighs under a gram: within 2 % of the lantern's mass, said once.
+    const alike = summarise({
+      names: NAMES,
+      differsIn: ["Driver cooling"],
+      evaluations: [0.4123, 0.4117, 0.4117].map((kg) => ({ ...evaluation([mode("High", [driver(20)])]), mass: { totalKg: kg } })),
+    });
+    expect(alike.lines).toContain("Mass: 412 g for all three (within 2 %).");
+    // One column without a mass: no mass line rather than a partial one.
+    const partial = summarise({ names: ["a", "b"], differsIn: [], evaluations: [{ ...evaluation([mode("High", [driver(5)])]), mass: { totalKg: 0.4 } }, evaluation([mode("High", [driver(5)])])] });
+    expect(partial.lines.some((l) => l.startsWith("Mass"))).toBe(false);
+    expect(partial.massesKg).toEqual([0.4, null]);
   });
 
   it("says when a limit is reached in the warm-up, and when a column could not be worked out", () => {

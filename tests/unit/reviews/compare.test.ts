@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { columnNamesFor, designDiff, figureRows, ladders, warmupSeries } from "@/lib/compare";
-import { anchorLabel, anchorProblem, heatPathAnchors } from "@/lib/reviews/anchors";
+import { anchorLabel, anchorProblem, curvePointKey, diagramPins, heatPathAnchors } from "@/lib/reviews/anchors";
+import { sharedHeatPaths } from "@/lib/reviews/shared-review";
 import { buildDesignSchema, type BuildEvaluation } from "@/lib/retrofit";
 
 const names = (id: string) => ({ tape: "Copper tape strap", pad: "Gap pad", drv: "Buck driver" })[id];
@@ -101,5 +102,68 @@ describe("review anchors", () => {
     expect(anchorProblem(a, { kind: "node", key: "driver#mode:high" })).toBeNull();
     expect(anchorProblem(a, { kind: "node", key: "driver#mode:turbo" })).toBe("Pinned to: that place in the heat path does not exist in this revision; click a place, a link or a row that is shown, then pin the comment.");
     expect(anchorProblem(a, { kind: "node", key: "sink" }, 3)).toBe("Pinned to: that place in the heat path does not exist in revision 3; click a place, a link or a row that is shown, then pin the comment.");
+  });
+});
+
+describe("pins on a point of a warm-up curve", () => {
+  const a = heatPathAnchors(evaluation({ driverC: 80, headroomK: 20, limitAtS: null, runtimeH: 2, cost: 30, verdict: "tight" }));
+  it("names the place, the time and the scenario in words", () => {
+    const key = curvePointKey("mode:high/warmup/driver-board", 1.04);
+    expect(key).toBe("mode:high/warmup/driver-board/at/1");
+    expect(anchorProblem(a, { kind: "figure", key })).toBeNull();
+    expect(anchorLabel(a, { kind: "figure", key })).toBe("warm-up of the driver board at 1 min, high mode");
+    // The hand-made warm-up runs 2 min: its last point may be pinned, a later one may not.
+    expect(anchorProblem(a, { kind: "figure", key: "mode:high/warmup/driver-board/at/2" })).toBeNull();
+  });
+  it("refuses a point past the warm-up or on a curve the revision does not have, in words", () => {
+    const past = "Pinned to: that point is not on a warm-up curve of revision 2; click a point on the curve that is shown, then pin the comment.";
+    expect(anchorProblem(a, { kind: "figure", key: "mode:high/warmup/driver-board/at/5" }, 2)).toBe(past);
+    expect(anchorProblem(a, { kind: "figure", key: "mode:high/warmup/touch/at/1" }, 2)).toBe(past);
+    expect(anchorProblem(a, { kind: "figure", key: "mode:turbo/warmup/driver-board/at/1" }, 2)).toBe(past);
+    expect(anchorLabel(a, { kind: "figure", key: "mode:high/warmup/driver-board/at/5" })).toBe("a figure no longer on the Budget");
+  });
+  it("draws the heat path's pins of one scenario and of the heat path as a whole", () => {
+    const comments = [
+      { anchorKind: "node" as const, anchorKey: "driver#mode:high" },
+      { anchorKind: "node" as const, anchorKey: "driver#mode:high" },
+      { anchorKind: "node" as const, anchorKey: "driver#mode:low" },
+      { anchorKind: "link" as const, anchorKey: "driver->wall" },
+      { anchorKind: "figure" as const, anchorKey: "mode:high/warmup/driver-board/at/1" },
+    ];
+    expect(diagramPins(comments, "mode:high")).toEqual({ "node:driver": 2, "link:driver->wall": 1 });
+    expect(diagramPins(comments, "charging")).toEqual({ "link:driver->wall": 1 });
+  });
+});
+
+describe("a review link's heat path", () => {
+  // Slots as the compiler names them; the driver is the owner's private part, the rest public or absent.
+  function withSlots(): BuildEvaluation {
+    const e = evaluation({ driverC: 80, headroomK: 20, limitAtS: null, runtimeH: 2, cost: 30, verdict: "tight" }) as unknown as { scenarios: { thermal: { links: object[]; temperaturesC?: object }; network?: object }[] };
+    const s = e.scenarios[0]!;
+    s.thermal.temperaturesC = { junction: 90, driver: 80 };
+    s.network = { ambientC: 20 };
+    s.thermal.links = [
+      { index: 0, from: "junction", to: "sink", place: "emitter to heatsink", slot: "lightEngine.emitter", watts: 3, kelvinPerWatt: 4.2 },
+      { index: 1, from: "driver", to: "wall", place: "copper strap", slot: "driver.cooling", watts: 0.8, kelvinPerWatt: 12.5 },
+      { index: 2, from: "wall", to: "ambient", place: "housing to air", slot: "environment.air", watts: 3.8, kelvinPerWatt: 9 },
+    ];
+    return e as unknown as BuildEvaluation;
+  }
+  const designWith = (driver: object, housing: object = { partId: "box" }) => ({ lightEngine: { emitter: { partId: "led" } }, driver: { part: driver, cooling: { kind: "strapped", spreader: { partId: "tape" } } }, housing, environment: { ambientC: 20 } });
+  const isPublic = (id: string) => ["led", "tape", "box"].includes(id);
+
+  it("withholds the figures of links through a part that is not published, and keeps the rest", () => {
+    const [h] = sharedHeatPaths(withSlots(), designWith({ partId: "secret-driver" }), isPublic);
+    expect(h).toMatchObject({ scenarioId: "mode:high", label: "high mode", ambientC: 20 });
+    expect(h!.thermal.links.map((l) => [l.place, l.watts, l.kelvinPerWatt])).toEqual([["emitter to heatsink", 3, 4.2], ["copper strap", null, null], ["housing to air", 3.8, 9]]);
+    expect(JSON.stringify(h)).not.toContain("12.5");
+    expect(h!.thermal.temperaturesC).toEqual({ junction: 90, driver: 80 });
+  });
+
+  it("treats a part typed in place as unpublished, and the air around a private housing as the housing's", () => {
+    const [typed] = sharedHeatPaths(withSlots(), designWith({ inline: { topology: "buck" } }), isPublic);
+    expect(typed!.thermal.links[1]).toMatchObject({ watts: null, kelvinPerWatt: null });
+    const [box] = sharedHeatPaths(withSlots(), designWith({ partId: "led" }, { partId: "my-box" }), isPublic);
+    expect(box!.thermal.links.map((l) => l.kelvinPerWatt)).toEqual([4.2, 12.5, null]);
   });
 });

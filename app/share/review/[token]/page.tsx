@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { VERDICT_STYLE } from "@/components/budget/format";
 import { PinIcon } from "@/components/reviews/pin-icon";
+import { SharedHeatPaths } from "@/components/reviews/shared-heat-paths";
 import { ApiError } from "@/lib/http/api-error";
 import { DASH, formatAgainstLimit, formatFigure, formatHeadroom } from "@/lib/units/figures";
 import { openReviewShare } from "@/server/reviews/review-share";
@@ -49,6 +50,10 @@ export default async function SharedReviewPage({ params }: { params: Promise<{ t
             </li>
           ))}
         </ol>
+      </section>
+      <section aria-label="Heat path" className="space-y-2 rounded-lg border border-line bg-white/60 p-4 text-sm" data-testid="shared-heat-path">
+        <h2 className="font-semibold">Heat path of revision {r.revisionNumber}</h2>
+        <SharedHeatPaths heatPaths={shared.heatPaths} />
       </section>
       {shared.results && (
         <section aria-label="Limits" className="space-y-3 rounded-lg border border-line bg-white/60 p-4 text-sm">

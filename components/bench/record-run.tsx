@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { type FormEvent, useState } from "react";
 import { ApiClientError } from "@/components/ui/fetch-json";
+import { BENCH_LABELS, benchFieldOf } from "@/lib/bench/labels";
 import { FINISHES, materialOptions } from "@/lib/parts";
 import { FitChart } from "./fit-chart-lazy";
 import { FitSummary } from "./fit-summary";
@@ -19,35 +20,19 @@ export interface PoweredOption {
   group: "Parts" | "Builds";
 }
 
-/** Field labels on this form, for messages that name a field (the API's path stays in `path`). */
-const LABELS: Record<string, string> = {
-  title: "Title",
-  ambientC: "Ambient",
-  heatW: "Heat into the sink",
-  volts: "Volts",
-  amps: "Amps",
-  heatFraction: "Heat fraction",
-  massKg: "Sink mass",
-  material: "Material",
-  finish: "Finish",
-  readings: "Readings",
-  mode: "Driver mode",
-};
-
 /** A refusal in words: the reading by its number, the field by its label; never a schema path. */
 function describe(err: ApiClientError): string {
   const stripped = err.message.replace(/^[\w.[\]]+: /, "");
   const reading = /readings\[(\d+)\]\.(tS|tempC)$/.exec(err.path);
   if (reading && !/^Reading \d+/.test(stripped)) return `Reading ${Number(reading[1]) + 1}: ${reading[2] === "tS" ? "time" : "temperature"} ${stripped}`;
-  const label = LABELS[fieldOf(err.path)];
-  return label && !/^(Reading|One reading|The |No )/.test(stripped) ? `${label}: ${stripped}` : stripped;
+  // The API names the field by its label on this form; a message about a reading names the reading.
+  const label = BENCH_LABELS[benchFieldOf(err.path)];
+  if (!label || err.message.startsWith(`${label}: `) || /^(Reading|One reading|The |No )/.test(stripped)) return err.message;
+  return `${label}: ${stripped}`;
 }
 
-function fieldOf(path: string): string {
-  if (path === "powered.mode") return "mode";
-  const key = path.replace(/^conditions\./, "").split(/[.[]/)[0] ?? "";
-  return key;
-}
+/** The fields with a text box of their own: their message shows beside it. */
+const TYPED_FIELDS = new Set(["title", "mode", "heatW", "volts", "amps", "heatFraction", "ambientC", "massKg"]);
 
 function Field({ name, label, placeholder, hint, error }: { name: string; label: string; placeholder: string; hint?: string; error?: string }) {
   return (
@@ -68,9 +53,9 @@ export function RecordRun({ powered }: { powered: PoweredOption[] }) {
   const fit = useFit();
   const save = useSaveRun();
   const err = (save.error ?? fit.error) instanceof ApiClientError ? ((save.error ?? fit.error) as ApiClientError) : null;
-  const errorKey = err ? fieldOf(err.path) : "";
-  const errorFor = (key: string) => (err && errorKey === key && LABELS[key] ? err.message.replace(/^[^:]*: /, "") : undefined);
-  const inline = err !== null && errorKey !== "readings" && LABELS[errorKey] !== undefined && (errorKey !== "heatW" || heatMode === "watts");
+  const errorKey = err ? benchFieldOf(err.path) : "";
+  const errorFor = (key: string) => (err && errorKey === key && TYPED_FIELDS.has(key) ? err.message.replace(/^[^:]*: /, "") : undefined);
+  const inline = err !== null && TYPED_FIELDS.has(errorKey) && (errorKey !== "heatW" || heatMode === "watts");
   const generalError = err && !inline ? describe(err) : null;
 
   function conditionsOf(form: HTMLFormElement) {

@@ -95,9 +95,9 @@ export function DerivationView({ derivation: d, exampleId, hiddenKeys, open = fa
             {d.limits.map((l) => (
               <tr key={l.key} className="align-top">
                 <td className="pr-2">{l.place}{l.kind === "min" ? " (lower limit)" : ""}</td>
-                <td className="pr-2"><Value q={l.temperature} exampleId={null} hiddenKeys={hiddenKeys} /></td>
-                <td className="pr-2 font-mono">{fmtValue(l.limit.value, "°C")}</td>
-                <td className="pr-2"><Value q={l.headroom} exampleId={exampleId} hiddenKeys={hiddenKeys} /></td>
+                <td className="whitespace-nowrap pr-2"><Value q={l.temperature} exampleId={null} hiddenKeys={hiddenKeys} /></td>
+                <td className="whitespace-nowrap pr-2 font-mono">{fmtValue(l.limit.value, "°C")}</td>
+                <td className="whitespace-nowrap pr-2"><Value q={l.headroom} exampleId={exampleId} hiddenKeys={hiddenKeys} /></td>
                 <td className="text-ink-soft">{l.source}</td>
               </tr>
             ))}

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { formatQuantity } from "./format";
 import { parseQuantity } from "./parse";
-import { METRIC_PREFERENCES, type Quantity, type UnitChoice } from "./quantities";
+import { METRIC_PREFERENCES, QUANTITY_INFO, type Quantity, type UnitChoice } from "./quantities";
 
 export interface UnitFieldOptions {
   /** Inclusive bounds, in the storage unit. */
@@ -18,9 +18,10 @@ export interface UnitFieldOptions {
 
 export type UnitInput = number | string;
 
-// Bounds are printed the way the metric form shows them, so "must be at least 0 g" reads
-// in the unit the person most likely typed.
-const show = (value: number, quantity: Quantity) => formatQuantity(value, quantity, METRIC_PREFERENCES, { digits: 6 });
+// Bounds are printed the way the metric form shows them, so "must be at least 5 g" reads
+// in the unit the person most likely typed. Zero is printed in the quantity's plain unit
+// ("greater than 0 W"), not the smallest one on the ladder ("0 mW").
+const show = (value: number, quantity: Quantity) => formatQuantity(value, quantity, METRIC_PREFERENCES, { digits: 6, ...(value === 0 ? { unit: QUANTITY_INFO[quantity].bare } : {}) });
 
 /** Checks a parsed value against the field's bounds; returns the message or null. */
 export function checkBounds(value: number, quantity: Quantity, options: UnitFieldOptions): string | null {

@@ -82,6 +82,15 @@ describe("Classroom in chromium", () => {
     await page.getByLabel("Feedback", { exact: true }).fill("Floating free the driver runs hottest: try pressing it to the wall.");
     await page.getByRole("button", { name: "Send feedback" }).click();
     await page.getByRole("status").filter({ hasText: "notified in the app and by e-mail" }).waitFor({ timeout: 60_000 });
+
+    // The build behind the example with questions: its share links stay closed until the reveal, and its Heat path says so.
+    const builds = (await (await page.request.get(`${BASE_URL}/api/v1/builds`)).json()) as { mine: { id: string; title: string }[] };
+    const inspection = builds.mine.find((b) => b.title === "Teaching copy: inspection lamp")!;
+    await page.goto(`${BASE_URL}/builds/${inspection.id}`);
+    const warning = page.getByTestId("share-warning");
+    await warning.waitFor();
+    expect(await warning.textContent()).toMatch(/^While the worked example “Your turn: the inspection lamp's driver” keeps values hidden from its class, links to this build do not open/);
+    await page.getByTestId("build-reviews").screenshot({ path: `${ARTEFACTS}/classroom-instructor-share-warning.png` });
   }, 600_000);
 
   it("a student answers a hidden value, forks an example into Side by side and reads the feedback on their hand-in", async () => {

@@ -45,7 +45,7 @@ describe("POST /api/v1/bench/fit", () => {
       [{ ambientC: 25, heatW: 7, readings: [{ tS: 1200, tempC: 60 }] }, 422, "readings", /give the mass or at least two readings/],
       [{ ambientC: 25, heatW: 7, readings: [{ tS: 600, tempC: 40 }, { tS: 300, tempC: 50 }] }, 422, "readings[1].tS", /^Reading 2: its time/],
       [{ ambientC: 25, heatW: 7, readings: [{ tS: 60, tempC: 30 }, { tS: 120, tempC: 20 }] }, 422, "readings[1].tempC", /below the ambient/],
-      [{ ambientC: 25, heatW: 0, readings }, 400, "heatW", /greater than 0/],
+      [{ ambientC: 25, heatW: 0, readings }, 400, "heatW", /^Heat into the sink: must be greater than 0 W$/],
       [{ ambientC: 25, heatW: "seven", readings }, 400, "heatW", /./],
       [{ ambientC: 25, heatW: 7 }, 400, "readings", /readings/],
       [{ ambientC: 25, volts: 3, amps: 2, readings }, 400, "heatFraction", /required when the heat is not given in watts/],

@@ -22,7 +22,7 @@ export function celsiusAgainst(c: number, limitC: number, kind: "max" | "min"): 
 
 export const euros = (eur: number | null | undefined): string => formatMoney(eur);
 
-/** A mass given in kg, shown in grams ("412 g"). */
+/** A mass given in kg, shown as the formatter shows masses ("412 g"). */
 export const mass = (kg: number | null | undefined): string => formatInUnit(kg, "kg");
 
 export const lumens = (lm: number | null | undefined): string => formatFigure(lm, "flux");

@@ -4,6 +4,7 @@ import { NextResponse } from "next/server";
 import type { z } from "zod";
 import { isDatabaseDown } from "@/db/client";
 import { ApiError, formatIssuePath, fromZodError } from "@/lib/http/api-error";
+import type { LabelResolver } from "@/lib/messages";
 import { isThermalInputError } from "@/lib/thermal";
 import { env } from "@/server/env";
 import { fromTrustedProxy } from "@/server/http/client-address";
@@ -157,7 +158,7 @@ function loneSurrogatePath(value: unknown, path: PropertyKey[] = [], depth = 0):
 }
 
 /** Reads a JSON body (within the route's limit) and parses it with the schema; errors name the field. */
-export async function readJson<T extends z.ZodType>(request: Request, schema: T, subject: string): Promise<z.infer<T>> {
+export async function readJson<T extends z.ZodType>(request: Request, schema: T, subject: string, labels?: LabelResolver): Promise<z.infer<T>> {
   const bytes = await readBody(request);
   let text: string;
   try {
@@ -177,7 +178,7 @@ export async function readJson<T extends z.ZodType>(request: Request, schema: T,
     throw new ApiError(`bad_request:${subject}`, `${path ? `${path}: ` : ""}the text holds a broken character (a lone UTF-16 surrogate); type it again.`, path);
   }
   const parsed = schema.safeParse(value);
-  if (!parsed.success) throw fromZodError(parsed.error, subject, value);
+  if (!parsed.success) throw fromZodError(parsed.error, subject, value, labels);
   return parsed.data;
 }
 

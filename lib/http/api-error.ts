@@ -1,5 +1,5 @@
 import type { z } from "zod";
-import { labelsForSubject, machinePath, plainIssues } from "@/lib/messages";
+import { labelsForSubject, type LabelResolver, machinePath, plainIssues } from "@/lib/messages";
 
 /**
  * One place that maps an error code to an HTTP status. Codes look like
@@ -46,9 +46,10 @@ export const formatIssuePath = machinePath;
 /**
  * Turns a validation error into an ApiError: the message names the field by its label on
  * screen in plain words (lib/messages), the path keeps the machine path of the first issue.
- * `body` lets the labels depend on what was sent (a part's kind).
+ * `body` lets the labels depend on what was sent (a part's kind); `labels` replaces the
+ * subject's labels (a route whose form names its fields its own way).
  */
-export function fromZodError(error: z.ZodError, subject: string, body?: unknown): ApiError {
-  const first = plainIssues(error, labelsForSubject(subject, body))[0];
+export function fromZodError(error: z.ZodError, subject: string, body?: unknown, labels?: LabelResolver): ApiError {
+  const first = plainIssues(error, labels ?? labelsForSubject(subject, body))[0];
   return new ApiError(`bad_request:${subject}`, first?.message ?? "The request could not be read.", first?.path ?? "");
 }

@@ -1,5 +1,4 @@
 import { CURVE_KIND_INFO, type CurveKind } from "@/lib/curves/kinds";
-import { BENCH_LABELS, benchFieldOf } from "@/lib/bench/labels";
 import { COMMON_FIELDS, KIND_DEFINITIONS, PART_KINDS, type PartKind } from "@/lib/parts";
 import { DESIGN_LABELS, DESIGN_SLOTS, type DesignField } from "@/lib/retrofit/design-labels";
 import { QUICK_CHECK_LABELS } from "@/lib/retrofit/quick-check-labels";
@@ -120,12 +119,6 @@ const quickCheckLabels: LabelResolver = (path) => {
   return null;
 };
 
-/** A bench run or a fit: the run form's labels for its own fields (a reading's fields are named by the reading). */
-const benchLabels: LabelResolver = (path) => {
-  const own = path.length === 1 || (path.length === 2 && (path[0] === "conditions" || (path[0] === "powered" && path[1] === "mode")));
-  return own ? (BENCH_LABELS[benchFieldOf(path.join("."))] ?? null) : null;
-};
-
 const generalLabels: LabelResolver = (path) => (path.length === 1 && typeof path[0] === "string" ? (GENERAL_LABELS[path[0]] ?? null) : null);
 
 /** The labels of the body a route reads, by the route's subject ("build", "part", "check", …). */
@@ -141,9 +134,6 @@ export function labelsForSubject(subject: string, body?: unknown): LabelResolver
     }
     case "check":
       return quickCheckLabels;
-    case "bench":
-    case "bench_run":
-      return benchLabels;
     default:
       return generalLabels;
   }

@@ -1,4 +1,5 @@
 import { listVisibleRuns } from "@/server/bench/load";
+import { benchLabels } from "@/lib/bench/labels";
 import { READINGS_BODY_LIMIT } from "@/lib/bench/schema";
 import { saveRunSchema } from "@/lib/bench/run-schema";
 import { runSummaryJson } from "@/server/bench/json";
@@ -16,7 +17,7 @@ export const GET = route(async () => {
 /** Records a run (fitted first when it is a warm-up of a sink; nothing is saved if the fit is refused). */
 export const POST = route(async (request) => {
   const user = await requireUser();
-  const input = await readJson(request, saveRunSchema, "bench_run");
+  const input = await readJson(request, saveRunSchema, "bench_run", benchLabels);
   const { id, fit } = await saveRun({ input, viewer: user });
   return json({ run: { id, url: `/bench/${id}` }, fit }, 201);
 }, READINGS_BODY_LIMIT);

@@ -4,7 +4,7 @@ import { BuildActions } from "@/components/builds/build-actions";
 import { BuildReviews } from "@/components/reviews/build-reviews";
 import type { JsonObject } from "@/components/builds/design-state";
 import { HeatPathEditor } from "@/components/builds/heat-path-editor";
-import { MembersPanel } from "@/components/builds/members-panel";
+import { MembersPanel } from "@/components/builds/members-panel-lazy";
 import { PartsChangedNotice } from "@/components/builds/parts-changed-notice";
 import { loadBuildPage } from "@/server/builds/load";
 import { partChangesSince } from "@/server/builds/part-changes";

@@ -25,7 +25,7 @@ export {
 export { ThermalInputError, isThermalInputError, type ThermalErrorCode } from "./errors";
 export { AMBIENT_ID } from "./ids";
 export { STEFAN_BOLTZMANN, STANDARD_GRAVITY, ZERO_CELSIUS_K, NETWORK_LIMITS, toKelvin, toCelsius } from "./constants";
-export { solveSteady, steadyTemperatures, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
+export { solveSteady, steadyTemperatures, sourceSweep, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
 export type { SteadyOptions } from "./solver/steady";
 export { solveTransient, prepareTransient, type PreparedTransient, type TransientResult, type Crossing, type TransientSolverSettings } from "./solve-transient";
 export { makeTrace, quantity, elementResult, type Trace, type TraceQuantity, type TraceValidity, type ElementResult } from "./trace";

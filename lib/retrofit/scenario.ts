@@ -1,4 +1,4 @@
-import { AMBIENT_ID, breakdownRise, isThermalInputError, prepareTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
+import { AMBIENT_ID, breakdownRise, extend, isThermalInputError, prepareTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
 import type { CompiledBuild } from "./compile";
 import { calibratedTrace, scaleLink } from "./compile/calibration";
 import type { LinkPlace, NodePlace } from "./compile/builder";
@@ -79,7 +79,7 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
     const link = net.links[i]!;
     return calibratedTrace(l.trace ?? traceLink(scaleLink(link, 1 / l.calibration.factor), at(link.from), at(link.to)), l.calibration);
   };
-  const links = compiled.links.map((l, i): LinkResult => ({ ...l, watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: modelTrace(l, i) }));
+  const links = compiled.links.map((l, i): LinkResult => extend(l, { watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: modelTrace(l, i) }));
   const byPlace = Object.fromEntries(compiled.nodes.map((n) => [n.place, steady.temperaturesC[n.id] ?? 0]));
   const limits = evaluateLimits(defs, steady.temperaturesC, o.marginK);
   let ladder: ThermalResult["ladder"] = null;

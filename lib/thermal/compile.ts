@@ -3,6 +3,7 @@ import { toKelvin } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
 import { linkModel } from "./link-models";
+import { extend } from "./record";
 import type { Network } from "./schema";
 import { groupLinks } from "./solver/assemble";
 import type { CompiledLink, CompiledNetwork } from "./solver/compiled";
@@ -96,7 +97,7 @@ export function setCompiledSources(c: CompiledNetwork, sources: Network["sources
   let linear = c.links.every((l) => l.model.linear);
   for (let k = 0; k < c.n; k++) if (c.p1[k] !== 0) linear = false;
   c.linear = linear;
-  c.network = { ...c.network, sources };
+  c.network = extend(c.network, { sources });
 }
 
 /**

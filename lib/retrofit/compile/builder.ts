@@ -1,4 +1,4 @@
-import type { Network, NetworkLink, NetworkNode, Trace } from "@/lib/thermal";
+import { extend, type Network, type NetworkLink, type NetworkNode, type Trace } from "@/lib/thermal";
 import type { ProblemList } from "../problems";
 
 /** Names of the places the Budget screen shows; a node or link always maps to one of them. */
@@ -71,7 +71,7 @@ export class NetworkBuilder {
 
   link(link: NetworkLink, place: string, slot: string, trace?: Trace): number {
     const index = this.links.length;
-    this.links.push({ ...link, label: place });
+    this.links.push(extend(link, { label: place }));
     this.linkPlaces.push({ index, from: link.from, to: link.to, place, slot, ...(trace ? { trace } : {}) });
     return index;
   }

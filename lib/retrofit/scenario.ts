@@ -1,4 +1,4 @@
-import { AMBIENT_ID, breakdownRise, extend, isThermalInputError, prepareTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
+import { AMBIENT_ID, breakdownRise, extend, setEntry, isThermalInputError, prepareTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
 import type { CompiledBuild } from "./compile";
 import { calibratedTrace, scaleLink } from "./compile/calibration";
 import type { LinkPlace, NodePlace } from "./compile/builder";
@@ -166,7 +166,8 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
       });
       settled = steadyAt !== null && pending.every((p, i) => !p || crossings[i] !== null);
       t0 += chunk;
-      initialC = Object.fromEntries(ids.map((id, j) => [id, dest[j]![dest[j]!.length - 1]!]));
+      initialC = {};
+      for (let j = 0; j < ids.length; j++) setEntry(initialC, ids[j]!, dest[j]![dest[j]!.length - 1]!);
     }
     const end = timesS[timesS.length - 1] ?? 0;
     return {

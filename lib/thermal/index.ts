@@ -58,6 +58,6 @@ export {
   type ScaleAnswer,
   type Root,
   type LimitTarget, type MaxPowerOptions, type MaxPowerResult, type MaxResistanceOptions, type MaxResistanceResult } from "./inverse";
-export { extend } from "./record";
+export { extend, setEntry } from "./record";
 export { breakdownRise, type RiseBreakdown, type RiseStep } from "./breakdown";
 export { explainLinks, traceLink } from "./explain";

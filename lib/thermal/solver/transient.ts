@@ -37,7 +37,8 @@ export interface CompiledTransientSolution {
 /** Output instants: every stepS from 0, plus durationS itself when it is not a whole number of steps. */
 export function outputTimes(durationS: number, stepS: number): number[] {
   const whole = Math.floor(durationS / stepS + 1e-9);
-  const times = Array.from({ length: whole + 1 }, (_, k) => k * stepS);
+  const times: number[] = [];
+  for (let k = 0; k <= whole; k++) times.push(k * stepS);
   if (durationS - whole * stepS > 1e-9 * stepS) times.push(durationS);
   else times[whole] = durationS;
   return times;
@@ -95,12 +96,19 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
   const n = c.n;
   const ws = takeWorkspace(n, c.pattern);
   const times = outputTimes(o.durationS, o.stepS);
-  const series = Array.from({ length: n }, () => new Float64Array(times.length));
-  let prev = new Float64Array(n);
+  // Two buffers carved into views, one for the samples and one for the four working vectors,
+  // rather than n + 4 arrays (see scratch.ts on what each allocation costs; a long warm-up
+  // runs in several chunks, each a solve of its own).
+  const m = times.length;
+  const samples = new Float64Array(n * m);
+  const series = Array.from({ length: n }, (_, i) => samples.subarray(i * m, (i + 1) * m));
+  const work = new Float64Array(4 * n);
+  let prev = work.subarray(0, n);
   // The point before `prev`, for the predictor only.
-  let prev2 = new Float64Array(n);
-  let cur = Float64Array.from(o.initialK);
-  const next = new Float64Array(n);
+  let prev2 = work.subarray(n, 2 * n);
+  let cur = work.subarray(2 * n, 3 * n);
+  cur.set(o.initialK);
+  const next = work.subarray(3 * n);
   const stats: StepStats = { newton: 0, factor: 0, factoredFor: NaN };
 
   // Nodes without heat capacity follow their neighbours at once, also at t = 0.

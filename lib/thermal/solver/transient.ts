@@ -101,7 +101,8 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
   // runs in several chunks, each a solve of its own).
   const m = times.length;
   const samples = new Float64Array(n * m);
-  const series = Array.from({ length: n }, (_, i) => samples.subarray(i * m, (i + 1) * m));
+  const series: Float64Array[] = [];
+  for (let i = 0; i < n; i++) series.push(samples.subarray(i * m, (i + 1) * m));
   const work = new Float64Array(4 * n);
   let prev = work.subarray(0, n);
   // The point before `prev`, for the predictor only.

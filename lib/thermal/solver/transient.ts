@@ -24,8 +24,8 @@ interface StepStats {
 
 export interface CompiledTransientSolution {
   timesS: number[];
-  /** One Float64Array per solver node, kelvin. */
-  series: Float64Array[];
+  /** One array per solver node, kelvin at each output instant. */
+  series: number[][];
   newtonIterations: number;
   factorisations: number;
   /** Internal steps rejected and retried shorter (internal: the public answer keeps its shape). */
@@ -96,13 +96,12 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
   const n = c.n;
   const ws = takeWorkspace(n, c.pattern);
   const times = outputTimes(o.durationS, o.stepS);
-  // Two buffers carved into views, one for the samples and one for the four working vectors,
-  // rather than n + 4 arrays (see scratch.ts on what each allocation costs; a long warm-up
-  // runs in several chunks, each a solve of its own).
-  const m = times.length;
-  const samples = new Float64Array(n * m);
-  const series: Float64Array[] = [];
-  for (let i = 0; i < n; i++) series.push(samples.subarray(i * m, (i + 1) * m));
+  // The samples go into plain arrays (the form the answer takes, so the caller need not
+  // copy them) and the four working vectors are views of one buffer: a typed array of its
+  // own costs more to allocate (see scratch.ts), and a long warm-up runs in several chunks,
+  // each a solve of its own.
+  const series: number[][] = [];
+  for (let i = 0; i < n; i++) series.push([]);
   const work = new Float64Array(4 * n);
   let prev = work.subarray(0, n);
   // The point before `prev`, for the predictor only.
@@ -118,7 +117,7 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
     returnWorkspace(ws);
     throw stepError(start, 0);
   }
-  for (let i = 0; i < n; i++) series[i]![0] = cur[i]!;
+  for (let i = 0; i < n; i++) series[i]!.push(cur[i]!);
 
   const minStepS = o.stepS / 2 ** MAX_HALVINGS;
   // Length of the previous accepted step (0: none yet, so the next is backward Euler).
@@ -178,7 +177,7 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
       // Grow back; once a doubled step covers an output interval the normal path resumes.
       if (hMax !== Infinity) hMax = 2 * h >= o.stepS ? Infinity : 2 * h;
     }
-    for (let i = 0; i < n; i++) series[i]![k] = cur[i]!;
+    for (let i = 0; i < n; i++) series[i]!.push(cur[i]!);
   }
   returnWorkspace(ws);
   return { timesS: times, series, newtonIterations: stats.newton, factorisations: stats.factor, rejectedSteps: rejected, residualW };

@@ -1,4 +1,4 @@
-import { isThermalInputError, monotoneRoot, sourceSweep, type Network } from "@/lib/thermal";
+import { isThermalInputError, monotoneRoot, sourceSweep, type Network, type NetworkCheck } from "@/lib/thermal";
 import { compileBuild, scenarioSources, type ScenarioHeat } from "./compile";
 import { chargePlan, DEFAULT_REGULATION_C, type ChargePlan } from "./electrical/charger";
 import { cellHeat, type PackSummary } from "./electrical/pack";
@@ -32,7 +32,8 @@ export interface ChargingOutcome {
 }
 
 /** Charging: emitter and driver off, charger and cells inside the housing. */
-export function runCharging(build: ResolvedBuild, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList): ChargingOutcome {
+/** `check`: the evaluation's schema check of its networks (see NetworkCheck). */
+export function runCharging(build: ResolvedBuild, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList, check: NetworkCheck): ChargingOutcome {
   const charger = build.pack.charger;
   if (!charger) {
     problems.add("pack.charger", "no charger in the build: the charging scenario is left out", "info");
@@ -55,7 +56,7 @@ export function runCharging(build: ResolvedBuild, pack: PackSummary | null, o: R
   };
   let compiled = compileAt(plan, problems);
   if (!compiled) return { plan, scenario: base };
-  let steady = trySteady(compiled, field, problems, true);
+  let steady = trySteady(compiled, field, problems, check);
   if (!steady) return { plan, scenario: base };
   // The charge's heat is all that changes with its current: the search keeps the heat path compiled here.
   const rated = compiled;
@@ -64,7 +65,7 @@ export function runCharging(build: ResolvedBuild, pack: PackSummary | null, o: R
   if (held !== null) {
     plan = chargePlan(charger, count, pack, held);
     compiled = compileAt(plan, new ProblemList());
-    steady = compiled ? trySteady(compiled, field, problems, false) : null;
+    steady = compiled ? trySteady(compiled, field, problems, null) : null;
     if (!compiled || !steady) return { plan, scenario: base };
     const t = plan.throttle!;
     problems.add(field, `the linear charger${count > 1 ? "s" : ""} reach${count > 1 ? "" : "es"} ${t.regulationC} °C (die regulation${t.fromPart ? "" : ", assumed"}) and hold${count > 1 ? "" : "s"} ${plan.currentA.toFixed(2)} A instead of ${plan.ratedCurrentA.toFixed(2)} A: the charge takes ${(plan.totalHours.value ?? 0).toFixed(1)} h instead of ${t.ratedHours.toFixed(1)} h`, "warning");

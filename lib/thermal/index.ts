@@ -22,6 +22,7 @@ export {
   type TransientRequest,
   type TransientOptions,
 } from "./schema";
+export { NetworkCheck, type NetworkIssue } from "./network-check";
 export { ThermalInputError, isThermalInputError, type ThermalErrorCode } from "./errors";
 export { AMBIENT_ID } from "./ids";
 export { STEFAN_BOLTZMANN, STANDARD_GRAVITY, ZERO_CELSIUS_K, NETWORK_LIMITS, toKelvin, toCelsius } from "./constants";

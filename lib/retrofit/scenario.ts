@@ -150,16 +150,17 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
       residualW = r.residualW;
       // Each chunk after the first starts where the last ended: skip its repeated first sample.
       const src = ids.map((id) => r.temperaturesC[id]!);
-      for (let k = t0 === 0 ? 0 : 1; k < r.timesS.length; k++) {
+      const first = t0 === 0 ? 0 : 1;
+      for (let j = 0; j < ids.length; j++) {
+        const from = src[j]!;
+        const to = dest[j]!;
+        for (let k = first; k < from.length; k++) to.push(from[k]!);
+      }
+      for (let k = first; k < r.timesS.length; k++) {
         const t = t0 + r.timesS[k]!;
         timesS.push(t);
-        let inBand = true;
-        for (let j = 0; j < ids.length; j++) {
-          const v = src[j]![k]!;
-          dest[j]!.push(v);
-          if (Math.abs(v - (steadyC[j] ?? v)) > STEADY_BAND_K) inBand = false;
-        }
-        if (inBand && steadyAt === null) steadyAt = t;
+        // Once one sample is in the band, the later ones need no look.
+        if (steadyAt === null && !src.some((from, j) => Math.abs(from[k]! - (steadyC[j] ?? from[k]!)) > STEADY_BAND_K)) steadyAt = t;
       }
       r.crossings?.forEach((x, i) => {
         if (crossings[i] === null && x.timeS !== null) crossings[i] = t0 + x.timeS;

@@ -36,6 +36,23 @@ export function db(): Db {
 }
 
 /**
+ * Something made from the client once per client, such as prepared statements (their SQL is
+ * built once, not on every call); made again only for a new client.
+ */
+export function preparedOnce<T>(make: () => T): () => T {
+  const made = new WeakMap<Db, T>();
+  return () => {
+    const client = db();
+    let value = made.get(client);
+    if (value === undefined) {
+      value = make();
+      made.set(client, value);
+    }
+    return value;
+  };
+}
+
+/**
  * True when the error means MariaDB is not reachable or went away (rather than a bad query):
  * refused or reset connections, a server shutting down, a pool that is full, or any error the
  * driver marks fatal for its connection. Each of these is a 503, never a 500.

@@ -4,9 +4,10 @@
  * each request (the whole evaluation runs: every mode's steady state, warm-up, inverse
  * problems, and charging); "cached" is the answer for an unchanged revision. The server
  * reports the evaluation's own time (Server-Timing: evaluate); the target is a cold median
- * of at most 2 × that evaluation time + 5 ms per demo build. Prints figures only.
+ * of at most 2 × that evaluation time + 5 ms per demo build. Requests go over one kept-alive
+ * connection with Node's HTTP client (see `request`). Prints figures only.
  */
-import { BENCH_DB, connectBenchDb, median, prepareBenchDb, quantile, startBenchServer } from "./bench-server";
+import { BENCH_DB, connectBenchDb, median, prepareBenchDb, quantile, request, startBenchServer } from "./bench-server";
 import { target } from "./bench-targets";
 
 const COLD_RUNS = 7;
@@ -22,11 +23,11 @@ export async function benchBuilds(): Promise<void> {
     const list = (await (await fetch(`${server.base}/api/v1/builds`, { headers: { cookie } })).json()) as { mine: { id: string; title: string }[] };
     const solve = async (id: string, body = "{}") => {
       const t0 = performance.now();
-      const r = await fetch(`${server.base}/api/v1/builds/${id}/solve`, { method: "POST", headers: { cookie, origin: server.base, "content-type": "application/json" }, body });
-      const text = await r.text();
+      const r = await request(`${server.base}/api/v1/builds/${id}/solve`, { method: "POST", headers: { cookie, origin: server.base, "content-type": "application/json" }, body });
       const ms = performance.now() - t0;
+      const text = r.text;
       if (r.status !== 200) throw new Error(`solve ${id} → ${r.status}`);
-      const timing = r.headers.get("server-timing") ?? "";
+      const timing = r.header("server-timing") ?? "";
       const dur = (name: string) => {
         const v = new RegExp(`${name};dur=([\\d.]+)`).exec(timing)?.[1];
         return v === undefined ? null : Number(v);

@@ -1,7 +1,7 @@
 import "server-only";
-import { and, desc, eq, isNull, like, ne, or, sql } from "drizzle-orm";
+import { and, desc, eq, isNull, like, ne, or, type Placeholder, sql } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
-import { db } from "../client";
+import { db, pool, preparedOnce } from "../client";
 import { buildInvitations, buildMembers, buildRevisions, builds, exercises, handins, reviews, revisionParts, solveCache, users, workedExamples } from "../schema";
 import { snapshotPartsInTx } from "./snapshots";
 import { classReaderSql, withheldExampleSql } from "./classwork";
@@ -79,24 +79,65 @@ export async function listBuilds({ viewer, q }: { viewer: { id: string; role: st
   return { mine, shared, archived };
 }
 
-/** A build with the viewer's access; undefined when it does not exist or may not be seen. */
-export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer }): Promise<(BuildSummary & { access: BuildAccess }) | undefined> {
-  const rows = await db()
-    .select({
-      ...summaryColumns,
-      memberEdit: buildMembers.canEdit,
-      memberUser: buildMembers.userId,
-      // Any review of this build assigned to the viewer lets them read it (never edit).
-      assigned: sql<number>`exists(select 1 from ${reviews} where ${reviews.buildId} = ${builds.id} and ${reviews.reviewerId} = ${viewer?.id ?? ""})`,
-      classReader: classReaderSql(builds.id, viewer?.id ?? ""),
-      withheld: withheldExampleSql(builds.id, viewer?.id ?? ""),
-    })
-    .from(builds)
-    .innerJoin(users, eq(users.id, builds.ownerId))
-    .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer?.id ?? "")))
-    .where(eq(builds.id, id))
-    .limit(1);
-  const row = rows[0];
+/**
+ * The columns of a build as one viewer sees it: the summary and the facts its access rule
+ * needs (membership, an assigned review, a class that lets them read it, a worked example
+ * that still withholds its values from them). `viewer` is the viewer's id as a placeholder.
+ */
+function buildWithAccessColumns(viewer: Placeholder) {
+  return {
+    ...summaryColumns,
+    memberEdit: buildMembers.canEdit,
+    memberUser: buildMembers.userId,
+    // Any review of this build assigned to the viewer lets them read it (never edit).
+    assigned: sql<number>`exists(select 1 from ${reviews} where ${reviews.buildId} = ${builds.id} and ${reviews.reviewerId} = ${viewer})`,
+    classReader: classReaderSql(builds.id, viewer),
+    withheld: withheldExampleSql(builds.id, viewer),
+  };
+}
+
+const revisionColumns = {
+  id: buildRevisions.id,
+  buildId: buildRevisions.buildId,
+  number: buildRevisions.number,
+  design: buildRevisions.design,
+  note: buildRevisions.note,
+  createdBy: buildRevisions.createdBy,
+  createdAt: buildRevisions.createdAt,
+};
+
+/**
+ * The two build reads every build page and route starts with, as prepared statements: their
+ * SQL is built once per process, not on every request. "withRevision" also reads one revision
+ * (the `number` given, or the current one when it is null) in the same round trip.
+ */
+const buildStatements = preparedOnce(() => {
+  const viewer = sql.placeholder("viewer");
+  return {
+    build: db()
+      .select(buildWithAccessColumns(viewer))
+      .from(builds)
+      .innerJoin(users, eq(users.id, builds.ownerId))
+      .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer)))
+      .where(eq(builds.id, sql.placeholder("id")))
+      .limit(1)
+      .prepare(),
+    withRevision: db()
+      .select({ ...buildWithAccessColumns(viewer), revision: revisionColumns })
+      .from(builds)
+      .innerJoin(users, eq(users.id, builds.ownerId))
+      .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer)))
+      .leftJoin(buildRevisions, and(eq(buildRevisions.buildId, builds.id), sql`${buildRevisions.number} = coalesce(${sql.placeholder("number")}, ${builds.currentRevision})`))
+      .where(eq(builds.id, sql.placeholder("id")))
+      .limit(1)
+      .prepare(),
+  };
+});
+
+type BuildWithAccessRow = Awaited<ReturnType<ReturnType<typeof buildStatements>["build"]["execute"]>>[number];
+
+/** The build of a row read with its access facts, when the viewer may see it. */
+function visibleBuild(viewer: BuildViewer, row: BuildWithAccessRow | undefined): (BuildSummary & { access: BuildAccess }) | undefined {
   if (!row) return undefined;
   const { memberEdit, memberUser, assigned, classReader, withheld, ...build } = row;
   const access = buildAccess(viewer, {
@@ -108,6 +149,27 @@ export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer
     withheld: Number(withheld) === 1,
   });
   return access.canView ? { ...build, access } : undefined;
+}
+
+/** A build with the viewer's access; undefined when it does not exist or may not be seen. */
+export async function getBuild({ id, viewer }: { id: string; viewer: BuildViewer }): Promise<(BuildSummary & { access: BuildAccess }) | undefined> {
+  const rows = await buildStatements().build.execute({ id, viewer: viewer?.id ?? "" });
+  return visibleBuild(viewer, rows[0]);
+}
+
+/**
+ * A build with the viewer's access and one of its revisions (`number`, or the current one),
+ * read in one round trip; undefined when the build does not exist or may not be seen. The
+ * revision is undefined when the build has no revision of that number.
+ */
+export async function getBuildAndRevision({ id, viewer, number }: { id: string; viewer: BuildViewer; number?: number }): Promise<{ build: BuildSummary & { access: BuildAccess }; revision: RevisionRow | undefined } | undefined> {
+  const rows = await buildStatements().withRevision.execute({ id, viewer: viewer?.id ?? "", number: number ?? null });
+  const row = rows[0];
+  if (!row) return undefined;
+  const { revision, ...rest } = row;
+  const build = visibleBuild(viewer, rest);
+  if (!build) return undefined;
+  return { build, revision: revision ? { ...revision, design: parseJson(revision.design) } : undefined };
 }
 
 export async function getRevision({ buildId, number }: { buildId: string; number: number }): Promise<RevisionRow | undefined> {
@@ -246,23 +308,46 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
 }
 
 /** The cached result as stored JSON text, so a cache hit is sent without parsing it. */
-export async function getCachedResultText({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<string | undefined> {
-  // Selected as plain SQL so the JSON column's text is not parsed on the way out.
-  const rows = await db()
-    .select({ result: sql<string>`${solveCache.result}` })
+/**
+ * What the solve cache holds for a revision, in one round trip: every key, newest first, and
+ * the result under `cacheKey` as its UTF-8 bytes (read as bytes and never parsed: a hit goes
+ * to the client as it is).
+ */
+const cacheStatements = preparedOnce(() => ({
+  entries: db()
+    .select({
+      key: solveCache.cacheKey,
+      result: sql<Buffer | null>`case when ${solveCache.cacheKey} = ${sql.placeholder("key")} then cast(${solveCache.result} as binary) end`,
+    })
     .from(solveCache)
-    .where(and(eq(solveCache.revisionId, revisionId), eq(solveCache.cacheKey, cacheKey)))
-    .limit(1);
-  const value: unknown = rows[0]?.result;
-  if (value === undefined) return undefined;
-  return typeof value === "string" ? value : JSON.stringify(value);
+    .where(eq(solveCache.revisionId, sql.placeholder("revision")))
+    .orderBy(desc(solveCache.createdAt))
+    .limit(50)
+    .prepare(),
+}));
+
+export async function getCacheEntries({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<{ hit: Buffer | undefined; keys: string[] }> {
+  const rows = await cacheStatements().entries.execute({ revision: revisionId, key: cacheKey });
+  const hit: unknown = rows.find((r) => r.key === cacheKey)?.result;
+  const bytes = Buffer.isBuffer(hit) ? hit : typeof hit === "string" ? Buffer.from(hit, "utf8") : undefined;
+  return { hit: bytes, keys: rows.map((r) => r.key) };
 }
 
+/** One cached result as its UTF-8 bytes, or undefined. */
+export async function getCachedResult({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<Buffer | undefined> {
+  return (await getCacheEntries({ revisionId, cacheKey })).hit;
+}
+
+/**
+ * Keeps a result (its JSON text) under a key. The text, a few hundred kB, goes as a parameter of
+ * a server-side prepared statement: it is neither escaped into the SQL nor parsed out of it
+ * again, which costs the server and MariaDB several milliseconds of CPU each on the text path.
+ */
 export async function putCachedResult({ revisionId, cacheKey, resultJson }: { revisionId: string; cacheKey: string; resultJson: string }): Promise<void> {
-  await db()
-    .insert(solveCache)
-    .values({ revisionId, cacheKey, result: sql`${resultJson}`, createdAt: new Date() })
-    .onDuplicateKeyUpdate({ set: { result: sql`VALUES(${solveCache.result})`, createdAt: new Date() } });
+  await pool().execute(
+    "INSERT INTO solve_cache (revision_id, cache_key, result, created_at) VALUES (?, ?, ?, ?) ON DUPLICATE KEY UPDATE result = VALUES(result), created_at = VALUES(created_at)",
+    [revisionId, cacheKey, resultJson, new Date()],
+  );
 }
 
 export interface BuildMemberRow {

@@ -1,7 +1,7 @@
 import "server-only";
-import { and, desc, eq, inArray, ne, sql } from "drizzle-orm";
-import { db, type Db } from "../client";
-import { parts, revisionPartSnapshots, solveCache, revisionSolverChanges, users } from "../schema";
+import { and, eq, inArray, sql } from "drizzle-orm";
+import { db, type Db, preparedOnce } from "../client";
+import { parts, revisionPartSnapshots, revisionSolverChanges, users } from "../schema";
 import { type PartRecord, recordColumns, toRecord } from "./parts";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
@@ -34,9 +34,24 @@ export async function snapshotPartsInTx(tx: Tx, revisionId: string, partIds: rea
   );
 }
 
+/** The reads every solve makes, prepared once (see preparedOnce). */
+const statements = preparedOnce(() => ({
+  snapshot: db()
+    .select({ partId: revisionPartSnapshots.partId, record: revisionPartSnapshots.record })
+    .from(revisionPartSnapshots)
+    .where(eq(revisionPartSnapshots.revisionId, sql.placeholder("revision")))
+    .prepare(),
+  solverChange: db()
+    .select({ previousVersion: revisionSolverChanges.previousVersion, changes: revisionSolverChanges.changes })
+    .from(revisionSolverChanges)
+    .where(and(eq(revisionSolverChanges.revisionId, sql.placeholder("revision")), eq(revisionSolverChanges.solverVersion, sql.placeholder("version"))))
+    .limit(1)
+    .prepare(),
+}));
+
 /** The revision's snapshot by part id; undefined when the revision has none yet (saved before snapshots). */
 export async function getSnapshot({ revisionId }: { revisionId: string }): Promise<Map<string, PartRecord> | undefined> {
-  const rows = await db().select({ partId: revisionPartSnapshots.partId, record: revisionPartSnapshots.record }).from(revisionPartSnapshots).where(eq(revisionPartSnapshots.revisionId, revisionId));
+  const rows = await statements().snapshot.execute({ revision: revisionId });
   if (rows.length === 0) return undefined;
   return new Map(rows.map((r) => [r.partId, fromStored(parseJson(r.record) as StoredRecord)]));
 }
@@ -56,42 +71,13 @@ export async function putSnapshotOnce({ revisionId, records }: { revisionId: str
   return (await getSnapshot({ revisionId })) ?? records;
 }
 
-/**
- * The newest cached result of this revision worked out by another solver version, as text
- * (cache keys are "<version>" or, before snapshots, "<version>:<parts fingerprint>").
- */
-export async function getPreviousResultText({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<{ solverVersion: string; text: string } | undefined> {
-  const keys = await db()
-    .select({ key: solveCache.cacheKey })
-    .from(solveCache)
-    .where(and(eq(solveCache.revisionId, revisionId), ne(solveCache.cacheKey, solverVersion)))
-    .orderBy(desc(solveCache.createdAt))
-    .limit(20);
-  const key = keys.map((k) => k.key).find((k) => (k.split(":")[0] ?? k) !== solverVersion);
-  if (key === undefined) return undefined;
-  const rows = await db()
-    .select({ result: sql<string>`${solveCache.result}` })
-    .from(solveCache)
-    .where(and(eq(solveCache.revisionId, revisionId), eq(solveCache.cacheKey, key)))
-    .limit(1);
-  const row = rows[0];
-  if (!row) return undefined;
-  // The driver may hand a JSON column back parsed (MariaDB reports its type) or as text.
-  const value: unknown = row.result;
-  return { solverVersion: key.split(":")[0] ?? key, text: typeof value === "string" ? value : JSON.stringify(value) };
-}
-
 export interface SolverChange {
   previousVersion: string;
   changes: string[];
 }
 
 export async function getSolverChange({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<SolverChange | null> {
-  const rows = await db()
-    .select({ previousVersion: revisionSolverChanges.previousVersion, changes: revisionSolverChanges.changes })
-    .from(revisionSolverChanges)
-    .where(and(eq(revisionSolverChanges.revisionId, revisionId), eq(revisionSolverChanges.solverVersion, solverVersion)))
-    .limit(1);
+  const rows = await statements().solverChange.execute({ revision: revisionId, version: solverVersion });
   const row = rows[0];
   return row ? { previousVersion: row.previousVersion, changes: parseJson(row.changes) as string[] } : null;
 }

@@ -1,6 +1,6 @@
 import "server-only";
 import { notFound } from "next/navigation";
-import { getBuild, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
+import { getBuild, getBuildAndRevision, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
 import { getParts, partUsage, type PartRecord } from "@/db/queries/parts";
 import type { BuildAccess, BuildViewer } from "@/lib/builds/access";
 import { collectPartIds } from "@/lib/builds/part-ids";
@@ -27,6 +27,17 @@ export async function loadRevision({ build, number }: { build: LoadedBuild; numb
   const revision = await getRevision({ buildId: build.id, number: n });
   if (!revision) throw new ApiError("not_found:revision", `This build has no revision ${n}.`, "revision");
   return revision;
+}
+
+/**
+ * A build the viewer may see and one of its revisions (`number`, or the current one), read
+ * together: 404 for a build they may not see (as loadBuild), then for a missing revision.
+ */
+export async function loadBuildRevision({ id, viewer, number }: { id: string; viewer: BuildViewer; number?: number }): Promise<{ build: LoadedBuild; revision: RevisionRow }> {
+  const found = await getBuildAndRevision({ id, viewer, number });
+  if (!found) throw new ApiError("not_found:build", "No such build, or it is not shared with you.", "id");
+  if (!found.revision) throw new ApiError("not_found:revision", `This build has no revision ${number ?? found.build.currentRevision}.`, "revision");
+  return { build: found.build, revision: found.revision };
 }
 
 /**
@@ -64,8 +75,7 @@ export async function loadBuildPage(params: Promise<{ id: string }>): Promise<{ 
   const user = await requirePageUser();
   const { id } = await params;
   try {
-    const build = await loadBuild({ id, viewer: user });
-    return { user, build, revision: await loadRevision({ build }) };
+    return { user, ...(await loadBuildRevision({ id, viewer: user })) };
   } catch (e) {
     if (e instanceof ApiError) notFound();
     throw e;

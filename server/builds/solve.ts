@@ -1,8 +1,8 @@
 import "server-only";
 import { after } from "next/server";
-import { getCachedResultText, putCachedResult, type RevisionRow } from "@/db/queries/builds";
+import { getCacheEntries, getCachedResult, putCachedResult, type RevisionRow } from "@/db/queries/builds";
 import type { PartRecord } from "@/db/queries/parts";
-import { getPreviousResultText, getSnapshot, getSolverChange, putSnapshotOnce, putSolverChange, type SolverChange } from "@/db/queries/snapshots";
+import { getSnapshot, getSolverChange, putSnapshotOnce, putSolverChange, type SolverChange } from "@/db/queries/snapshots";
 import { figureChanges } from "@/lib/builds/solver-change";
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, forCharts, resolveBuild } from "@/lib/retrofit";
@@ -110,28 +110,36 @@ function afterAnswer(work: () => Promise<void>): void {
   }
 }
 
+/** The solver version a cache key was written by ("<version>", "<version>:chart", or before snapshots "<version>:<parts fingerprint>"). */
+const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
+
 /**
- * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when it holds this key. The answer is
- * kept as JSON text: a cache hit goes to the client without being parsed and re-serialised.
+ * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when
+ * it holds this key. A cached answer is kept as its JSON bytes: a hit goes to the client without
+ * being parsed, re-serialised or re-encoded. Everything a request needs before it can evaluate
+ * (the cache's keys and a hit, the parts snapshot, a recorded solver change) is asked for at
+ * once, so a miss waits for one round trip, not three.
  */
-async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
+async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const keys: Record<Curves, string> = { full: SOLVER_VERSION, chart: `${SOLVER_VERSION}:chart` };
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
   // The snapshot holds the parts as the owner saw them: whoever may see the build (a
   // reviewer, a class member, a share link) gets the owner's Budget, though the owner's
   // private part records themselves stay private (only their effect on the figures shows).
-  // It is read while the cache is asked, so a miss waits for one round trip, not two.
   const recordsRead = revisionPartRecords({ build, revision });
+  const changeRead = getSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
   recordsRead.catch(() => undefined);
-  const hit = await getCachedResultText({ revisionId: revision.id, cacheKey: keys[curves] });
-  if (hit !== undefined) {
-    const solverChange = await getSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
-    return { head: { ...base, solverChange, cached: true }, evaluationJson: hit };
+  changeRead.catch(() => undefined);
+  const cache = await getCacheEntries({ revisionId: revision.id, cacheKey: keys[curves] });
+  if (cache.hit !== undefined) {
+    return { head: { ...base, solverChange: await changeRead, cached: true }, evaluationJson: cache.hit };
   }
   const records = await recordsRead;
-  // An older solver's result for this revision, asked for while the evaluation runs.
-  const previousRead = getPreviousResultText({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
-  previousRead.catch(() => undefined);
+  // The newest result an older solver gave this revision, to say what moved (rare: once per
+  // revision after the solver changes).
+  const previousKey = cache.keys.find((k) => versionOfKey(k) !== SOLVER_VERSION);
+  const previousRead = previousKey === undefined ? undefined : getCachedResult({ revisionId: revision.id, cacheKey: previousKey });
+  previousRead?.catch(() => undefined);
   const t0 = performance.now();
   const full = evaluateRevision({ design: revision.design, records });
   const evaluateMs = performance.now() - t0;
@@ -139,27 +147,28 @@ async function solveToText({ build, revision, curves = "full" }: SolveArgs): Pro
   const evaluation = shapes[curves]();
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
   const serializeMs = performance.now() - t0 - evaluateMs;
-  const solverChange = solverChangeFrom(await previousRead, full);
+  const previous = previousKey === undefined ? undefined : await previousRead;
+  const solverChange = previousKey !== undefined && previous ? solverChangeFrom({ solverVersion: versionOfKey(previousKey), text: previous.toString("utf8") }, full) : null;
   // What moved and both shapes are kept after the answer has left: a slow or failed write
   // costs the next caller a recomputation, never this caller time or an error. The change
   // goes first, so whoever reads the cached result finds it.
   afterAnswer(async () => {
     if (solverChange) await putSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION, change: solverChange });
-    await Promise.all(
-      (["chart", "full"] as const).map((c) => {
-        const text = c === curves ? evaluationJson : JSON.stringify(roundedForDisplay(shapes[c]()));
-        return putCachedResult({ revisionId: revision.id, cacheKey: keys[c], resultJson: text }).catch((e: unknown) => {
-          console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
-        });
-      }),
-    );
+    // The shape this caller asked for is text already; the other is made only once that is
+    // stored, so the work is spread out rather than done in one block.
+    const keep = (c: Curves, text: string) =>
+      putCachedResult({ revisionId: revision.id, cacheKey: keys[c], resultJson: text }).catch((e: unknown) => {
+        console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
+      });
+    await keep(curves, evaluationJson);
+    const other: Curves = curves === "chart" ? "full" : "chart";
+    await keep(other, JSON.stringify(roundedForDisplay(shapes[other]())));
   });
   return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation, evaluateMs, serializeMs };
 }
 
 /** Compares a fresh result with the last one an older solver gave: what moved, or null when there was none. */
-function solverChangeFrom(previous: { solverVersion: string; text: string } | undefined, evaluation: BuildEvaluation): SolverChange | null {
-  if (!previous) return null;
+function solverChangeFrom(previous: { solverVersion: string; text: string }, evaluation: BuildEvaluation): SolverChange | null {
   let before: unknown;
   try {
     before = JSON.parse(previous.text);
@@ -171,17 +180,20 @@ function solverChangeFrom(previous: { solverVersion: string; text: string } | un
 
 export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
   const r = await solveToText(args);
-  return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(r.evaluationJson) as BuildEvaluation) };
+  const text = typeof r.evaluationJson === "string" ? r.evaluationJson : r.evaluationJson.toString("utf8");
+  return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(text) as BuildEvaluation) };
 }
 
 /**
- * The solve route's body as JSON text (`RevisionSolve`), built around the cached text, and
- * how long the evaluation itself and its serialisation (the chart shape, rounded) took when
- * they ran (not on a cache hit).
+ * The solve route's body (`RevisionSolve` as JSON, in UTF-8), built around the cached bytes,
+ * and how long the evaluation itself and its serialisation (the chart shape, rounded) took
+ * when they ran (not on a cache hit).
  */
-export async function solveRevisionJson(args: SolveArgs): Promise<{ json: string; evaluateMs?: number; serializeMs?: number }> {
+export async function solveRevisionJson(args: SolveArgs): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
   const r = await solveToText(args);
-  return { json: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
+  const head = `${JSON.stringify(r.head).slice(0, -1)},"evaluation":`;
+  const body = typeof r.evaluationJson === "string" ? Buffer.from(`${head}${r.evaluationJson}}`, "utf8") : Buffer.concat([Buffer.from(head, "utf8"), r.evaluationJson, Buffer.from("}", "utf8")]);
+  return { body: new Uint8Array(body.buffer as ArrayBuffer, body.byteOffset, body.byteLength), evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
 }
 
 /** Resolves the design against the part records and runs the evaluation (pure from here on). */

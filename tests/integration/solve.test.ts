@@ -68,6 +68,13 @@ describe("POST /api/v1/builds/[id]/solve", () => {
   it("refuses anonymous callers and people the build is not shared with", async () => {
     expect((await new Client().post(`/api/v1/builds/${buildId}/solve`, {})).status).toBe(401);
     expect((await stranger.post(`/api/v1/builds/${buildId}/solve`, {})).status).toBe(404);
+    // Asking for a revision that exists and one that does not gives a stranger the same answer:
+    // the build is read with its revision in one query, and nothing of it shows before access.
+    const existing = await stranger.post(`/api/v1/builds/${buildId}/solve`, { revision: 1 });
+    const absent = await stranger.post(`/api/v1/builds/${buildId}/solve`, { revision: 99 });
+    expect([existing.status, absent.status]).toEqual([404, 404]);
+    expect(existing.body).toEqual(absent.body);
+    expect(existing.body.error?.path).toBe("id");
   });
 });
 

@@ -2,15 +2,14 @@ import { buildReferences, deleteBuild, saveRevision, setBuildArchived, updateBui
 import { updateBuildSchema } from "@/lib/builds/api-schemas";
 import { ApiError } from "@/lib/http/api-error";
 import { requireUser } from "@/server/auth/session";
-import { assertDesignParts, loadBuild, loadEditableBuild, loadRevision } from "@/server/builds/load";
+import { assertDesignParts, loadBuild, loadBuildRevision, loadEditableBuild } from "@/server/builds/load";
 import { json, readJson, route } from "@/server/route";
 
 type Ctx = { params: Promise<{ id: string }> };
 
 export const GET = route<Ctx>(async (_request, { params }) => {
   const user = await requireUser();
-  const build = await loadBuild({ id: (await params).id, viewer: user });
-  const revision = await loadRevision({ build });
+  const { build, revision } = await loadBuildRevision({ id: (await params).id, viewer: user });
   return json({ build, revision });
 });
 

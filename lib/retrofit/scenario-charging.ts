@@ -31,8 +31,7 @@ export interface ChargingOutcome {
   scenario: ScenarioResult | null;
 }
 
-/** Charging: emitter and driver off, charger and cells inside the housing. */
-/** `check`: the evaluation's schema check of its networks (see NetworkCheck). */
+/** Charging: emitter and driver off, charger and cells inside the housing. `check`: the evaluation's schema check of its networks (see NetworkCheck). */
 export function runCharging(build: ResolvedBuild, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList, check: NetworkCheck): ChargingOutcome {
   const charger = build.pack.charger;
   if (!charger) {

@@ -9,12 +9,15 @@ export interface NetworkIssue {
 
 type Element = Readonly<Record<string, unknown>>;
 
-/** The same keys with the same values (the elements of a network hold only plain values). */
+/** The same keys with the same values (the elements of a network hold only plain values); no key lists are built. */
 function sameElement(a: Element, b: Element): boolean {
-  const keys = Object.keys(a);
-  if (keys.length !== Object.keys(b).length) return false;
-  for (const k of keys) if (!Object.is(a[k], b[k])) return false;
-  return true;
+  let keys = 0;
+  for (const k in a) {
+    if (!Object.hasOwn(b, k) || !Object.is(a[k], b[k])) return false;
+    keys++;
+  }
+  for (const k in b) if (Object.hasOwn(b, k)) keys--;
+  return keys === 0;
 }
 
 const PARTS = [

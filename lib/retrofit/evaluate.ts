@@ -1,4 +1,5 @@
 import type { ModeDrive } from "@/lib/parts";
+import { NetworkCheck } from "@/lib/thermal";
 import { cautionsFor, type Caution } from "./cautions";
 import { checkPackVoltage, selectedModes } from "./checks";
 import { costSummary, type CostSummary } from "./costs";
@@ -62,8 +63,10 @@ export function evaluateBuild(build: ResolvedBuild, options: EvaluateOptions = {
   if (!pack) problems.add("pack.cell", "the build has no cells: runtime, pack current and charging are left out", "warning");
   else if (pack.resistanceAssumed) problems.add("pack.cell.internalResistanceOhm", "cell internal resistance not given: 50 mΩ assumed", "info");
   checkPackVoltage(build, pack, problems);
-  const scenarios: ScenarioResult[] = selectedModes(build, problems).map(({ mode, index }) => runMode(build, mode, index, pack, o, problems));
-  const charging = runCharging(build, pack, o, problems);
+  // One schema check for every network: between scenarios only the heat changes, so each is checked for what changed.
+  const check = new NetworkCheck();
+  const scenarios: ScenarioResult[] = selectedModes(build, problems).map(({ mode, index }) => runMode(build, mode, index, pack, o, problems, check));
+  const charging = runCharging(build, pack, o, problems, check);
   if (charging.scenario) scenarios.push(charging.scenario);
 
   const modes: ModeSummary[] = scenarios

@@ -1,5 +1,5 @@
 import { modeDrive, type DriverMode } from "@/lib/parts";
-import { isThermalInputError, networkSchema, solveSteady, type SteadyResult } from "@/lib/thermal";
+import { isThermalInputError, solveSteady, type NetworkCheck, type SteadyResult } from "@/lib/thermal";
 import { compileBuild, sinkLinks, type CompiledBuild, type ScenarioHeat } from "./compile";
 import { declaredRise } from "./compile/heatsink";
 import { pathResistance } from "./inverse";
@@ -61,13 +61,12 @@ export function modeElectrical(build: ResolvedBuild, e: ResolvedPart<"emitter">,
   return { emitter: ep, ledCurrentA: ledCurrent, outputW, driver: dp, packCurrentA: packCurrent, cellHeat: pack && packCurrent !== null ? cellHeat(pack, packCurrent) : null };
 }
 
-/** Steady solve that turns engine errors into a problem. */
-export function trySteady(compiled: CompiledBuild, field: string, problems: ProblemList, validate: boolean, startC?: Readonly<Record<string, number>>): SteadyResult | null {
-  if (validate) {
-    const parsed = networkSchema.safeParse(compiled.network);
-    if (!parsed.success) {
-      const i = parsed.error.issues[0];
-      problems.add(field, `the heat path could not be built: ${i?.path.join(".")}: ${i?.message}`);
+/** Steady solve that turns engine errors into a problem; with `check`, the network is first checked against its schema. */
+export function trySteady(compiled: CompiledBuild, field: string, problems: ProblemList, check: NetworkCheck | null, startC?: Readonly<Record<string, number>>): SteadyResult | null {
+  if (check) {
+    const i = check.firstIssue(compiled.network);
+    if (i) {
+      problems.add(field, `the heat path could not be built: ${i.path.join(".")}: ${i.message}`);
       return null;
     }
   }
@@ -88,7 +87,7 @@ export function trySteady(compiled: CompiledBuild, field: string, problems: Prob
  * electrical side is re-evaluated there (curves, driver loss, cell heat, spreading
  * boundary) until Tj moves less than the tolerance.
  */
-export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: string, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList): OperatingPoint | null {
+export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: string, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList, check: NetworkCheck): OperatingPoint | null {
   const e = build.lightEngine.emitter;
   const d = build.driver.part;
   if (!e || !d) return null;
@@ -113,7 +112,7 @@ export function solveModePoint(build: ResolvedBuild, mode: DriverMode, field: st
     if (!compiled) return null;
     if (sinkR === null) sinkR = compiled.sinkEstimateKPerW;
     // Each pass changes the network a little: the last answer is a close start.
-    const steady = trySteady(compiled, field, problems, k === 1, last?.steady.temperaturesC);
+    const steady = trySteady(compiled, field, problems, k === 1 ? check : null, last?.steady.temperaturesC);
     if (!steady) return null;
     const tjNew = steady.temperaturesC.junction ?? tj;
     const newSinkR: number | null = compiled.sinkLink !== null ? pathResistance(compiled.network, steady, sinkLinks(compiled)) : sinkR;

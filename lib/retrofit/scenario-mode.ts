@@ -1,5 +1,5 @@
 import { modeDrive, type DriverMode, type ModeDrive } from "@/lib/parts";
-import type { Network } from "@/lib/thermal";
+import type { Network, NetworkCheck } from "@/lib/thermal";
 import { checkModeCurrents, deratingPoint } from "./checks";
 import { runtime, type PackSummary } from "./electrical/pack";
 import { limitsFor } from "./limits";
@@ -82,11 +82,12 @@ function batterySideReady(build: ResolvedBuild, mode: DriverMode, field: string,
   return true;
 }
 
-export function runMode(build: ResolvedBuild, mode: DriverMode, index: number, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList): ScenarioResult {
+/** `check`: the evaluation's schema check of its networks (see NetworkCheck). */
+export function runMode(build: ResolvedBuild, mode: DriverMode, index: number, pack: PackSummary | null, o: ResolvedOptions, problems: ProblemList, check: NetworkCheck): ScenarioResult {
   const field = `driver.modes[${index}]`;
   const base: ScenarioResult = { id: `mode:${mode.name}`, kind: "mode", name: mode.name, modeIndex: index, converged: false, iterations: 0, network: null, thermal: null, warmup: null, whatItTakes: null, derating: null, mode: null, charging: null };
   if (!batterySideReady(build, mode, field, pack, problems)) return base;
-  const op = solveModePoint(build, mode, field, pack, o, problems);
+  const op = solveModePoint(build, mode, field, pack, o, problems, check);
   if (!op) return base;
   const el = op.electrical;
   const n = build.lightEngine.count;

@@ -1,4 +1,4 @@
-import { AMBIENT_ID, breakdownRise, isThermalInputError, prepareTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
+import { AMBIENT_ID, breakdownRise, extend, setEntry, isThermalInputError, prepareTransient, traceLink, type Network, type SteadyResult, type Trace } from "@/lib/thermal";
 import type { CompiledBuild } from "./compile";
 import { calibratedTrace, scaleLink } from "./compile/calibration";
 import type { LinkPlace, NodePlace } from "./compile/builder";
@@ -79,7 +79,7 @@ export function thermalResult(compiled: CompiledBuild, steady: SteadyResult, def
     const link = net.links[i]!;
     return calibratedTrace(l.trace ?? traceLink(scaleLink(link, 1 / l.calibration.factor), at(link.from), at(link.to)), l.calibration);
   };
-  const links = compiled.links.map((l, i): LinkResult => ({ ...l, watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: modelTrace(l, i) }));
+  const links = compiled.links.map((l, i): LinkResult => extend(l, { watts: steady.links[i]?.watts ?? 0, kelvinPerWatt: steady.links[i]?.kelvinPerWatt ?? 0, trace: modelTrace(l, i) }));
   const byPlace = Object.fromEntries(compiled.nodes.map((n) => [n.place, steady.temperaturesC[n.id] ?? 0]));
   const limits = evaluateLimits(defs, steady.temperaturesC, o.marginK);
   let ladder: ThermalResult["ladder"] = null;
@@ -150,23 +150,25 @@ export function warmup(network: Network, steady: SteadyResult, limits: readonly 
       residualW = r.residualW;
       // Each chunk after the first starts where the last ended: skip its repeated first sample.
       const src = ids.map((id) => r.temperaturesC[id]!);
-      for (let k = t0 === 0 ? 0 : 1; k < r.timesS.length; k++) {
+      const first = t0 === 0 ? 0 : 1;
+      for (let j = 0; j < ids.length; j++) {
+        const from = src[j]!;
+        const to = dest[j]!;
+        for (let k = first; k < from.length; k++) to.push(from[k]!);
+      }
+      for (let k = first; k < r.timesS.length; k++) {
         const t = t0 + r.timesS[k]!;
         timesS.push(t);
-        let inBand = true;
-        for (let j = 0; j < ids.length; j++) {
-          const v = src[j]![k]!;
-          dest[j]!.push(v);
-          if (Math.abs(v - (steadyC[j] ?? v)) > STEADY_BAND_K) inBand = false;
-        }
-        if (inBand && steadyAt === null) steadyAt = t;
+        // Once one sample is in the band, the later ones need no look.
+        if (steadyAt === null && !src.some((from, j) => Math.abs(from[k]! - (steadyC[j] ?? from[k]!)) > STEADY_BAND_K)) steadyAt = t;
       }
       r.crossings?.forEach((x, i) => {
         if (crossings[i] === null && x.timeS !== null) crossings[i] = t0 + x.timeS;
       });
       settled = steadyAt !== null && pending.every((p, i) => !p || crossings[i] !== null);
       t0 += chunk;
-      initialC = Object.fromEntries(ids.map((id, j) => [id, dest[j]![dest[j]!.length - 1]!]));
+      initialC = {};
+      for (let j = 0; j < ids.length; j++) setEntry(initialC, ids[j]!, dest[j]![dest[j]!.length - 1]!);
     }
     const end = timesS[timesS.length - 1] ?? 0;
     return {

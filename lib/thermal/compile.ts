@@ -3,6 +3,7 @@ import { toKelvin } from "./constants";
 import { ThermalInputError } from "./errors";
 import { AMBIENT_ID } from "./ids";
 import { linkModel } from "./link-models";
+import { extend } from "./record";
 import type { Network } from "./schema";
 import { groupLinks } from "./solver/assemble";
 import type { CompiledLink, CompiledNetwork } from "./solver/compiled";
@@ -54,14 +55,8 @@ function compileChecked(network: Network, original: Map<string, number>): Compil
   const p1 = perNode.subarray(2 * nodeCount);
   for (let i = 0; i < nodeCount; i++) capacity[solverIndex[i]!] = network.nodes[i]!.heatCapacityJPerK ?? 0;
   const ambientK = toKelvin(network.ambientC);
+  foldSources(network.sources ?? [], original, solverIndex, ambientK, p0, p1);
   let linear = true;
-  for (const s of network.sources ?? []) {
-    const k = solverIndex[original.get(s.node)!]!;
-    const slope = s.wattsPerKelvin ?? 0;
-    const refK = s.referenceC === undefined ? ambientK : toKelvin(s.referenceC);
-    p0[k]! += s.watts - slope * refK;
-    p1[k]! += slope;
-  }
   for (let k = 0; k < nodeCount; k++) if (p1[k] !== 0) linear = false;
   const links: CompiledLink[] = new Array<CompiledLink>(linkCount);
   for (let l = 0; l < linkCount; l++) {
@@ -74,6 +69,35 @@ function compileChecked(network: Network, original: Map<string, number>): Compil
   const ids = new Array<string>(nodeCount);
   for (let k = 0; k < nodeCount; k++) ids[k] = network.nodes[order[k]!]!.id;
   return { n: nodeCount, ids, solverIndex, ambientK, capacity, p0, p1, links, pattern, groups: groupLinks(links), linear, network };
+}
+
+/** Sources folded into P_i(T) = p0_i + p1_i·T (solver order, kelvin), adding to what p0 and p1 hold. */
+function foldSources(sources: Network["sources"], original: ReadonlyMap<string, number>, solverIndex: Int32Array, ambientK: number, p0: Float64Array, p1: Float64Array): void {
+  for (const s of sources) {
+    const k = solverIndex[original.get(s.node)!]!;
+    const slope = s.wattsPerKelvin ?? 0;
+    const refK = s.referenceC === undefined ? ambientK : toKelvin(s.referenceC);
+    p0[k]! += s.watts - slope * refK;
+    p1[k]! += slope;
+  }
+}
+
+/**
+ * Replaces a compiled network's sources in place by `sources` on the same nodes (a search
+ * over a heat, such as a throttled charge current, changes only the sources between its
+ * probes: one compilation serves them all). The result is what compiling the network with
+ * those sources gives.
+ */
+export function setCompiledSources(c: CompiledNetwork, sources: Network["sources"]): void {
+  const original = new Map(c.network.nodes.map((node, i) => [node.id, i] as const));
+  for (const s of sources) if (!original.has(s.node)) throw new ThermalInputError("bad_request:network", `unknown node "${s.node}" for a source`, "sources");
+  c.p0.fill(0);
+  c.p1.fill(0);
+  foldSources(sources, original, c.solverIndex, c.ambientK, c.p0, c.p1);
+  let linear = c.links.every((l) => l.model.linear);
+  for (let k = 0; k < c.n; k++) if (c.p1[k] !== 0) linear = false;
+  c.linear = linear;
+  c.network = extend(c.network, { sources });
 }
 
 /**

@@ -1,4 +1,5 @@
 import { AMBIENT_ID } from "./ids";
+import { extend } from "./record";
 import { conductionResistance, convectionResistance, declaredResistance } from "./elements/basic";
 import { finnedHeatsink } from "./elements/heatsink";
 import { naturalConvection } from "./elements/natural-convection";
@@ -17,11 +18,11 @@ export function traceLink(link: NetworkLink, fromC: number, toC: number): Trace 
     case "convection":
       return convectionResistance(link).trace;
     case "natural-convection":
-      return naturalConvection({ ...link, surfaceC: fromC, fluidC: toC }).trace;
+      return naturalConvection(extend(link, { surfaceC: fromC, fluidC: toC })).trace;
     case "radiation":
-      return radiationExchange({ ...link, surfaceC: fromC, surroundingsC: toC }).trace;
+      return radiationExchange(extend(link, { surfaceC: fromC, surroundingsC: toC })).trace;
     case "finned-heatsink":
-      return finnedHeatsink({ ...link, surfaceC: fromC, ambientC: toC }).trace;
+      return finnedHeatsink(extend(link, { surfaceC: fromC, ambientC: toC })).trace;
   }
 }
 

@@ -22,10 +22,11 @@ export {
   type TransientRequest,
   type TransientOptions,
 } from "./schema";
+export { NetworkCheck, type NetworkIssue } from "./network-check";
 export { ThermalInputError, isThermalInputError, type ThermalErrorCode } from "./errors";
 export { AMBIENT_ID } from "./ids";
 export { STEFAN_BOLTZMANN, STANDARD_GRAVITY, ZERO_CELSIUS_K, NETWORK_LIMITS, toKelvin, toCelsius } from "./constants";
-export { solveSteady, steadyTemperatures, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
+export { solveSteady, steadyTemperatures, sourceSweep, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
 export type { SteadyOptions } from "./solver/steady";
 export { solveTransient, prepareTransient, type PreparedTransient, type TransientResult, type Crossing, type TransientSolverSettings } from "./solve-transient";
 export { makeTrace, quantity, elementResult, type Trace, type TraceQuantity, type TraceValidity, type ElementResult } from "./trace";
@@ -58,5 +59,6 @@ export {
   type ScaleAnswer,
   type Root,
   type LimitTarget, type MaxPowerOptions, type MaxPowerResult, type MaxResistanceOptions, type MaxResistanceResult } from "./inverse";
+export { extend, setEntry } from "./record";
 export { breakdownRise, type RiseBreakdown, type RiseStep } from "./breakdown";
 export { explainLinks, traceLink } from "./explain";

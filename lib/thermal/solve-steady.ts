@@ -1,4 +1,4 @@
-import { compileNetwork, type CompiledNetwork } from "./compile";
+import { compileNetwork, setCompiledSources, type CompiledNetwork } from "./compile";
 import { toCelsius, toKelvin } from "./constants";
 import { ThermalInputError } from "./errors";
 import { setEntry } from "./record";
@@ -46,6 +46,20 @@ export function compiledSteadyTemperatures(compiled: CompiledNetwork, options?: 
   const { solution } = solveCheckedCompiled(compiled, options, startC);
   assertPhysical(compiled, solution.t);
   return temperaturesOf(compiled, solution.t);
+}
+
+/**
+ * `steadyTemperatures` of one heat path under sets of sources on its nodes that change
+ * between calls (a search over a heat, such as a throttled charge current): compiled once,
+ * the sources set in place for each solve. Each answer is the one `steadyTemperatures`
+ * gives for the network with those sources.
+ */
+export function sourceSweep(network: Network): (sources: Network["sources"], options?: SteadyOptions, startC?: Readonly<Record<string, number>>) => Record<string, number> {
+  const compiled = compileNetwork(network);
+  return (sources, options, startC) => {
+    setCompiledSources(compiled, sources);
+    return compiledSteadyTemperatures(compiled, options, startC);
+  };
 }
 
 function solveChecked(network: Network, options: SteadyOptions | undefined, startC: Readonly<Record<string, number>> | undefined): { compiled: CompiledNetwork; solution: CompiledSteadySolution } {

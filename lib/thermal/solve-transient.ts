@@ -82,10 +82,10 @@ function solveCompiled(network: Network, compiled: CompiledNetwork, options: Tra
   const zeroC = ZERO_CELSIUS_K;
   for (let i = 0; i < network.nodes.length; i++) {
     const id = network.nodes[i]!.id;
-    const kelvin = solution.series[compiled.solverIndex[i]!]!;
-    const values = new Array<number>(kelvin.length);
-    for (let k = 0; k < kelvin.length; k++) {
-      const v = kelvin[k]! - zeroC;
+    // The solution's own array of each node (each node has one) becomes its answer, turned to °C in place.
+    const values = solution.series[compiled.solverIndex[i]!]!;
+    for (let k = 0; k < values.length; k++) {
+      const v = values[k]! - zeroC;
       if (!Number.isFinite(v) || v < -zeroC) {
         throw new ThermalInputError("unprocessable:solution", `node "${id}" has no physical temperature during the warm-up`, "");
       }

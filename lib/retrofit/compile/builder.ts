@@ -69,9 +69,11 @@ export class NetworkBuilder {
     return this.nodes.some((n) => n.id === id);
   }
 
+  /** Adds a link, labelled with its place. `link` is a fresh object the network keeps (every caller writes it out in the call). */
   link(link: NetworkLink, place: string, slot: string, trace?: Trace): number {
     const index = this.links.length;
-    this.links.push({ ...link, label: place });
+    link.label = place;
+    this.links.push(link);
     this.linkPlaces.push({ index, from: link.from, to: link.to, place, slot, ...(trace ? { trace } : {}) });
     return index;
   }

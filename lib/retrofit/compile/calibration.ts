@@ -1,4 +1,4 @@
-import { makeTrace, quantity, type NetworkLink, type Trace } from "@/lib/thermal";
+import { extend, makeTrace, quantity, type NetworkLink, type Trace } from "@/lib/thermal";
 import type { Calibration, CalibrationParameter } from "../design-schema";
 import { CALIBRATION_LABELS } from "../design-labels";
 import type { LinkCalibration, NetworkBuilder } from "./builder";
@@ -26,12 +26,12 @@ export function calibratedLinkIndices(parameter: CalibrationParameter, links: re
 export function scaleLink(link: NetworkLink, f: number): NetworkLink {
   switch (link.type) {
     case "resistance":
-      return { ...link, kelvinPerWatt: link.kelvinPerWatt / f };
+      return extend(link, { kelvinPerWatt: link.kelvinPerWatt / f });
     case "conduction":
     case "convection":
     case "natural-convection":
     case "radiation":
-      return { ...link, areaM2: link.areaM2 * f };
+      return extend(link, { areaM2: link.areaM2 * f });
     case "finned-heatsink":
       return link;
   }

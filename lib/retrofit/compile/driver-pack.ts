@@ -1,4 +1,4 @@
-import { heatCapacity, interfaceLayer, getMaterial, strapResistance, type Trace } from "@/lib/thermal";
+import { extend, heatCapacity, interfaceLayer, getMaterial, strapResistance, type Trace } from "@/lib/thermal";
 import type { ResolvedBuild } from "../resolved";
 import { q, seriesTrace, trace } from "../trace";
 import { PLACES, type NetworkBuilder } from "./builder";
@@ -21,7 +21,7 @@ const PACKED_EXPOSURE = 0.7;
 const TAPE_ADHESIVE = { conductivityWPerMK: 0.5, bondLineM: 40e-6 };
 
 const boardCapacity = (massKg: number, what: string): { heatCapacityJPerK: number; trace: Trace } =>
-  ({ ...heatCapacity({ massKg, specificHeatJPerKgK: BOARD_SPECIFIC_HEAT }), trace: trace({ element: "heat-capacity", formula: "Lumped heat capacity", equation: "C = m·c_p", inputs: [q("m", `mass of the ${what}`, massKg, "kg"), q("c_p", "FR-4 with parts (from memory)", BOARD_SPECIFIC_HEAT, "J/(kg·K)")], result: q("C", "heat capacity", massKg * BOARD_SPECIFIC_HEAT, "J/K"), source: "from memory of FR-4 laminate data (≈ 1100 J/(kg·K)) — check against a copy" }) });
+  extend(heatCapacity({ massKg, specificHeatJPerKgK: BOARD_SPECIFIC_HEAT }), { trace: trace({ element: "heat-capacity", formula: "Lumped heat capacity", equation: "C = m·c_p", inputs: [q("m", `mass of the ${what}`, massKg, "kg"), q("c_p", "FR-4 with parts (from memory)", BOARD_SPECIFIC_HEAT, "J/(kg·K)")], result: q("C", "heat capacity", massKg * BOARD_SPECIFIC_HEAT, "J/K"), source: "from memory of FR-4 laminate data (≈ 1100 J/(kg·K)) — check against a copy" }) });
 
 /** A board in the housing air: both faces convect to the air and radiate to the wall. */
 function boardInAir(b: NetworkBuilder, id: string, areaM2: number, faces: number, g: HousingGeometry, slot: string, place: string): void {

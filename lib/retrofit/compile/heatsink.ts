@@ -1,4 +1,4 @@
-import { declaredResistance, makeTrace, type Network, quantity, emissivityFor, finnedEnvelopeAreaM2, finnedHeatsinkConductance, getMaterial, toKelvin, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
+import { declaredResistance, extend, makeTrace, type Network, quantity, emissivityFor, finnedEnvelopeAreaM2, finnedHeatsinkConductance, getMaterial, toKelvin, heatCapacity, naturalConvection, radiationExchange, type Finish, type FinnedHeatsinkGeometry, type Trace } from "@/lib/thermal";
 import type { SpecsOfKind } from "@/lib/parts";
 import type { ProblemList } from "../problems";
 import { PLACES, type NetworkBuilder } from "./builder";
@@ -205,7 +205,7 @@ export function compileSinkToAir(
     const em = sinkEmissivity(s);
     const radiationLink = b.link({ from: "sink", to: sees, type: "radiation", areaM2: envelope, emissivity: em.e }, `heatsink envelope → ${seen} (radiation, ε ${em.e.toFixed(2)})`, field);
     // Only the figure is wanted here (the link's trace is worked out at the solution): no trace.
-    const est = finnedHeatsinkConductance({ ...g, finDirection: direction }, toKelvin(guessC + 30), toKelvin(guessC));
+    const est = finnedHeatsinkConductance(extend(g, { finDirection: direction }), toKelvin(guessC + 30), toKelvin(guessC));
     return { link, radiationLink, estimateKPerW: Math.min(1 / Math.max(est, 1e-300), Number.MAX_VALUE) };
   }
   // A flat plate (or one fin): its open face convects and radiates. Upright (fins vertical or

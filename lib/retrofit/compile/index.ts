@@ -61,19 +61,25 @@ export function compileBuild(build: ResolvedBuild, heat: ScenarioHeat, state: Co
   const driver = compileDriver(b, build, g);
   const cells = compileCells(b, build, g);
   const charger = compileCharger(b, build, g);
-  const sources: Network["sources"] = [];
-  if (le) sources.push({ node: "junction", watts: heat.junctionW, wattsPerKelvin: heat.junctionWPerK, referenceC: heat.junctionRefC });
-  if (driver) sources.push({ node: "driver", watts: heat.driverW });
-  if (cells) sources.push({ node: "cells", watts: heat.cellsW });
-  if (charger) sources.push({ node: "charger", watts: heat.chargerW });
+  const has = { emitter: le !== null, driver, cells, charger };
   if (build.calibration) applyCalibration(b, build.calibration, le?.sinkLink ?? null);
   return {
-    network: b.network(sources),
+    network: b.network(scenarioSources(heat, has)),
     nodes: b.nodePlaces,
     links: b.linkPlaces,
     sinkLink: le?.sinkLink ?? null,
     sinkRadiationLink: le?.sinkRadiationLink ?? null,
     sinkEstimateKPerW: le?.sinkEstimateKPerW ?? null,
-    has: { emitter: le !== null, driver, cells, charger },
+    has,
   };
+}
+
+/** The network's sources for a scenario's heat, on the parts the build has. */
+export function scenarioSources(heat: ScenarioHeat, has: CompiledBuild["has"]): Network["sources"] {
+  const sources: Network["sources"] = [];
+  if (has.emitter) sources.push({ node: "junction", watts: heat.junctionW, wattsPerKelvin: heat.junctionWPerK, referenceC: heat.junctionRefC });
+  if (has.driver) sources.push({ node: "driver", watts: heat.driverW });
+  if (has.cells) sources.push({ node: "cells", watts: heat.cellsW });
+  if (has.charger) sources.push({ node: "charger", watts: heat.chargerW });
+  return sources;
 }

@@ -1,3 +1,4 @@
+import { extend } from "../record";
 import { AIR, airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, STEFAN_BOLTZMANN, toKelvin } from "../constants";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
@@ -282,7 +283,7 @@ export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: numbe
   if (e.direction === "horizontal") notes.push("Level fins: warm air cannot rise through the gaps, so the fins between the end fins are taken as a block shedding heat from its front and gap ends (conservative: real arrays do somewhat better, but no better than with vertical fins).");
   if (e.direction === "down") notes.push("Fins hanging down: warm air is trapped between them, so the channels carry no flow of their own (conservative).");
   if (e.direction === "horizontal" || e.direction === "down") {
-    const upright = evaluateFinnedHeatsink({ ...input, finDirection: "vertical" }, toKelvin(input.surfaceC), toKelvin(input.ambientC));
+    const upright = evaluateFinnedHeatsink(extend(input, { finDirection: "vertical" as const }), toKelvin(input.surfaceC), toKelvin(input.ambientC));
     notes.push(`A lower bound: the same sink with vertical fins would give ${(1 / upright.conductanceWPerK).toPrecision(3)} K/W at these temperatures; the truth lies between the two.`);
   }
   if (e.direction !== "down" && e.elenbaas < 10) notes.push(`Elenbaas number ${e.elenbaas.toPrecision(3)} < 10: the channels are choked in still air (fins too close for natural convection).`);
@@ -327,5 +328,5 @@ export function finnedHeatsink(input: FinnedHeatsinkGeometry & { surfaceC: numbe
     validity: { range: `${FIN_STANDING[e.direction].toLowerCase()}, isothermal base, laminar flow (Re_L < 5·10⁵)`, inRange: e.reynolds < 5e5 },
     notes,
   });
-  return { ...elementResult(e.conductanceWPerK, trace), evaluation: e };
+  return extend(elementResult(e.conductanceWPerK, trace), { evaluation: e });
 }

@@ -1,6 +1,7 @@
 import { airPropertiesAt, type AirProperties } from "../air-properties";
 import { STANDARD_GRAVITY, toKelvin } from "../constants";
 import { describeCorrelation, effectiveSurface as turned, nusseltNumber, type CorrelationDescription, type Surface } from "../correlations";
+import { extend } from "../record";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
 
 export { naturalConvectionH } from "../solver/convection-kernel";
@@ -34,7 +35,7 @@ export function naturalConvectionCoefficient(surface: Surface, lengthM: number, 
   const ra = rayleighNumber(air, delta, lengthM);
   const nusselt = nusseltNumber(effectiveSurface, ra, air.prandtl);
   const h = (nusselt * air.conductivityWPerMK) / lengthM;
-  return { ...describeCorrelation(effectiveSurface, ra, air.prandtl), nusselt, coefficientWPerM2K: h, rayleigh: ra, effectiveSurface, filmK, air };
+  return extend(describeCorrelation(effectiveSurface, ra, air.prandtl), { nusselt, coefficientWPerM2K: h, rayleigh: ra, effectiveSurface, filmK, air });
 }
 
 export interface NaturalConvectionInput {
@@ -78,5 +79,5 @@ export function naturalConvection(input: NaturalConvectionInput): ElementResult 
     validity: { range: c.range, inRange: c.inRange },
     notes,
   });
-  return { ...elementResult(g, trace), coefficientWPerM2K: c.coefficientWPerM2K };
+  return extend(elementResult(g, trace), { coefficientWPerM2K: c.coefficientWPerM2K });
 }

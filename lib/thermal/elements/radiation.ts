@@ -1,4 +1,5 @@
 import { STEFAN_BOLTZMANN, toKelvin } from "../constants";
+import { extend } from "../record";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
 
 export interface RadiationInput {
@@ -38,5 +39,5 @@ export function radiationExchange(input: RadiationInput): ElementResult & { watt
     source: 'Incropera, DeWitt, Bergman & Lavine, "Fundamentals of Heat and Mass Transfer", 6th ed., eq. 1.7 (small surface in a large enclosure); σ from CODATA 2018',
     notes: ["Surroundings are taken at the temperature of the link's `to` node and to be much larger than the surface."],
   });
-  return { ...elementResult(g, trace), watts };
+  return extend(elementResult(g, trace), { watts });
 }

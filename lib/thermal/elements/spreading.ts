@@ -1,3 +1,4 @@
+import { extend } from "../record";
 import { elementResult, makeTrace, quantity, type ElementResult } from "../trace";
 
 export type SpreadingInput = {
@@ -68,5 +69,5 @@ export function spreadingResistance(input: SpreadingInput): SpreadingResult {
     source: "S. Lee, S. Song, V. Au & K. P. Moran, \"Constriction/spreading resistance model for electronics packaging\", ASME/JSME Thermal Engineering Conference, 1995, vol. 4, pp. 199–206",
     notes,
   });
-  return { ...elementResult(1 / rMax, trace), averageKelvinPerWatt: rAvg, sinkKelvinPerWatt: r0 };
+  return extend(elementResult(1 / rMax, trace), { averageKelvinPerWatt: rAvg, sinkKelvinPerWatt: r0 });
 }

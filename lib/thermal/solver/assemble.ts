@@ -11,9 +11,10 @@ export function groupLinks(links: readonly CompiledLink[]): LinkGroups {
     else if (model.kind === "natural-convection") nat++;
     else oth++;
   }
-  // Two buffers carved into views rather than ten arrays (see scratch.ts on what each allocation costs).
-  const ints = new Int32Array(2 * (lin + rad + nat + oth));
-  const reals = new Float64Array(lin + rad);
+  // One buffer carved into views rather than ten arrays (see scratch.ts on what each allocation costs): the reals first, so the ints after them stay aligned.
+  const buffer = new ArrayBuffer(8 * (lin + rad) + 4 * 2 * (lin + rad + nat + oth));
+  const reals = new Float64Array(buffer, 0, lin + rad);
+  const ints = new Int32Array(buffer, 8 * (lin + rad), 2 * (lin + rad + nat + oth));
   // Consecutive views: lin, lin, rad, rad, nat, nat, oth, oth (no closure: set-up time counts for small networks).
   const r1 = 2 * lin;
   const n1 = r1 + 2 * rad;

@@ -24,8 +24,8 @@ interface StepStats {
 
 export interface CompiledTransientSolution {
   timesS: number[];
-  /** One Float64Array per solver node, kelvin. */
-  series: Float64Array[];
+  /** One array per solver node, kelvin at each output instant. */
+  series: number[][];
   newtonIterations: number;
   factorisations: number;
   /** Internal steps rejected and retried shorter (internal: the public answer keeps its shape). */
@@ -37,7 +37,8 @@ export interface CompiledTransientSolution {
 /** Output instants: every stepS from 0, plus durationS itself when it is not a whole number of steps. */
 export function outputTimes(durationS: number, stepS: number): number[] {
   const whole = Math.floor(durationS / stepS + 1e-9);
-  const times = Array.from({ length: whole + 1 }, (_, k) => k * stepS);
+  const times: number[] = [];
+  for (let k = 0; k <= whole; k++) times.push(k * stepS);
   if (durationS - whole * stepS > 1e-9 * stepS) times.push(durationS);
   else times[whole] = durationS;
   return times;
@@ -95,12 +96,19 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
   const n = c.n;
   const ws = takeWorkspace(n, c.pattern);
   const times = outputTimes(o.durationS, o.stepS);
-  const series = Array.from({ length: n }, () => new Float64Array(times.length));
-  let prev = new Float64Array(n);
+  // The samples go into plain arrays (the form the answer takes, so the caller need not
+  // copy them) and the four working vectors are views of one buffer: a typed array of its
+  // own costs more to allocate (see scratch.ts), and a long warm-up runs in several chunks,
+  // each a solve of its own.
+  const series: number[][] = [];
+  for (let i = 0; i < n; i++) series.push([]);
+  const work = new Float64Array(4 * n);
+  let prev = work.subarray(0, n);
   // The point before `prev`, for the predictor only.
-  let prev2 = new Float64Array(n);
-  let cur = Float64Array.from(o.initialK);
-  const next = new Float64Array(n);
+  let prev2 = work.subarray(n, 2 * n);
+  let cur = work.subarray(2 * n, 3 * n);
+  cur.set(o.initialK);
+  const next = work.subarray(3 * n);
   const stats: StepStats = { newton: 0, factor: 0, factoredFor: NaN };
 
   // Nodes without heat capacity follow their neighbours at once, also at t = 0.
@@ -109,7 +117,7 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
     returnWorkspace(ws);
     throw stepError(start, 0);
   }
-  for (let i = 0; i < n; i++) series[i]![0] = cur[i]!;
+  for (let i = 0; i < n; i++) series[i]!.push(cur[i]!);
 
   const minStepS = o.stepS / 2 ** MAX_HALVINGS;
   // Length of the previous accepted step (0: none yet, so the next is backward Euler).
@@ -169,7 +177,7 @@ export function solveCompiledTransient(c: CompiledNetwork, o: ResolvedTransientO
       // Grow back; once a doubled step covers an output interval the normal path resumes.
       if (hMax !== Infinity) hMax = 2 * h >= o.stepS ? Infinity : 2 * h;
     }
-    for (let i = 0; i < n; i++) series[i]![k] = cur[i]!;
+    for (let i = 0; i < n; i++) series[i]!.push(cur[i]!);
   }
   returnWorkspace(ws);
   return { timesS: times, series, newtonIterations: stats.newton, factorisations: stats.factor, rejectedSteps: rejected, residualW };

@@ -310,14 +310,14 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
 /** The cached result as stored JSON text, so a cache hit is sent without parsing it. */
 /**
  * What the solve cache holds for a revision, in one round trip: every key, newest first, and
- * the result under `cacheKey` as its UTF-8 bytes (read as bytes and never parsed: a hit goes
- * to the client as it is).
+ * the result under `cacheKey` as its JSON text (read as plain text, never parsed: a hit goes to
+ * the client as it is).
  */
 const cacheStatements = preparedOnce(() => ({
   entries: db()
     .select({
       key: solveCache.cacheKey,
-      result: sql<Buffer | null>`case when ${solveCache.cacheKey} = ${sql.placeholder("key")} then cast(${solveCache.result} as binary) end`,
+      result: sql<string | null>`case when ${solveCache.cacheKey} = ${sql.placeholder("key")} then cast(${solveCache.result} as char) end`,
     })
     .from(solveCache)
     .where(eq(solveCache.revisionId, sql.placeholder("revision")))
@@ -326,15 +326,16 @@ const cacheStatements = preparedOnce(() => ({
     .prepare(),
 }));
 
-export async function getCacheEntries({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<{ hit: Buffer | undefined; keys: string[] }> {
+export async function getCacheEntries({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<{ hit: string | undefined; keys: string[] }> {
   const rows = await cacheStatements().entries.execute({ revision: revisionId, key: cacheKey });
   const hit: unknown = rows.find((r) => r.key === cacheKey)?.result;
-  const bytes = Buffer.isBuffer(hit) ? hit : typeof hit === "string" ? Buffer.from(hit, "utf8") : undefined;
-  return { hit: bytes, keys: rows.map((r) => r.key) };
+  // Cast to text, the driver hands it over as a string (as JSON it would parse it).
+  const text = typeof hit === "string" ? hit : Buffer.isBuffer(hit) ? hit.toString("utf8") : undefined;
+  return { hit: text, keys: rows.map((r) => r.key) };
 }
 
-/** One cached result as its UTF-8 bytes, or undefined. */
-export async function getCachedResult({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<Buffer | undefined> {
+/** One cached result as its JSON text, or undefined. */
+export async function getCachedResult({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<string | undefined> {
   return (await getCacheEntries({ revisionId, cacheKey })).hit;
 }
 

@@ -115,12 +115,12 @@ const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
 
 /**
  * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when
- * it holds this key. A cached answer is kept as its JSON bytes: a hit goes to the client without
- * being parsed, re-serialised or re-encoded. Everything a request needs before it can evaluate
+ * it holds this key. A cached answer is read as its JSON text: a hit goes to the client without
+ * being parsed and re-serialised. Everything a request needs before it can evaluate
  * (the cache's keys and a hit, the parts snapshot, a recorded solver change) is asked for at
  * once, so a miss waits for one round trip, not three.
  */
-async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
+async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const keys: Record<Curves, string> = { full: SOLVER_VERSION, chart: `${SOLVER_VERSION}:chart` };
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
   // The snapshot holds the parts as the owner saw them: whoever may see the build (a
@@ -148,7 +148,7 @@ async function solveToText({ build, revision, curves = "full" }: SolveArgs): Pro
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
   const serializeMs = performance.now() - t0 - evaluateMs;
   const previous = previousKey === undefined ? undefined : await previousRead;
-  const solverChange = previousKey !== undefined && previous ? solverChangeFrom({ solverVersion: versionOfKey(previousKey), text: previous.toString("utf8") }, full) : null;
+  const solverChange = previousKey !== undefined && previous ? solverChangeFrom({ solverVersion: versionOfKey(previousKey), text: previous }, full) : null;
   // What moved and both shapes are kept after the answer has left: a slow or failed write
   // costs the next caller a recomputation, never this caller time or an error. The change
   // goes first, so whoever reads the cached result finds it.
@@ -180,8 +180,7 @@ function solverChangeFrom(previous: { solverVersion: string; text: string }, eva
 
 export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
   const r = await solveToText(args);
-  const text = typeof r.evaluationJson === "string" ? r.evaluationJson : r.evaluationJson.toString("utf8");
-  return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(text) as BuildEvaluation) };
+  return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(r.evaluationJson) as BuildEvaluation) };
 }
 
 /**
@@ -189,11 +188,9 @@ export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
  * and how long the evaluation itself and its serialisation (the chart shape, rounded) took
  * when they ran (not on a cache hit).
  */
-export async function solveRevisionJson(args: SolveArgs): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
+export async function solveRevisionJson(args: SolveArgs): Promise<{ body: string; evaluateMs?: number; serializeMs?: number }> {
   const r = await solveToText(args);
-  const head = `${JSON.stringify(r.head).slice(0, -1)},"evaluation":`;
-  const body = typeof r.evaluationJson === "string" ? Buffer.from(`${head}${r.evaluationJson}}`, "utf8") : Buffer.concat([Buffer.from(head, "utf8"), r.evaluationJson, Buffer.from("}", "utf8")]);
-  return { body: new Uint8Array(body.buffer as ArrayBuffer, body.byteOffset, body.byteLength), evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
+  return { body: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
 }
 
 /** Resolves the design against the part records and runs the evaluation (pure from here on). */

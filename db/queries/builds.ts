@@ -307,7 +307,6 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
     .where(eq(revisionParts.partId, partId));
 }
 
-/** The cached result as stored JSON text, so a cache hit is sent without parsing it. */
 /**
  * What the solve cache holds for a revision, in one round trip: every key, newest first, and
  * the result under `cacheKey` as its JSON text (read as plain text, never parsed: a hit goes to

@@ -327,10 +327,9 @@ const cacheStatements = preparedOnce(() => ({
 
 export async function getCacheEntries({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<{ hit: string | undefined; keys: string[] }> {
   const rows = await cacheStatements().entries.execute({ revision: revisionId, key: cacheKey });
-  const hit: unknown = rows.find((r) => r.key === cacheKey)?.result;
-  // Cast to text, the driver hands it over as a string (as JSON it would parse it).
-  const text = typeof hit === "string" ? hit : Buffer.isBuffer(hit) ? hit.toString("utf8") : undefined;
-  return { hit: text, keys: rows.map((r) => r.key) };
+  // Cast to text, the driver hands the result over as a string (as JSON it would parse it).
+  const hit = rows.find((r) => r.key === cacheKey)?.result ?? undefined;
+  return { hit, keys: rows.map((r) => r.key) };
 }
 
 /** One cached result as its JSON text, or undefined. */

@@ -1,10 +1,12 @@
 import "server-only";
-import { and, desc, eq, isNull, like, ne, or, type Placeholder, sql } from "drizzle-orm";
+import { and, desc, eq, isNull, like, ne, or, sql, type SQLWrapper } from "drizzle-orm";
 import { type BuildAccess, buildAccess, type BuildViewer } from "@/lib/builds/access";
 import { db, pool, preparedOnce } from "../client";
-import { buildInvitations, buildMembers, buildRevisions, builds, exercises, handins, reviews, revisionParts, solveCache, users, workedExamples } from "../schema";
+import { buildInvitations, buildMembers, buildRevisions, builds, exercises, handins, reviews, revisionParts, users, userSessions, workedExamples } from "../schema";
 import { snapshotPartsInTx } from "./snapshots";
 import { classReaderSql, withheldExampleSql } from "./classwork";
+import { parseJson } from "./json";
+import { type SolveReads, solveReadColumns, toSolveReads } from "./solve-cache";
 import { newId } from "./users";
 
 export interface BuildSummary {
@@ -45,11 +47,6 @@ const summaryColumns = {
   archivedAt: builds.archivedAt,
 };
 
-// MariaDB keeps JSON as LONGTEXT: the driver returns text.
-function parseJson(value: unknown): unknown {
-  return typeof value === "string" ? JSON.parse(value) : value;
-}
-
 const escapeLike = (text: string) => text.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 /**
@@ -82,9 +79,10 @@ export async function listBuilds({ viewer, q }: { viewer: { id: string; role: st
 /**
  * The columns of a build as one viewer sees it: the summary and the facts its access rule
  * needs (membership, an assigned review, a class that lets them read it, a worked example
- * that still withholds its values from them). `viewer` is the viewer's id as a placeholder.
+ * that still withholds its values from them). `viewer` is the viewer's id: a placeholder, or
+ * the user of the session the request names.
  */
-function buildWithAccessColumns(viewer: Placeholder) {
+function buildWithAccessColumns(viewer: SQLWrapper) {
   return {
     ...summaryColumns,
     memberEdit: buildMembers.canEdit,
@@ -131,6 +129,21 @@ const buildStatements = preparedOnce(() => {
       .where(eq(builds.id, sql.placeholder("id")))
       .limit(1)
       .prepare(),
+    toSolve: (() => {
+      // The viewer is the user of the session the request names (none when it names no live
+      // one): the caller checks the session itself meanwhile and compares the two.
+      const sessionUser = sql`${userSessions.userId}`;
+      return db()
+        .select({ ...buildWithAccessColumns(sessionUser), viewerId: userSessions.userId, revision: revisionColumns, ...solveReadColumns(sql`${buildRevisions.id}`) })
+        .from(builds)
+        .innerJoin(users, eq(users.id, builds.ownerId))
+        .leftJoin(userSessions, eq(userSessions.id, sql.placeholder("session")))
+        .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, userSessions.userId)))
+        .leftJoin(buildRevisions, and(eq(buildRevisions.buildId, builds.id), sql`${buildRevisions.number} = coalesce(${sql.placeholder("number")}, ${builds.currentRevision})`))
+        .where(eq(builds.id, sql.placeholder("id")))
+        .limit(1)
+        .prepare();
+    })(),
   };
 });
 
@@ -170,6 +183,29 @@ export async function getBuildAndRevision({ id, viewer, number }: { id: string; 
   const build = visibleBuild(viewer, rest);
   if (!build) return undefined;
   return { build, revision: revision ? { ...revision, design: parseJson(revision.design) } : undefined };
+}
+
+/**
+ * What a solve reads before it can evaluate, in one round trip: the build with the access facts
+ * of the user of session `sessionId`, one of its revisions (`number`, or the current one) and
+ * that revision's solve reads (see SolveReads). `build(viewer)` gives the build only to the
+ * viewer whose session that is (`viewerId`) and when they may see it: the caller compares it
+ * with the session it has checked. Undefined when there is no such build.
+ */
+export async function getBuildToSolve({ id, sessionId, number, cacheKey, solverVersion }: { id: string; sessionId: string; number?: number; cacheKey: string; solverVersion: string }): Promise<
+  | { viewerId: string | null; build: (viewer: NonNullable<BuildViewer>) => (BuildSummary & { access: BuildAccess }) | undefined; revision: RevisionRow | undefined; reads: SolveReads | undefined }
+  | undefined
+> {
+  const rows = await buildStatements().toSolve.execute({ id, session: sessionId, number: number ?? null, cacheKey, solverVersion });
+  const row = rows[0];
+  if (!row) return undefined;
+  const { revision, viewerId, hit, keys, snapshot, snapshotCount, changePrevious, changeList, ...rest } = row;
+  return {
+    viewerId,
+    build: (viewer) => (viewer.id === viewerId ? visibleBuild(viewer, rest) : undefined),
+    revision: revision ? { ...revision, design: parseJson(revision.design) } : undefined,
+    reads: revision ? await toSolveReads({ hit, keys, snapshot, snapshotCount, changePrevious, changeList }, revision.id) : undefined,
+  };
 }
 
 export async function getRevision({ buildId, number }: { buildId: string; number: number }): Promise<RevisionRow | undefined> {
@@ -305,48 +341,6 @@ export async function buildsUsingPart({ partId }: { partId: string }): Promise<{
     .innerJoin(buildRevisions, eq(buildRevisions.id, revisionParts.revisionId))
     .innerJoin(builds, eq(builds.id, buildRevisions.buildId))
     .where(eq(revisionParts.partId, partId));
-}
-
-/**
- * What the solve cache holds for a revision, in one round trip: every key, newest first, and
- * the result under `cacheKey` as its JSON text (read as plain text, never parsed: a hit goes to
- * the client as it is).
- */
-const cacheStatements = preparedOnce(() => ({
-  entries: db()
-    .select({
-      key: solveCache.cacheKey,
-      result: sql<string | null>`case when ${solveCache.cacheKey} = ${sql.placeholder("key")} then cast(${solveCache.result} as char) end`,
-    })
-    .from(solveCache)
-    .where(eq(solveCache.revisionId, sql.placeholder("revision")))
-    .orderBy(desc(solveCache.createdAt))
-    .limit(50)
-    .prepare(),
-}));
-
-export async function getCacheEntries({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<{ hit: string | undefined; keys: string[] }> {
-  const rows = await cacheStatements().entries.execute({ revision: revisionId, key: cacheKey });
-  // Cast to text, the driver hands the result over as a string (as JSON it would parse it).
-  const hit = rows.find((r) => r.key === cacheKey)?.result ?? undefined;
-  return { hit, keys: rows.map((r) => r.key) };
-}
-
-/** One cached result as its JSON text, or undefined. */
-export async function getCachedResult({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<string | undefined> {
-  return (await getCacheEntries({ revisionId, cacheKey })).hit;
-}
-
-/**
- * Keeps a result (its JSON text) under a key. The text, a few hundred kB, goes as a parameter of
- * a server-side prepared statement: it is neither escaped into the SQL nor parsed out of it
- * again, which costs the server and MariaDB several milliseconds of CPU each on the text path.
- */
-export async function putCachedResult({ revisionId, cacheKey, resultJson }: { revisionId: string; cacheKey: string; resultJson: string }): Promise<void> {
-  await pool().execute(
-    "INSERT INTO solve_cache (revision_id, cache_key, result, created_at) VALUES (?, ?, ?, ?) ON DUPLICATE KEY UPDATE result = VALUES(result), created_at = VALUES(created_at)",
-    [revisionId, cacheKey, resultJson, new Date()],
-  );
 }
 
 export interface BuildMemberRow {

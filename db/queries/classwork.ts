@@ -1,13 +1,9 @@
 import "server-only";
-import { and, asc, desc, eq, type Placeholder, sql } from "drizzle-orm";
+import { and, asc, desc, eq, sql, type SQLWrapper } from "drizzle-orm";
 import { db } from "../client";
 import { builds, classMembers, exerciseCopies, exercises, handins, notifications, users, workedExamples } from "../schema";
+import { parseJson } from "./json";
 import { newId } from "./users";
-
-// MariaDB keeps JSON as LONGTEXT: the driver returns text.
-function parseJson(value: unknown): unknown {
-  return typeof value === "string" ? JSON.parse(value) : value;
-}
 
 type ExampleDbRow = typeof workedExamples.$inferSelect;
 export type ExampleRow = Omit<ExampleDbRow, "hidden"> & { hidden: string[]; buildTitle: string };
@@ -129,7 +125,7 @@ export async function listStudents({ classId }: { classId: string }): Promise<{ 
  * Whether the viewer may read a build through a class: it is a worked example or an
  * exercise starter of a class they belong to, or a hand-in in a class they teach.
  */
-export function classReaderSql(buildId: typeof builds.id, viewerId: string | Placeholder) {
+export function classReaderSql(buildId: typeof builds.id, viewerId: string | SQLWrapper) {
   // A student never reads, through a class, the build behind a worked example of theirs whose
   // values are still questions (hidden, not revealed by hand, reveal date not reached): its
   // Budget would give the answers away (the same rule as valuesWithheld in lib/classroom/access).
@@ -141,7 +137,7 @@ export function classReaderSql(buildId: typeof builds.id, viewerId: string | Pla
 }
 
 /** The build is behind a worked example of a class where the viewer is a student and the example's values are still questions. */
-export function withheldExampleSql(buildId: typeof builds.id, viewerId: string | Placeholder) {
+export function withheldExampleSql(buildId: typeof builds.id, viewerId: string | SQLWrapper) {
   return sql<number>`exists(
     select 1 from worked_example wh join class_member cs on cs.class_id = wh.class_id and cs.role = 'student'
     where wh.build_id = ${buildId} and cs.user_id = ${viewerId} and ${stillQuestionsSql("wh")}

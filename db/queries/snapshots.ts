@@ -1,13 +1,12 @@
 import "server-only";
-import { and, eq, inArray, sql } from "drizzle-orm";
+import { eq, inArray, sql } from "drizzle-orm";
 import { db, type Db, preparedOnce } from "../client";
 import { parts, revisionPartSnapshots, revisionSolverChanges, users } from "../schema";
+import { parseJson } from "./json";
 import { type PartRecord, recordColumns, toRecord } from "./parts";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
-// MariaDB keeps JSON as LONGTEXT: the driver returns text.
-const parseJson = (value: unknown): unknown => (typeof value === "string" ? JSON.parse(value) : value);
 
 /** A part record as kept in a snapshot (dates as ISO text). */
 type StoredRecord = Omit<PartRecord, "createdAt" | "updatedAt"> & { createdAt: string; updatedAt: string };
@@ -34,18 +33,11 @@ export async function snapshotPartsInTx(tx: Tx, revisionId: string, partIds: rea
   );
 }
 
-/** The reads every solve makes, prepared once (see preparedOnce). */
 const statements = preparedOnce(() => ({
   snapshot: db()
     .select({ partId: revisionPartSnapshots.partId, record: revisionPartSnapshots.record })
     .from(revisionPartSnapshots)
     .where(eq(revisionPartSnapshots.revisionId, sql.placeholder("revision")))
-    .prepare(),
-  solverChange: db()
-    .select({ previousVersion: revisionSolverChanges.previousVersion, changes: revisionSolverChanges.changes })
-    .from(revisionSolverChanges)
-    .where(and(eq(revisionSolverChanges.revisionId, sql.placeholder("revision")), eq(revisionSolverChanges.solverVersion, sql.placeholder("version"))))
-    .limit(1)
     .prepare(),
 }));
 
@@ -54,6 +46,21 @@ export async function getSnapshot({ revisionId }: { revisionId: string }): Promi
   const rows = await statements().snapshot.execute({ revision: revisionId });
   if (rows.length === 0) return undefined;
   return new Map(rows.map((r) => [r.partId, fromStored(parseJson(r.record) as StoredRecord)]));
+}
+
+/**
+ * A snapshot read as one JSON array of `{ partId, record }` (see db/queries/solve-cache.ts);
+ * undefined when it is empty or not such an array.
+ */
+export function snapshotFromJson(value: unknown): Map<string, PartRecord> | undefined {
+  const rows = parseJson(value);
+  if (!Array.isArray(rows) || rows.length === 0) return undefined;
+  const out = new Map<string, PartRecord>();
+  for (const row of rows as { partId?: unknown; record?: unknown }[]) {
+    if (typeof row?.partId !== "string" || row.record === null || typeof row.record !== "object") return undefined;
+    out.set(row.partId, fromStored(row.record as StoredRecord));
+  }
+  return out;
 }
 
 /**
@@ -74,12 +81,6 @@ export async function putSnapshotOnce({ revisionId, records }: { revisionId: str
 export interface SolverChange {
   previousVersion: string;
   changes: string[];
-}
-
-export async function getSolverChange({ revisionId, solverVersion }: { revisionId: string; solverVersion: string }): Promise<SolverChange | null> {
-  const rows = await statements().solverChange.execute({ revision: revisionId, version: solverVersion });
-  const row = rows[0];
-  return row ? { previousVersion: row.previousVersion, changes: parseJson(row.changes) as string[] } : null;
 }
 
 export async function putSolverChange({ revisionId, solverVersion, change }: { revisionId: string; solverVersion: string; change: SolverChange }): Promise<void> {

@@ -61,6 +61,16 @@ export const getSession = cache(async (): Promise<{ user: User; session: Session
   return result.session && result.user ? { user: result.user, session: result.session } : null;
 });
 
+/**
+ * The stored id of the session the request's cookie names, without asking the database whether
+ * it is live: for a read that runs beside the session check (getSession) and is trusted only
+ * when that check names the same user.
+ */
+export async function claimedSessionId(): Promise<string | null> {
+  const token = (await cookies()).get(lucia().sessionCookieName)?.value;
+  return token ? (sessionIdOf(token)?.id ?? null) : null;
+}
+
 export async function currentUser(): Promise<User | null> {
   return (await getSession())?.user ?? null;
 }

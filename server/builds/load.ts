@@ -1,18 +1,22 @@
 import "server-only";
 import { notFound } from "next/navigation";
-import { getBuild, getBuildAndRevision, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
+import { getBuild, getBuildAndRevision, getBuildToSolve, getRevision, type BuildSummary, type RevisionRow } from "@/db/queries/builds";
+import type { SolveReads } from "@/db/queries/solve-cache";
 import { getParts, partUsage, type PartRecord } from "@/db/queries/parts";
 import type { BuildAccess, BuildViewer } from "@/lib/builds/access";
 import { collectPartIds } from "@/lib/builds/part-ids";
 import { ApiError } from "@/lib/http/api-error";
-import { requirePageUser } from "@/server/auth/session";
+import { claimedSessionId, requirePageUser, type SessionUser } from "@/server/auth/session";
 
 export type LoadedBuild = BuildSummary & { access: BuildAccess };
+
+const buildNotFound = () => new ApiError("not_found:build", "No such build, or it is not shared with you.", "id");
+const revisionNotFound = (n: number) => new ApiError("not_found:revision", `This build has no revision ${n}.`, "revision");
 
 /** The build when the viewer may see it, else 404 (a private build's existence is not told). */
 export async function loadBuild({ id, viewer }: { id: string; viewer: BuildViewer }): Promise<LoadedBuild> {
   const build = await getBuild({ id, viewer });
-  if (!build) throw new ApiError("not_found:build", "No such build, or it is not shared with you.", "id");
+  if (!build) throw buildNotFound();
   return build;
 }
 
@@ -25,7 +29,7 @@ export async function loadEditableBuild({ id, viewer }: { id: string; viewer: Bu
 export async function loadRevision({ build, number }: { build: LoadedBuild; number?: number }): Promise<RevisionRow> {
   const n = number ?? build.currentRevision;
   const revision = await getRevision({ buildId: build.id, number: n });
-  if (!revision) throw new ApiError("not_found:revision", `This build has no revision ${n}.`, "revision");
+  if (!revision) throw revisionNotFound(n);
   return revision;
 }
 
@@ -35,9 +39,31 @@ export async function loadRevision({ build, number }: { build: LoadedBuild; numb
  */
 export async function loadBuildRevision({ id, viewer, number }: { id: string; viewer: BuildViewer; number?: number }): Promise<{ build: LoadedBuild; revision: RevisionRow }> {
   const found = await getBuildAndRevision({ id, viewer, number });
-  if (!found) throw new ApiError("not_found:build", "No such build, or it is not shared with you.", "id");
-  if (!found.revision) throw new ApiError("not_found:revision", `This build has no revision ${number ?? found.build.currentRevision}.`, "revision");
+  if (!found) throw buildNotFound();
+  if (!found.revision) throw revisionNotFound(number ?? found.build.currentRevision);
   return { build: found.build, revision: found.revision };
+}
+
+/**
+ * loadBuildRevision for the solve route, with the revision's solve reads (SolveReads), in one
+ * round trip that runs while the session is checked (`viewer`, which settles first: without a
+ * session the answer is 401 whatever the build). The read takes its access facts for the user
+ * of the session the cookie names; when that is not the checked viewer (an expired session), the
+ * build is read again for the viewer and the solve makes its own reads.
+ */
+export async function loadBuildToSolve({ id, viewer, number, cacheKey, solverVersion }: { id: string; viewer: Promise<SessionUser>; number?: number; cacheKey: string; solverVersion: string }): Promise<{ build: LoadedBuild; revision: RevisionRow; reads?: SolveReads }> {
+  const sessionId = await claimedSessionId();
+  const read = sessionId ? getBuildToSolve({ id, sessionId, number, cacheKey, solverVersion }) : Promise.resolve(undefined);
+  read.catch(() => undefined);
+  const user = await viewer;
+  const found = await read;
+  if (found && found.viewerId === user.id) {
+    const build = found.build(user);
+    if (!build) throw buildNotFound();
+    if (!found.revision) throw revisionNotFound(number ?? build.currentRevision);
+    return { build, revision: found.revision, reads: found.reads };
+  }
+  return loadBuildRevision({ id, viewer: user, number });
 }
 
 /**

@@ -1,8 +1,9 @@
 import "server-only";
 import { after } from "next/server";
-import { getCacheEntries, getCachedResult, putCachedResult, type RevisionRow } from "@/db/queries/builds";
+import type { RevisionRow } from "@/db/queries/builds";
 import type { PartRecord } from "@/db/queries/parts";
-import { getSnapshot, getSolverChange, putSnapshotOnce, putSolverChange, type SolverChange } from "@/db/queries/snapshots";
+import { getCachedResult, getSolveReads, putCachedResult, type SolveReads } from "@/db/queries/solve-cache";
+import { getSnapshot, putSnapshotOnce, putSolverChange, type SolverChange } from "@/db/queries/snapshots";
 import { figureChanges } from "@/lib/builds/solver-change";
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, forCharts, resolveBuild } from "@/lib/retrofit";
@@ -18,8 +19,17 @@ export const SOLVER_VERSION = `e${EVALUATION_VERSION}.8`;
 /** Warm-up curves as the charts draw them, or every node and sample. */
 export type Curves = "chart" | "full";
 
-/** A build the caller may see and one of its revisions; who is asking does not change the answer. Curves are in full unless told. */
-type SolveArgs = { build: LoadedBuild; revision: RevisionRow; curves?: Curves };
+/** The cache key of a result with these curves. */
+export function solveCacheKey(curves: Curves): string {
+  return curves === "chart" ? `${SOLVER_VERSION}:chart` : SOLVER_VERSION;
+}
+
+/**
+ * A build the caller may see and one of its revisions; who is asking does not change the answer.
+ * Curves are in full unless told. `reads`: the revision's solve reads for this solver version
+ * and these curves, when the caller read them with the build (else they are read here).
+ */
+type SolveArgs = { build: LoadedBuild; revision: RevisionRow; curves?: Curves; reads?: SolveReads };
 
 export type RevisionSolve = {
   buildId: string;
@@ -36,9 +46,12 @@ export type RevisionSolve = {
  * moves a saved revision. A revision saved before snapshots were kept gets one now, from the
  * parts as its owner sees them (the same records its figures were worked out from until now).
  */
-export async function revisionPartRecords({ build, revision }: SolveArgs): Promise<Map<string, PartRecord>> {
-  const snapshot = await getSnapshot({ revisionId: revision.id });
-  if (snapshot) return snapshot;
+export async function revisionPartRecords({ build, revision }: Pick<SolveArgs, "build" | "revision">): Promise<Map<string, PartRecord>> {
+  return (await getSnapshot({ revisionId: revision.id })) ?? snapshotNow({ build, revision });
+}
+
+/** A snapshot for a revision saved before snapshots were kept, from the parts as its owner sees them now. */
+async function snapshotNow({ build, revision }: Pick<SolveArgs, "build" | "revision">): Promise<Map<string, PartRecord>> {
   const records = await loadDesignParts({ design: revision.design, viewer: { id: build.ownerId, role: "maker" } });
   return putSnapshotOnce({ revisionId: revision.id, records });
 }
@@ -115,29 +128,24 @@ const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
 
 /**
  * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when
- * it holds this key. A cached answer is read as its JSON text: a hit goes to the client without
- * being parsed and re-serialised. Everything a request needs before it can evaluate
- * (the cache's keys and a hit, the parts snapshot, a recorded solver change) is asked for at
- * once, so a miss waits for one round trip, not three.
+ * it holds this key. A cached answer is read as its JSON bytes: a hit goes to the client without
+ * being decoded, parsed or re-serialised. Everything a request needs before it can evaluate
+ * (the cache's keys and a hit, the parts snapshot, a recorded solver change) is read in one
+ * round trip, the route's together with the build itself.
  */
-async function solveToText({ build, revision, curves = "full" }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
-  const keys: Record<Curves, string> = { full: SOLVER_VERSION, chart: `${SOLVER_VERSION}:chart` };
+async function solveToText({ build, revision, curves = "full", reads }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
+  const found = reads ?? (await getSolveReads({ revisionId: revision.id, cacheKey: solveCacheKey(curves), solverVersion: SOLVER_VERSION }));
+  if (found.hit !== undefined) {
+    return { head: { ...base, solverChange: found.change, cached: true }, evaluationJson: found.hit };
+  }
   // The snapshot holds the parts as the owner saw them: whoever may see the build (a
   // reviewer, a class member, a share link) gets the owner's Budget, though the owner's
   // private part records themselves stay private (only their effect on the figures shows).
-  const recordsRead = revisionPartRecords({ build, revision });
-  const changeRead = getSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION });
-  recordsRead.catch(() => undefined);
-  changeRead.catch(() => undefined);
-  const cache = await getCacheEntries({ revisionId: revision.id, cacheKey: keys[curves] });
-  if (cache.hit !== undefined) {
-    return { head: { ...base, solverChange: await changeRead, cached: true }, evaluationJson: cache.hit };
-  }
-  const records = await recordsRead;
+  const records = found.snapshot ?? (await snapshotNow({ build, revision }));
   // The newest result an older solver gave this revision, to say what moved (rare: once per
   // revision after the solver changes).
-  const previousKey = cache.keys.find((k) => versionOfKey(k) !== SOLVER_VERSION);
+  const previousKey = found.keys.find((k) => versionOfKey(k) !== SOLVER_VERSION);
   const previousRead = previousKey === undefined ? undefined : getCachedResult({ revisionId: revision.id, cacheKey: previousKey });
   previousRead?.catch(() => undefined);
   const t0 = performance.now();
@@ -148,7 +156,7 @@ async function solveToText({ build, revision, curves = "full" }: SolveArgs): Pro
   const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
   const serializeMs = performance.now() - t0 - evaluateMs;
   const previous = previousKey === undefined ? undefined : await previousRead;
-  const solverChange = previousKey !== undefined && previous ? solverChangeFrom({ solverVersion: versionOfKey(previousKey), text: previous }, full) : null;
+  const solverChange = previousKey !== undefined && previous ? solverChangeFrom({ solverVersion: versionOfKey(previousKey), text: previous.toString("utf8") }, full) : null;
   // What moved and both shapes are kept after the answer has left: a slow or failed write
   // costs the next caller a recomputation, never this caller time or an error. The change
   // goes first, so whoever reads the cached result finds it.
@@ -157,7 +165,7 @@ async function solveToText({ build, revision, curves = "full" }: SolveArgs): Pro
     // The shape this caller asked for is text already; the other is made only once that is
     // stored, so the work is spread out rather than done in one block.
     const keep = (c: Curves, text: string) =>
-      putCachedResult({ revisionId: revision.id, cacheKey: keys[c], resultJson: text }).catch((e: unknown) => {
+      putCachedResult({ revisionId: revision.id, cacheKey: solveCacheKey(c), resultJson: text }).catch((e: unknown) => {
         console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
       });
     await keep(curves, evaluationJson);
@@ -180,17 +188,20 @@ function solverChangeFrom(previous: { solverVersion: string; text: string }, eva
 
 export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
   const r = await solveToText(args);
-  return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(r.evaluationJson) as BuildEvaluation) };
+  const json = typeof r.evaluationJson === "string" ? r.evaluationJson : r.evaluationJson.toString("utf8");
+  return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(json) as BuildEvaluation) };
 }
 
 /**
  * The solve route's body (`RevisionSolve` as JSON, in UTF-8), built around the cached bytes,
- * and how long the evaluation itself and its serialisation (the chart shape, rounded) took
- * when they ran (not on a cache hit).
+ * and how long the evaluation itself and its serialisation (rounded) took when they ran (not on
+ * a cache hit).
  */
-export async function solveRevisionJson(args: SolveArgs): Promise<{ body: string; evaluateMs?: number; serializeMs?: number }> {
+export async function solveRevisionJson(args: SolveArgs): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
   const r = await solveToText(args);
-  return { body: `${JSON.stringify(r.head).slice(0, -1)},"evaluation":${r.evaluationJson}}`, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
+  const head = `${JSON.stringify(r.head).slice(0, -1)},"evaluation":`;
+  const body = typeof r.evaluationJson === "string" ? Buffer.from(`${head}${r.evaluationJson}}`) : Buffer.concat([Buffer.from(head), r.evaluationJson, Buffer.from("}")]);
+  return { body: body as Uint8Array<ArrayBuffer>, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
 }
 
 /** Resolves the design against the part records and runs the evaluation (pure from here on). */

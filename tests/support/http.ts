@@ -75,6 +75,11 @@ export class Client {
   hasSession(): boolean {
     return this.cookies.has("sinkwise_session");
   }
+
+  /** The session cookie's value (the token the browser holds), if any. */
+  sessionToken(): string | undefined {
+    return this.cookies.get("sinkwise_session");
+  }
 }
 
 export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? "";

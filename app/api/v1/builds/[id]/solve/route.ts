@@ -1,7 +1,7 @@
 import { solveBuildSchema } from "@/lib/builds/api-schemas";
 import { requireUser } from "@/server/auth/session";
-import { loadBuildRevision } from "@/server/builds/load";
-import { solveRevisionJson } from "@/server/builds/solve";
+import { loadBuildToSolve } from "@/server/builds/load";
+import { SOLVER_VERSION, solveCacheKey, solveRevisionJson } from "@/server/builds/solve";
 import { readJson, route } from "@/server/route";
 
 /**
@@ -12,10 +12,16 @@ import { readJson, route } from "@/server/route";
  */
 export const POST = route<{ params: Promise<{ id: string }> }>(async (request, { params }) => {
   const t0 = performance.now();
-  const user = await requireUser();
-  const { revision: number, curves } = await readJson(request, solveBuildSchema, "solve");
-  const { build, revision } = await loadBuildRevision({ id: (await params).id, viewer: user, number });
-  const { body, evaluateMs, serializeMs } = await solveRevisionJson({ build, revision, curves });
+  // The session is checked while the body is read and the build with it; without a session
+  // the answer is 401, whatever the body or the build.
+  const viewer = requireUser();
+  viewer.catch(() => undefined);
+  const { revision: number, curves } = await readJson(request, solveBuildSchema, "solve").catch(async (e: unknown) => {
+    await viewer;
+    throw e;
+  });
+  const { build, revision, reads } = await loadBuildToSolve({ id: (await params).id, viewer, number, cacheKey: solveCacheKey(curves), solverVersion: SOLVER_VERSION });
+  const { body, evaluateMs, serializeMs } = await solveRevisionJson({ build, revision, curves, reads });
   const headers: Record<string, string> = { "content-type": "application/json" };
   // The handler's whole time, and of it the evaluation and its serialisation when they ran.
   const timing = [`handler;dur=${(performance.now() - t0).toFixed(2)}`];

@@ -29,7 +29,8 @@ if [ ! -f .next/BUILD_ID ] || [ "${LOAD_REBUILD:-0}" = 1 ]; then
 fi
 assert_port_free "$PORT" || exit 1
 mkdir -p .data/logs
-node node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" >.data/logs/load-server.log 2>&1 &
+# The preload lets the load script ask for a full garbage collection before it reads memory.
+node --require ./scripts/load-gc-hook.cjs node_modules/next/dist/bin/next start -H 127.0.0.1 -p "$PORT" >.data/logs/load-server.log 2>&1 &
 SERVER_PID=$!
 wait_for_url "http://127.0.0.1:$PORT/api/v1/health" "$SERVER_PID" || exit 1
 LOAD_URL="http://127.0.0.1:$PORT" LOAD_SERVER_PID="$SERVER_PID" node_modules/.bin/tsx scripts/load.ts

@@ -7,7 +7,6 @@ import { type PartRecord, recordColumns, toRecord } from "./parts";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
-
 /** A part record as kept in a snapshot (dates as ISO text). */
 type StoredRecord = Omit<PartRecord, "createdAt" | "updatedAt"> & { createdAt: string; updatedAt: string };
 
@@ -33,6 +32,7 @@ export async function snapshotPartsInTx(tx: Tx, revisionId: string, partIds: rea
   );
 }
 
+/** A revision's snapshot on its own (a solve reads it with the rest: db/queries/solve-cache.ts). */
 const statements = preparedOnce(() => ({
   snapshot: db()
     .select({ partId: revisionPartSnapshots.partId, record: revisionPartSnapshots.record })

@@ -65,12 +65,11 @@ export async function toSolveReads(row: SolveReadRow, revisionId: string): Promi
 }
 
 const statements = preparedOnce(() => {
-  const revision = sql.placeholder("revision");
+  const columns = solveReadColumns(sql.placeholder("revision"));
+  const one = sql`(select 1) as one`;
   return {
-    reads: db()
-      .select(solveReadColumns(revision))
-      .from(sql`(select 1) as one`)
-      .prepare(),
+    reads: db().select(columns).from(one).prepare(),
+    hit: db().select({ hit: columns.hit }).from(one).prepare(),
   };
 });
 
@@ -82,7 +81,8 @@ export async function getSolveReads({ revisionId, cacheKey, solverVersion }: { r
 
 /** One cached result as its JSON bytes, or undefined. */
 export async function getCachedResult({ revisionId, cacheKey }: { revisionId: string; cacheKey: string }): Promise<Buffer | undefined> {
-  return (await getSolveReads({ revisionId, cacheKey, solverVersion: "" })).hit;
+  const rows = await statements().hit.execute({ revision: revisionId, cacheKey });
+  return rows[0]?.hit ?? undefined;
 }
 
 /**

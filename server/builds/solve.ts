@@ -133,7 +133,7 @@ const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
  * (the cache's keys and a hit, the parts snapshot, a recorded solver change) is read in one
  * round trip, the route's together with the build itself.
  */
-async function solveToText({ build, revision, curves = "full", reads }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
+async function solveToJson({ build, revision, curves = "full", reads }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
   const found = reads ?? (await getSolveReads({ revisionId: revision.id, cacheKey: solveCacheKey(curves), solverVersion: SOLVER_VERSION }));
   if (found.hit !== undefined) {
@@ -187,7 +187,7 @@ function solverChangeFrom(previous: { solverVersion: string; text: string }, eva
 }
 
 export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
-  const r = await solveToText(args);
+  const r = await solveToJson(args);
   const json = typeof r.evaluationJson === "string" ? r.evaluationJson : r.evaluationJson.toString("utf8");
   return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(json) as BuildEvaluation) };
 }
@@ -198,7 +198,7 @@ export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
  * a cache hit).
  */
 export async function solveRevisionJson(args: SolveArgs): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
-  const r = await solveToText(args);
+  const r = await solveToJson(args);
   const head = `${JSON.stringify(r.head).slice(0, -1)},"evaluation":`;
   const body = typeof r.evaluationJson === "string" ? Buffer.from(`${head}${r.evaluationJson}}`) : Buffer.concat([Buffer.from(head), r.evaluationJson, Buffer.from("}")]);
   return { body: body as Uint8Array<ArrayBuffer>, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };

@@ -1,7 +1,7 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
 import { and, asc, eq, isNull, sql } from "drizzle-orm";
-import { db, mysqlErrorCode } from "../client";
+import { db, mysqlErrorCode, preparedOnce } from "../client";
 import { buildInvitations, buildMembers, passwordResetTokens, type Role, signupRequests, userSessions, users } from "../schema";
 
 export type UserRow = typeof users.$inferSelect;
@@ -19,6 +19,21 @@ const publicColumns = {
 
 export function newId(): string {
   return randomBytes(15).toString("base64url");
+}
+
+const sessionStatements = preparedOnce(() => ({
+  withUser: db()
+    .select({ session: { id: userSessions.id, userId: userSessions.userId, expiresAt: userSessions.expiresAt }, user: publicColumns })
+    .from(userSessions)
+    .innerJoin(users, eq(users.id, userSessions.userId))
+    .where(eq(userSessions.id, sql.placeholder("id")))
+    .limit(1)
+    .prepare(),
+}));
+
+/** A session (by its stored id) and its user, in one round trip; undefined when there is no such session. */
+export async function getSessionWithUser({ id }: { id: string }): Promise<{ session: { id: string; userId: string; expiresAt: Date }; user: PublicUser } | undefined> {
+  return (await sessionStatements().withUser.execute({ id }))[0];
 }
 
 export async function getUserByEmail({ email }: { email: string }): Promise<UserRow | undefined> {

@@ -1,7 +1,8 @@
 import "server-only";
 import { Mysql2Adapter } from "@lucia-auth/adapter-mysql";
-import { Lucia, TimeSpan } from "lucia";
+import { type DatabaseSession, type DatabaseUser, Lucia, TimeSpan } from "lucia";
 import { pool } from "@/db/client";
+import { getSessionWithUser } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
 import { env } from "@/server/env";
 
@@ -11,9 +12,25 @@ export function sessionCookieName(): string {
   return HTTPS() ? "__Host-sinkwise_session" : "sinkwise_session";
 }
 
+/**
+ * The stock adapter, but a session and its user are read in one round trip (it sends two, on
+ * every signed-in request), and only the user's columns the app reads: never the password hash.
+ */
+class SessionAdapter extends Mysql2Adapter {
+  override async getSessionAndUser(sessionId: string): Promise<[DatabaseSession | null, DatabaseUser | null]> {
+    const found = await getSessionWithUser({ id: sessionId });
+    if (!found) return [null, null];
+    const { session, user } = found;
+    return [
+      { id: session.id, userId: session.userId, expiresAt: session.expiresAt, attributes: {} },
+      { id: user.id, attributes: { email: user.email, display_name: user.displayName, role: user.role, length_units: user.lengthUnits, temperature_unit: user.temperatureUnit } },
+    ];
+  }
+}
+
 // Lucia v3 is kept inside this one module (and session.ts) so it can be swapped later.
 function createLucia() {
-  const adapter = new Mysql2Adapter(pool(), { user: "user", session: "user_session" });
+  const adapter = new SessionAdapter(pool(), { user: "user", session: "user_session" });
   return new Lucia(adapter, {
     sessionExpiresIn: new TimeSpan(30, "d"),
     sessionCookie: {

@@ -100,7 +100,7 @@ export async function benchBuilds(): Promise<void> {
       console.log(
         `[bench:builds]   ${b.title.padEnd(46)} cold median ${coldMs.toFixed(1)} ms, evaluation ${evalMs.toFixed(1)} ms (cold ÷ evaluation ${(coldMs / evalMs).toFixed(2)}; the rest ${(coldMs - evalMs).toFixed(1)} ms: serialising ${median(serials).toFixed(1)}, handler in all ${median(handlers).toFixed(1)}) · cached median ${median(cached).toFixed(1)} ms (handler ${median(cachedHandlers).toFixed(1)}) · answer ${(bytes / 1000).toFixed(0)} kB (full curves ${(full.bytes / 1000).toFixed(0)} kB)`,
       );
-      console.log(`[bench:builds]     ${target(`cold solve over HTTP, ${b.title} (≤ 2 × its evaluation ${evalMs.toFixed(1)} ms + 5 ms)`, coldMs, limit, "ms")}`);
+      console.log(`[bench:builds]     ${target(`cold solve over HTTP, ${b.title} (≤ 2 × its evaluation ${evalMs.toFixed(2)} ms + 5 ms)`, coldMs, limit, "ms")}`);
     }
     const c = median(allCold);
     const h = median(allCached);

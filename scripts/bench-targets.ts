@@ -14,7 +14,11 @@ const results: TargetResult[] = [];
 /** Records a target and returns its line: "<what>: <figure> (target <limit>): ok|over". */
 export function target(what: string, value: number, limit: number, unit: string, digits = 1, compare: "<" | "≤" = "≤"): string {
   const ok = compare === "<" ? value < limit : value <= limit;
-  const r = { what, figure: `${value.toFixed(digits)} ${unit}`, limit: `${compare} ${limit.toFixed(digits)} ${unit}`, ok };
+  // A figure is never shown equal to a limit it fails (or to one it meets by a hair): more
+  // digits until the two differ.
+  let shown = digits;
+  while (shown < digits + 3 && value !== limit && value.toFixed(shown) === limit.toFixed(shown)) shown++;
+  const r = { what, figure: `${value.toFixed(shown)} ${unit}`, limit: `${compare} ${limit.toFixed(shown)} ${unit}`, ok };
   results.push(r);
   return `${r.what}: ${r.figure} (target ${r.limit}): ${ok ? "ok" : "over"}`;
 }

@@ -105,12 +105,16 @@ const revisionColumns = {
 };
 
 /**
- * The two build reads every build page and route starts with, as prepared statements: their
- * SQL is built once per process, not on every request. "withRevision" also reads one revision
- * (the `number` given, or the current one when it is null) in the same round trip.
+ * The build reads every build page and route starts with, as prepared statements: their SQL is
+ * built once per process, not on every request. "withRevision" also reads one revision (the
+ * `number` given, or the current one when it is null) in the same round trip; "toSolve" reads
+ * that and the revision's solve reads, for the user of the session the request names (none when
+ * it names no live one: the caller checks the session meanwhile and compares the two).
  */
 const buildStatements = preparedOnce(() => {
   const viewer = sql.placeholder("viewer");
+  const sessionUser = sql`${userSessions.userId}`;
+  const revisionAsked = and(eq(buildRevisions.buildId, builds.id), sql`${buildRevisions.number} = coalesce(${sql.placeholder("number")}, ${builds.currentRevision})`);
   return {
     build: db()
       .select(buildWithAccessColumns(viewer))
@@ -125,25 +129,20 @@ const buildStatements = preparedOnce(() => {
       .from(builds)
       .innerJoin(users, eq(users.id, builds.ownerId))
       .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, viewer)))
-      .leftJoin(buildRevisions, and(eq(buildRevisions.buildId, builds.id), sql`${buildRevisions.number} = coalesce(${sql.placeholder("number")}, ${builds.currentRevision})`))
+      .leftJoin(buildRevisions, revisionAsked)
       .where(eq(builds.id, sql.placeholder("id")))
       .limit(1)
       .prepare(),
-    toSolve: (() => {
-      // The viewer is the user of the session the request names (none when it names no live
-      // one): the caller checks the session itself meanwhile and compares the two.
-      const sessionUser = sql`${userSessions.userId}`;
-      return db()
-        .select({ ...buildWithAccessColumns(sessionUser), viewerId: userSessions.userId, revision: revisionColumns, ...solveReadColumns(sql`${buildRevisions.id}`) })
-        .from(builds)
-        .innerJoin(users, eq(users.id, builds.ownerId))
-        .leftJoin(userSessions, eq(userSessions.id, sql.placeholder("session")))
-        .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, userSessions.userId)))
-        .leftJoin(buildRevisions, and(eq(buildRevisions.buildId, builds.id), sql`${buildRevisions.number} = coalesce(${sql.placeholder("number")}, ${builds.currentRevision})`))
-        .where(eq(builds.id, sql.placeholder("id")))
-        .limit(1)
-        .prepare();
-    })(),
+    toSolve: db()
+      .select({ ...buildWithAccessColumns(sessionUser), viewerId: userSessions.userId, revision: revisionColumns, ...solveReadColumns(sql`${buildRevisions.id}`) })
+      .from(builds)
+      .innerJoin(users, eq(users.id, builds.ownerId))
+      .leftJoin(userSessions, eq(userSessions.id, sql.placeholder("session")))
+      .leftJoin(buildMembers, and(eq(buildMembers.buildId, builds.id), eq(buildMembers.userId, sessionUser)))
+      .leftJoin(buildRevisions, revisionAsked)
+      .where(eq(builds.id, sql.placeholder("id")))
+      .limit(1)
+      .prepare(),
   };
 });
 

@@ -20,14 +20,19 @@ export const SOLVER_VERSION = `e${EVALUATION_VERSION}.8`;
 export type Curves = "chart" | "full";
 
 /** The cache key of a result with these curves. */
-export function solveCacheKey(curves: Curves): string {
+function solveCacheKey(curves: Curves): string {
   return curves === "chart" ? `${SOLVER_VERSION}:chart` : SOLVER_VERSION;
+}
+
+/** The keys of a solve's reads (SolveReads) for these curves: its cache key, and the solver version a change is kept under. */
+export function solveReadKeys(curves: Curves): { cacheKey: string; solverVersion: string } {
+  return { cacheKey: solveCacheKey(curves), solverVersion: SOLVER_VERSION };
 }
 
 /**
  * A build the caller may see and one of its revisions; who is asking does not change the answer.
- * Curves are in full unless told. `reads`: the revision's solve reads for this solver version
- * and these curves, when the caller read them with the build (else they are read here).
+ * Curves are in full unless told. `reads`: the revision's solve reads under `solveReadKeys(curves)`,
+ * when the caller read them with the build (else they are read here).
  */
 type SolveArgs = { build: LoadedBuild; revision: RevisionRow; curves?: Curves; reads?: SolveReads };
 
@@ -135,7 +140,7 @@ const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
  */
 async function solveToJson({ build, revision, curves = "full", reads }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
-  const found = reads ?? (await getSolveReads({ revisionId: revision.id, cacheKey: solveCacheKey(curves), solverVersion: SOLVER_VERSION }));
+  const found = reads ?? (await getSolveReads({ revisionId: revision.id, ...solveReadKeys(curves) }));
   if (found.hit !== undefined) {
     return { head: { ...base, solverChange: found.change, cached: true }, evaluationJson: found.hit };
   }

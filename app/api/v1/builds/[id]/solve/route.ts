@@ -1,7 +1,7 @@
 import { solveBuildSchema } from "@/lib/builds/api-schemas";
 import { requireUser } from "@/server/auth/session";
 import { loadBuildToSolve } from "@/server/builds/load";
-import { SOLVER_VERSION, solveCacheKey, solveRevisionJson } from "@/server/builds/solve";
+import { solveReadKeys, solveRevisionJson } from "@/server/builds/solve";
 import { readJson, route } from "@/server/route";
 
 /**
@@ -20,7 +20,7 @@ export const POST = route<{ params: Promise<{ id: string }> }>(async (request, {
     await viewer;
     throw e;
   });
-  const { build, revision, reads } = await loadBuildToSolve({ id: (await params).id, viewer, number, cacheKey: solveCacheKey(curves), solverVersion: SOLVER_VERSION });
+  const { build, revision, reads } = await loadBuildToSolve({ id: (await params).id, viewer, number, ...solveReadKeys(curves) });
   const { body, evaluateMs, serializeMs } = await solveRevisionJson({ build, revision, curves, reads });
   const headers: Record<string, string> = { "content-type": "application/json" };
   // The handler's whole time, and of it the evaluation and its serialisation when they ran.

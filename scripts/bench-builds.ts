@@ -38,15 +38,30 @@ export async function benchBuilds(): Promise<void> {
       return { ms, evaluateMs: dur("evaluate"), serializeMs: dur("serialize"), handlerMs: dur("handler"), bytes: Buffer.byteLength(text), cached: text.slice(0, 400).includes('"cached":true') };
     };
     const clear = (id: string) => conn.query("DELETE r FROM solve_cache r JOIN build_revision v ON v.id = r.revision_id WHERE v.build_id = ?", [id]);
-    // The cache is written after the answer has left: wait for both shapes to land, so a
-    // clear before the next cold solve cannot race the last one's write (which would make
-    // the next "cold" solve a cache hit).
-    const settled = async (id: string) => {
+    // The cache is written after the answer has left: wait for the three shapes it keeps (the
+    // figures, their traces, the whole result) to land, so that no write of one solve runs into
+    // the next, and a clear cannot race a write (which would make the next "cold" solve a hit).
+    const settled = async (id: string, number?: number) => {
       for (let i = 0; i < 100; i++) {
-        const [rows] = await conn.query("SELECT COUNT(*) AS n FROM solve_cache r JOIN build_revision v ON v.id = r.revision_id WHERE v.build_id = ?", [id]);
-        if (Number((rows as { n: number }[])[0]?.n ?? 0) >= 2) return;
+        const [rows] = await conn.query("SELECT COUNT(*) AS n FROM solve_cache r JOIN build_revision v ON v.id = r.revision_id WHERE v.build_id = ? AND (? IS NULL OR v.number = ?)", [id, number ?? null, number ?? null]);
+        if (Number((rows as { n: number }[])[0]?.n ?? 0) >= 3) return;
         await new Promise((r) => setTimeout(r, 20));
       }
+    };
+    const api = async (path: string, method: string, body?: unknown) => {
+      const r = await request(`${server.base}${path}`, { method, headers: { cookie, origin: server.base, "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+      if (r.status >= 300) throw new Error(`${method} ${path} → ${r.status}: ${r.text.slice(0, 200)}`);
+      return JSON.parse(r.text) as unknown;
+    };
+    const freshRevisions = async (id: string): Promise<{ id: string; revisions: number[] }> => {
+      const { revision } = (await api(`/api/v1/builds/${id}`, "GET")) as { revision: { design: unknown } };
+      const { build } = (await api(`/api/v1/builds/${id}/fork`, "POST", { title: "bench copy" })) as { build: { id: string } };
+      const revisions: number[] = [];
+      for (let i = 0; i < COLD_RUNS; i++) {
+        const saved = (await api(`/api/v1/builds/${build.id}`, "PATCH", { design: revision.design, note: "bench" })) as { build: { currentRevision: number } };
+        revisions.push(saved.build.currentRevision);
+      }
+      return { id: build.id, revisions };
     };
     // The floor under every figure below: a route that does nothing, over the same connection.
     const floor: number[] = [];
@@ -70,17 +85,20 @@ export async function benchBuilds(): Promise<void> {
       const serials: number[] = [];
       const handlers: number[] = [];
       let bytes = 0;
-      for (let i = 0; i < COLD_RUNS; i++) {
-        await clear(b.id);
-        const r = await solve(b.id);
+      // Each cold solve is of a revision nothing has solved yet, as when a maker saves one: a
+      // throwaway copy of the build gets COLD_RUNS revisions of the same design first.
+      const copy = await freshRevisions(b.id);
+      for (const number of copy.revisions) {
+        const r = await solve(copy.id, JSON.stringify({ revision: number }));
         if (r.cached) throw new Error(`cold solve of ${b.title} answered from the cache`);
-        await settled(b.id);
+        await settled(copy.id, number);
         cold.push(r.ms);
         if (r.evaluateMs !== null) evals.push(r.evaluateMs);
         if (r.serializeMs !== null) serials.push(r.serializeMs);
         if (r.handlerMs !== null) handlers.push(r.handlerMs);
         bytes = r.bytes;
       }
+      await api(`/api/v1/builds/${copy.id}`, "DELETE");
       await clear(b.id);
       const full = await solve(b.id, JSON.stringify({ curves: "full" }));
       await settled(b.id);

@@ -38,6 +38,11 @@ export const solveBuildSchema = z.strictObject({
   revision: z.number().int().positive().optional(),
   /** "chart" (the default): warm-up curves thinned in time to what a chart draws; "full": every sample. */
   curves: z.enum(["chart", "full"], { error: "curves is chart or full." }).default("chart"),
+  /**
+   * "apart" (the default): each trace (the working behind a number) is a reference into the list
+   * that "only" answers with; "inline": every trace in place.
+   */
+  traces: z.enum(["apart", "inline", "only"], { error: "traces is apart, inline or only." }).default("apart"),
 });
 
 export type CreateBuildInput = z.infer<typeof createBuildSchema>;

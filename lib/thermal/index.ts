@@ -29,7 +29,7 @@ export { STEFAN_BOLTZMANN, STANDARD_GRAVITY, ZERO_CELSIUS_K, NETWORK_LIMITS, toK
 export { solveSteady, steadyTemperatures, sourceSweep, type SteadyResult, type SteadyLinkResult } from "./solve-steady";
 export type { SteadyOptions } from "./solver/steady";
 export { solveTransient, prepareTransient, type PreparedTransient, type TransientResult, type Crossing, type TransientSolverSettings } from "./solve-transient";
-export { makeTrace, quantity, elementResult, type Trace, type TraceQuantity, type TraceValidity, type ElementResult } from "./trace";
+export { makeTrace, quantity, elementResult, isTrace, isTraceRef, type Trace, type TraceRef, type TraceQuantity, type TraceValidity, type ElementResult } from "./trace";
 export { airPropertiesAt, type AirProperties } from "./air-properties";
 export { MATERIALS, getMaterial, emissivityFor, type Material, type Finish } from "./materials";
 export {

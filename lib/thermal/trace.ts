@@ -54,3 +54,22 @@ export function elementResult(conductanceWPerK: number, trace: Trace): ElementRe
   const g = Math.max(conductanceWPerK, 1e-300);
   return { conductanceWPerK: conductanceWPerK, kelvinPerWatt: Math.min(1 / g, Number.MAX_VALUE), trace };
 }
+
+/**
+ * Where a trace stands in a result sent without its traces: the index of the trace in the list
+ * sent apart (the working behind a number is read when a reader opens it).
+ */
+export interface TraceRef {
+  traceRef: number;
+}
+
+/** A trace, told by its shape (what every trace carries): a formula, inputs, a result and a source. */
+export function isTrace(value: unknown): value is Trace {
+  if (value === null || typeof value !== "object" || Array.isArray(value)) return false;
+  const t = value as Partial<Record<keyof Trace, unknown>>;
+  return typeof t.formula === "string" && typeof t.source === "string" && Array.isArray(t.inputs) && t.result !== null && typeof t.result === "object";
+}
+
+export function isTraceRef(value: unknown): value is TraceRef {
+  return value !== null && typeof value === "object" && typeof (value as Partial<TraceRef>).traceRef === "number" && Object.keys(value).length === 1;
+}

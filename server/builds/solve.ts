@@ -7,6 +7,7 @@ import { getSnapshot, putSnapshotOnce, putSolverChange, type SolverChange } from
 import { figureChanges } from "@/lib/builds/solver-change";
 import { partSchema, type Part } from "@/lib/parts";
 import { buildDesignSchema, type BuildEvaluation, EVALUATION_VERSION, evaluateBuild, forCharts, resolveBuild } from "@/lib/retrofit";
+import { isTrace, type Trace, type TraceRef } from "@/lib/thermal";
 import { toPartInput } from "@/server/parts/api";
 import { loadDesignParts, type LoadedBuild } from "./load";
 
@@ -14,37 +15,61 @@ import { loadDesignParts, type LoadedBuild } from "./load";
  * Bump when the engine or the compiler changes what a result contains or how it is worked
  * out: cached results of another version are recomputed.
  */
-export const SOLVER_VERSION = `e${EVALUATION_VERSION}.8`;
+export const SOLVER_VERSION = `e${EVALUATION_VERSION}.9`;
 
 /** Warm-up curves as the charts draw them, or every node and sample. */
 export type Curves = "chart" | "full";
 
-/** The cache key of a result with these curves. */
-function solveCacheKey(curves: Curves): string {
-  return curves === "chart" ? `${SOLVER_VERSION}:chart` : SOLVER_VERSION;
+/**
+ * Where a result's traces (the working behind each number) go. "apart": each trace is a
+ * TraceRef and the list of traces is read on its own ("only"), when a reader opens the working;
+ * "inline": in place.
+ */
+export type Traces = "apart" | "inline" | "only";
+
+/** What a solve answers with. */
+export type SolveShape = { curves: Curves; traces: Traces };
+
+/** What pages on the server read: every sample, every trace in place. */
+const WHOLE: SolveShape = { curves: "full", traces: "inline" };
+
+/**
+ * The shapes every fresh evaluation is kept in, whichever was asked: what the Budget asks for
+ * (the figures, then the traces when a working is opened) and what the server's pages read.
+ */
+const KEPT: readonly SolveShape[] = [{ curves: "chart", traces: "apart" }, { curves: "chart", traces: "only" }, WHOLE];
+
+/** The cache key of a result of this shape ("<version>[:chart][:apart]", or "<version>:traces"). */
+function solveCacheKey({ curves, traces }: SolveShape): string {
+  if (traces === "only") return `${SOLVER_VERSION}:traces`;
+  return `${SOLVER_VERSION}${curves === "chart" ? ":chart" : ""}${traces === "apart" ? ":apart" : ""}`;
 }
 
-/** The keys of a solve's reads (SolveReads) for these curves: its cache key, and the solver version a change is kept under. */
-export function solveReadKeys(curves: Curves): { cacheKey: string; solverVersion: string } {
-  return { cacheKey: solveCacheKey(curves), solverVersion: SOLVER_VERSION };
+/** The keys of a solve's reads (SolveReads) for this shape: its cache key, and the solver version a change is kept under. */
+export function solveReadKeys(shape: SolveShape): { cacheKey: string; solverVersion: string } {
+  return { cacheKey: solveCacheKey(shape), solverVersion: SOLVER_VERSION };
 }
 
 /**
  * A build the caller may see and one of its revisions; who is asking does not change the answer.
- * Curves are in full unless told. `reads`: the revision's solve reads under `solveReadKeys(curves)`,
- * when the caller read them with the build (else they are read here).
+ * Every sample and every trace in place unless told. `reads`: the revision's solve reads under
+ * `solveReadKeys(shape)`, when the caller read them with the build (else they are read here).
  */
-type SolveArgs = { build: LoadedBuild; revision: RevisionRow; curves?: Curves; reads?: SolveReads };
+type SolveArgs = { build: LoadedBuild; revision: RevisionRow; shape?: SolveShape; reads?: SolveReads };
 
-export type RevisionSolve = {
+type SolveHead = {
   buildId: string;
   revision: number;
   solverVersion: string;
   /** Set when an older solver gave this revision other figures: its version and what moved. */
   solverChange: SolverChange | null;
   cached: boolean;
-  evaluation: BuildEvaluation;
 };
+
+export type RevisionSolve = SolveHead & { evaluation: BuildEvaluation };
+
+/** The answer to a solve that asks for the traces only: the list a result sent with its traces "apart" refers to. */
+export type RevisionTraces = SolveHead & { traces: Trace[] };
 
 /**
  * The parts a revision used, as its snapshot keeps them: editing a part in the bin never
@@ -85,31 +110,62 @@ function roundNumber(v: number): number {
   return Number(v.toPrecision(7));
 }
 
+/** The traces taken out of a result, in the order their TraceRefs number them; a trace met twice is kept once. */
+type TracesApart = { list: unknown[]; index: Map<object, number> };
+
 /**
  * A rounded copy of a result for JSON.stringify: a replacer function takes the serialiser
  * off its fast path for every key, which cost more than the copy does. The copy (not the
- * result itself) is rounded because a miss also hands the unrounded evaluation back.
+ * result itself) is rounded because a miss also hands the unrounded evaluation back. With
+ * `apart`, each trace is replaced by a TraceRef and its rounded copy goes to the list.
  */
-function roundedForDisplay(value: unknown): unknown {
+function roundedForDisplay(value: unknown, apart?: TracesApart): unknown {
   if (typeof value === "number") return roundNumber(value);
   if (value === null || typeof value !== "object") return value;
   const withJson = value as { toJSON?: unknown };
-  if (typeof withJson.toJSON === "function") return roundedForDisplay((withJson.toJSON as () => unknown).call(value));
+  if (typeof withJson.toJSON === "function") return roundedForDisplay((withJson.toJSON as () => unknown).call(value), apart);
   if (Array.isArray(value)) {
     const out = new Array<unknown>(value.length);
     for (let i = 0; i < value.length; i++) {
       const x: unknown = value[i];
-      out[i] = typeof x === "number" ? roundNumber(x) : roundedForDisplay(x);
+      out[i] = typeof x === "number" ? roundNumber(x) : roundedForDisplay(x, apart);
     }
     return out;
+  }
+  if (apart && isTrace(value)) {
+    let traceRef = apart.index.get(value);
+    if (traceRef === undefined) {
+      traceRef = apart.list.push(roundedForDisplay(value)) - 1;
+      apart.index.set(value, traceRef);
+    }
+    return { traceRef } satisfies TraceRef;
   }
   const src = value as Record<string, unknown>;
   const out: Record<string, unknown> = {};
   for (const k of Object.keys(src)) {
     const x = src[k];
-    out[k] = typeof x === "number" ? roundNumber(x) : roundedForDisplay(x);
+    out[k] = typeof x === "number" ? roundNumber(x) : roundedForDisplay(x, apart);
   }
   return out;
+}
+
+/**
+ * A result in each shape as JSON text, made when asked for: the figures and the traces they
+ * refer to come from one walk.
+ */
+function shapesOf(full: BuildEvaluation): (shape: SolveShape) => string {
+  const curvesOf = (curves: Curves) => (curves === "chart" ? forCharts(full) : full);
+  const splits = new Map<Curves, { lean: unknown; traces: unknown[] }>();
+  const split = (curves: Curves) => {
+    let made = splits.get(curves);
+    if (!made) {
+      const taken: TracesApart = { list: [], index: new Map() };
+      made = { lean: roundedForDisplay(curvesOf(curves), taken), traces: taken.list };
+      splits.set(curves, made);
+    }
+    return made;
+  };
+  return ({ curves, traces }) => JSON.stringify(traces === "inline" ? roundedForDisplay(curvesOf(curves)) : traces === "only" ? split(curves).traces : split(curves).lean);
 }
 
 /**
@@ -131,6 +187,9 @@ function afterAnswer(work: () => Promise<void>): void {
 /** The solver version a cache key was written by ("<version>", "<version>:chart", or before snapshots "<version>:<parts fingerprint>"). */
 const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
 
+/** A cached result that holds an evaluation (every key but a list of traces). */
+const holdsEvaluation = (key: string): boolean => !key.endsWith(":traces");
+
 /**
  * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when
  * it holds this key. A cached answer is read as its JSON bytes: a hit goes to the client without
@@ -138,11 +197,11 @@ const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
  * (the cache's keys and a hit, the parts snapshot, a recorded solver change) is read in one
  * round trip, the route's together with the build itself.
  */
-async function solveToJson({ build, revision, curves = "full", reads }: SolveArgs): Promise<{ head: Omit<RevisionSolve, "evaluation">; evaluationJson: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
+async function solveToJson({ build, revision, shape = WHOLE, reads }: SolveArgs): Promise<{ head: SolveHead; json: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
-  const found = reads ?? (await getSolveReads({ revisionId: revision.id, ...solveReadKeys(curves) }));
+  const found = reads ?? (await getSolveReads({ revisionId: revision.id, ...solveReadKeys(shape) }));
   if (found.hit !== undefined) {
-    return { head: { ...base, solverChange: found.change, cached: true }, evaluationJson: found.hit };
+    return { head: { ...base, solverChange: found.change, cached: true }, json: found.hit };
   }
   // The snapshot holds the parts as the owner saw them: whoever may see the build (a
   // reviewer, a class member, a share link) gets the owner's Budget, though the owner's
@@ -150,34 +209,32 @@ async function solveToJson({ build, revision, curves = "full", reads }: SolveArg
   const records = found.snapshot ?? (await snapshotNow({ build, revision }));
   // The newest result an older solver gave this revision, to say what moved (rare: once per
   // revision after the solver changes).
-  const previousKey = found.keys.find((k) => versionOfKey(k) !== SOLVER_VERSION);
+  const previousKey = found.keys.find((k) => versionOfKey(k) !== SOLVER_VERSION && holdsEvaluation(k));
   const previousRead = previousKey === undefined ? undefined : getCachedResult({ revisionId: revision.id, cacheKey: previousKey });
   previousRead?.catch(() => undefined);
   const t0 = performance.now();
   const full = evaluateRevision({ design: revision.design, records });
   const evaluateMs = performance.now() - t0;
-  const shapes: Record<Curves, () => BuildEvaluation> = { full: () => full, chart: () => forCharts(full) };
-  const evaluation = shapes[curves]();
-  const evaluationJson = JSON.stringify(roundedForDisplay(evaluation));
+  const shapes = shapesOf(full);
+  const json = shapes(shape);
   const serializeMs = performance.now() - t0 - evaluateMs;
   const previous = previousKey === undefined ? undefined : await previousRead;
   const solverChange = previousKey !== undefined && previous ? solverChangeFrom({ solverVersion: versionOfKey(previousKey), text: previous.toString("utf8") }, full) : null;
-  // What moved and both shapes are kept after the answer has left: a slow or failed write
-  // costs the next caller a recomputation, never this caller time or an error. The change
-  // goes first, so whoever reads the cached result finds it.
+  // What moved and every kept shape are written after the answer has left: a slow or failed
+  // write costs the next caller a recomputation, never this caller time or an error. The change
+  // goes first, so whoever reads the cached result finds it; then the shape asked for (text
+  // already), then the others, one at a time, so the work is spread out rather than done in
+  // one block.
   afterAnswer(async () => {
     if (solverChange) await putSolverChange({ revisionId: revision.id, solverVersion: SOLVER_VERSION, change: solverChange });
-    // The shape this caller asked for is text already; the other is made only once that is
-    // stored, so the work is spread out rather than done in one block.
-    const keep = (c: Curves, text: string) =>
-      putCachedResult({ revisionId: revision.id, cacheKey: solveCacheKey(c), resultJson: text }).catch((e: unknown) => {
+    const asked = solveCacheKey(shape);
+    for (const kept of [shape, ...KEPT.filter((k) => solveCacheKey(k) !== asked)]) {
+      await putCachedResult({ revisionId: revision.id, cacheKey: solveCacheKey(kept), resultJson: shapes(kept) }).catch((e: unknown) => {
         console.error("[solve] cache write failed:", e instanceof Error ? e.message : e);
       });
-    await keep(curves, evaluationJson);
-    const other: Curves = curves === "chart" ? "full" : "chart";
-    await keep(other, JSON.stringify(roundedForDisplay(shapes[other]())));
+    }
   });
-  return { head: { ...base, solverChange, cached: false }, evaluationJson, evaluation, evaluateMs, serializeMs };
+  return { head: { ...base, solverChange, cached: false }, json, evaluation: full, evaluateMs, serializeMs };
 }
 
 /** Compares a fresh result with the last one an older solver gave: what moved, or null when there was none. */
@@ -191,21 +248,23 @@ function solverChangeFrom(previous: { solverVersion: string; text: string }, eva
   return { previousVersion: previous.solverVersion, changes: figureChanges(before, evaluation) };
 }
 
-export async function solveRevision(args: SolveArgs): Promise<RevisionSolve> {
-  const r = await solveToJson(args);
-  const json = typeof r.evaluationJson === "string" ? r.evaluationJson : r.evaluationJson.toString("utf8");
+/** A revision's evaluation, every sample and trace in place (for the server's pages). */
+export async function solveRevision(args: Omit<SolveArgs, "shape">): Promise<RevisionSolve> {
+  const r = await solveToJson({ ...args, shape: WHOLE });
+  const json = typeof r.json === "string" ? r.json : r.json.toString("utf8");
   return { ...r.head, evaluation: r.evaluation ?? (JSON.parse(json) as BuildEvaluation) };
 }
 
 /**
- * The solve route's body (`RevisionSolve` as JSON, in UTF-8), built around the cached bytes,
- * and how long the evaluation itself and its serialisation (rounded) took when they ran (not on
- * a cache hit).
+ * The solve route's body in UTF-8, built around the cached bytes: a `RevisionSolve` (its
+ * traces as TraceRefs when they go apart) or, for the traces only, a `RevisionTraces`; and how
+ * long the evaluation itself and its serialisation (rounded) took when they ran (not on a
+ * cache hit).
  */
-export async function solveRevisionJson(args: SolveArgs): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
+export async function solveRevisionJson(args: SolveArgs & { shape: SolveShape }): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
   const r = await solveToJson(args);
-  const head = `${JSON.stringify(r.head).slice(0, -1)},"evaluation":`;
-  const body = typeof r.evaluationJson === "string" ? Buffer.from(`${head}${r.evaluationJson}}`) : Buffer.concat([Buffer.from(head), r.evaluationJson, Buffer.from("}")]);
+  const head = `${JSON.stringify(r.head).slice(0, -1)},"${args.shape.traces === "only" ? "traces" : "evaluation"}":`;
+  const body = typeof r.json === "string" ? Buffer.from(`${head}${r.json}}`) : Buffer.concat([Buffer.from(head), r.json, Buffer.from("}")]);
   return { body: body as Uint8Array<ArrayBuffer>, evaluateMs: r.evaluateMs, serializeMs: r.serializeMs };
 }
 

@@ -70,6 +70,11 @@ describe("a retrofit from Parts bin records to its Budget, in chromium", () => {
     // Expanding a number shows its trace.
     await headroom.locator("summary").first().click();
     await expect.poll(() => headroom.textContent()).toContain("Source:");
+    // The limit's own working and the temperature's links come apart from the figures: read when opened.
+    const limit = headroom.locator("tbody tr").first().locator("details").nth(1);
+    await limit.locator("summary").click();
+    await expect.poll(() => limit.textContent()).toMatch(/Source: \S/);
+    await expect.poll(() => headroom.locator("tbody tr").first().locator("details").first().textContent()).not.toContain("Reading the working");
 
     await page.getByRole("link", { name: "Report", exact: true }).click();
     await page.getByTestId("report").waitFor();

@@ -81,7 +81,7 @@ describe("calibrating a build to its measured warm-up", () => {
     expect(revision.design.calibration).toMatchObject({ parameter: saved.calibration.parameter, run: { id: runId } });
     expect(revision.design.calibration!.factor).toBeCloseTo(saved.calibration.factor, 9);
     expect(revision.note).toMatch(/^Calibrated to the bench run “Finished lantern on the bench”: .+ × \d\.\d\d \(95 % \d\.\d\d–\d\.\d\d\), misfit \d+\.\d K → \d+\.\d K over \d+ readings\.$/);
-    const solved = await maker.post(`/api/v1/builds/${buildId}/solve`, { curves: "full" });
+    const solved = await maker.post(`/api/v1/builds/${buildId}/solve`, { curves: "full", traces: "inline" });
     const after = (solved.body as unknown as { evaluation: BuildEvaluation; revision: number });
     expect(after.revision).toBe(4);
     const traces = after.evaluation.scenarios.flatMap((s) => s.thermal?.links ?? []).filter((l) => l.trace.element === "calibrated");

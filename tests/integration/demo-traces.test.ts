@@ -1,9 +1,9 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import type { Trace } from "@/lib/thermal";
-import type { BuildEvaluation } from "@/lib/retrofit";
 import { nodeBalanceTrace } from "@/lib/retrofit/derivations";
 import { Client, signedIn } from "../support/http";
 import { sourceProblem } from "../support/sources";
+import { solvedWithTraces } from "../support/traces";
 
 /**
  * Every trace a reader can open on a demo build's Budget names a source they can look up:
@@ -53,9 +53,8 @@ describe("the sources behind every figure of the demo builds", () => {
     const bad: string[] = [];
     let count = 0;
     for (const b of demo) {
-      const r = await maker.post(`/api/v1/builds/${b.id}/solve`, {});
-      expect(r.status).toBe(200);
-      const evaluation = (r.body as unknown as { evaluation: BuildEvaluation }).evaluation;
+      // As the Budget reads it: the figures, then the working behind them.
+      const evaluation = await solvedWithTraces(maker, b.id);
       const found: { path: string; trace: Trace }[] = [];
       collect(evaluation, "evaluation", found);
       for (const s of evaluation.scenarios) {

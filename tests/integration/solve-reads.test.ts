@@ -38,8 +38,8 @@ beforeAll(async () => {
   // A solve fills the cache (written after the answer: wait for both shapes).
   expect((await owner.post(`/api/v1/builds/${buildId}/solve`, {})).status).toBe(200);
   const stored = async () => (await rows<{ n: number }>("SELECT COUNT(*) AS n FROM solve_cache c JOIN build_revision r ON r.id = c.revision_id WHERE r.build_id = ?", [buildId]))[0]?.n;
-  for (let i = 0; i < 100 && Number(await stored()) < 2; i++) await new Promise((r) => setTimeout(r, 100));
-  expect(Number(await stored())).toBe(2);
+  for (let i = 0; i < 100 && Number(await stored()) < 3; i++) await new Promise((r) => setTimeout(r, 100));
+  expect(Number(await stored())).toBe(3);
 });
 
 afterAll(async () => {

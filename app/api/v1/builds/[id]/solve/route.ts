@@ -6,7 +6,8 @@ import { readJson, route } from "@/server/route";
 
 /**
  * Evaluates a revision (the current one unless `revision` is given): every mode and charging.
- * Warm-up curves come as the charts draw them unless `curves: "full"` is asked for. Server-Timing
+ * Warm-up curves come as the charts draw them unless `curves: "full"` is asked for; the traces
+ * come apart (`traces: "only"` reads them) unless `traces: "inline"` is asked for. Server-Timing
  * says the handler's time and, for a fresh evaluation, its own and its serialisation's
  * (`npm run bench` reads them).
  */
@@ -16,12 +17,12 @@ export const POST = route<{ params: Promise<{ id: string }> }>(async (request, {
   // the answer is 401, whatever the body or the build.
   const viewer = requireUser();
   viewer.catch(() => undefined);
-  const { revision: number, curves } = await readJson(request, solveBuildSchema, "solve").catch(async (e: unknown) => {
+  const { revision: number, ...shape } = await readJson(request, solveBuildSchema, "solve").catch(async (e: unknown) => {
     await viewer;
     throw e;
   });
-  const { build, revision, reads } = await loadBuildToSolve({ id: (await params).id, viewer, number, ...solveReadKeys(curves) });
-  const { body, evaluateMs, serializeMs } = await solveRevisionJson({ build, revision, curves, reads });
+  const { build, revision, reads } = await loadBuildToSolve({ id: (await params).id, viewer, number, ...solveReadKeys(shape) });
+  const { body, evaluateMs, serializeMs } = await solveRevisionJson({ build, revision, shape, reads });
   const headers: Record<string, string> = { "content-type": "application/json" };
   // The handler's whole time, and of it the evaluation and its serialisation when they ran.
   const timing = [`handler;dur=${(performance.now() - t0).toFixed(2)}`];

@@ -1,3 +1,5 @@
+import { isTrace } from "@/lib/thermal/trace";
+
 /**
  * What a share link may show of an evaluation: the build's figures, and of its parts only
  * what is published (public parts). A part that is private, or someone else's shared part,
@@ -20,10 +22,6 @@ const WITHHELD = {
 
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 
-function isTrace(value: { [key: string]: Json }): boolean {
-  return "element" in value && "formula" in value && "inputs" in value && "result" in value && "source" in value;
-}
-
 /** Returns a copy of `value` (any JSON) with every mention of an unpublished part withheld. */
 export function withholdUnpublished<T>(value: T, hidden: readonly UnpublishedPart[]): T {
   const needles = hidden.flatMap((p) => [p.name, p.id]).filter((n) => n.trim().length > 0).sort((a, b) => b.length - a.length);
@@ -36,7 +34,7 @@ export function withholdUnpublished<T>(value: T, hidden: readonly UnpublishedPar
     if (Array.isArray(node)) return node.map(walk);
     if (node === null || typeof node !== "object") return node;
     if (isTrace(node) && mentions(JSON.stringify(node))) {
-      return { ...walk({ element: node.element ?? "", result: node.result ?? null }) as { [key: string]: Json }, ...WITHHELD, inputs: [], intermediates: [], notes: [], parts: [] };
+      return { ...(walk({ element: node.element, result: node.result as unknown as Json }) as { [key: string]: Json }), ...WITHHELD, inputs: [], intermediates: [], notes: [], parts: [] };
     }
     return Object.fromEntries(Object.entries(node).map(([k, v]) => [k, walk(v)]));
   };

@@ -63,11 +63,11 @@ export interface TraceRef {
   traceRef: number;
 }
 
-/** A trace, told by its shape (what every trace carries): a formula, inputs, a result and a source. */
+/** A trace, told by its shape (what every trace carries): an element, a formula, inputs, a result and a source. */
 export function isTrace(value: unknown): value is Trace {
   if (value === null || typeof value !== "object" || Array.isArray(value)) return false;
   const t = value as Partial<Record<keyof Trace, unknown>>;
-  return typeof t.formula === "string" && typeof t.source === "string" && Array.isArray(t.inputs) && t.result !== null && typeof t.result === "object";
+  return typeof t.element === "string" && typeof t.formula === "string" && typeof t.source === "string" && Array.isArray(t.inputs) && t.result !== null && typeof t.result === "object";
 }
 
 export function isTraceRef(value: unknown): value is TraceRef {

@@ -52,10 +52,10 @@ export function solveReadKeys(shape: SolveShape): { cacheKey: string; solverVers
 
 /**
  * A build the caller may see and one of its revisions; who is asking does not change the answer.
- * Every sample and every trace in place unless told. `reads`: the revision's solve reads under
- * `solveReadKeys(shape)`, when the caller read them with the build (else they are read here).
+ * `reads`: the revision's solve reads under `solveReadKeys(shape)`, when the caller read them
+ * with the build (else they are read here).
  */
-type SolveArgs = { build: LoadedBuild; revision: RevisionRow; shape?: SolveShape; reads?: SolveReads };
+type SolveArgs = { build: LoadedBuild; revision: RevisionRow; shape: SolveShape; reads?: SolveReads };
 
 type SolveHead = {
   buildId: string;
@@ -110,14 +110,15 @@ function roundNumber(v: number): number {
   return Number(v.toPrecision(7));
 }
 
-/** The traces taken out of a result, in the order their TraceRefs number them; a trace met twice is kept once. */
-type TracesApart = { list: unknown[]; index: Map<object, number> };
+/** The traces taken out of a result (as they are, not rounded), in the order their TraceRefs number them; a trace met twice is kept once. */
+type TracesApart = { list: Trace[]; index: Map<object, number> };
 
 /**
  * A rounded copy of a result for JSON.stringify: a replacer function takes the serialiser
  * off its fast path for every key, which cost more than the copy does. The copy (not the
  * result itself) is rounded because a miss also hands the unrounded evaluation back. With
- * `apart`, each trace is replaced by a TraceRef and its rounded copy goes to the list.
+ * `apart`, each trace is replaced by a TraceRef and goes to the list as it is (rounded when the
+ * list is sent: not on the way of the figures).
  */
 function roundedForDisplay(value: unknown, apart?: TracesApart): unknown {
   if (typeof value === "number") return roundNumber(value);
@@ -135,7 +136,7 @@ function roundedForDisplay(value: unknown, apart?: TracesApart): unknown {
   if (apart && isTrace(value)) {
     let traceRef = apart.index.get(value);
     if (traceRef === undefined) {
-      traceRef = apart.list.push(roundedForDisplay(value)) - 1;
+      traceRef = apart.list.push(value) - 1;
       apart.index.set(value, traceRef);
     }
     return { traceRef } satisfies TraceRef;
@@ -155,8 +156,8 @@ function roundedForDisplay(value: unknown, apart?: TracesApart): unknown {
  */
 function shapesOf(full: BuildEvaluation): (shape: SolveShape) => string {
   const curvesOf = (curves: Curves) => (curves === "chart" ? forCharts(full) : full);
-  const splits = new Map<Curves, { lean: unknown; traces: unknown[] }>();
-  const split = (curves: Curves) => {
+  const splits = new Map<Curves, { lean: unknown; traces: Trace[] }>();
+  const split = (curves: Curves): { lean: unknown; traces: Trace[] } => {
     let made = splits.get(curves);
     if (!made) {
       const taken: TracesApart = { list: [], index: new Map() };
@@ -165,7 +166,7 @@ function shapesOf(full: BuildEvaluation): (shape: SolveShape) => string {
     }
     return made;
   };
-  return ({ curves, traces }) => JSON.stringify(traces === "inline" ? roundedForDisplay(curvesOf(curves)) : traces === "only" ? split(curves).traces : split(curves).lean);
+  return ({ curves, traces }) => JSON.stringify(traces === "inline" ? roundedForDisplay(curvesOf(curves)) : traces === "only" ? roundedForDisplay(split(curves).traces) : split(curves).lean);
 }
 
 /**
@@ -184,7 +185,7 @@ function afterAnswer(work: () => Promise<void>): void {
   }
 }
 
-/** The solver version a cache key was written by ("<version>", "<version>:chart", or before snapshots "<version>:<parts fingerprint>"). */
+/** The solver version a cache key was written by (see `solveCacheKey`; before snapshots, "<version>:<parts fingerprint>"). */
 const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
 
 /** A cached result that holds an evaluation (every key but a list of traces). */
@@ -197,7 +198,7 @@ const holdsEvaluation = (key: string): boolean => !key.endsWith(":traces");
  * (the cache's keys and a hit, the parts snapshot, a recorded solver change) is read in one
  * round trip, the route's together with the build itself.
  */
-async function solveToJson({ build, revision, shape = WHOLE, reads }: SolveArgs): Promise<{ head: SolveHead; json: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
+async function solveToJson({ build, revision, shape, reads }: SolveArgs): Promise<{ head: SolveHead; json: string | Buffer; evaluation?: BuildEvaluation; evaluateMs?: number; serializeMs?: number }> {
   const base = { buildId: build.id, revision: revision.number, solverVersion: SOLVER_VERSION };
   const found = reads ?? (await getSolveReads({ revisionId: revision.id, ...solveReadKeys(shape) }));
   if (found.hit !== undefined) {
@@ -261,7 +262,7 @@ export async function solveRevision(args: Omit<SolveArgs, "shape">): Promise<Rev
  * long the evaluation itself and its serialisation (rounded) took when they ran (not on a
  * cache hit).
  */
-export async function solveRevisionJson(args: SolveArgs & { shape: SolveShape }): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
+export async function solveRevisionJson(args: SolveArgs): Promise<{ body: Uint8Array<ArrayBuffer>; evaluateMs?: number; serializeMs?: number }> {
   const r = await solveToJson(args);
   const head = `${JSON.stringify(r.head).slice(0, -1)},"${args.shape.traces === "only" ? "traces" : "evaluation"}":`;
   const body = typeof r.json === "string" ? Buffer.from(`${head}${r.json}}`) : Buffer.concat([Buffer.from(head), r.json, Buffer.from("}")]);

@@ -1,5 +1,5 @@
 import { beforeAll, describe, expect, it } from "vitest";
-import type { Trace } from "@/lib/thermal";
+import { isTrace, type Trace } from "@/lib/thermal";
 import { nodeBalanceTrace } from "@/lib/retrofit/derivations";
 import { Client, signedIn } from "../support/http";
 import { sourceProblem } from "../support/sources";
@@ -12,10 +12,6 @@ import { solvedWithTraces } from "../support/traces";
  * Never a file of this repository, a design document, or an algorithm's name on its own (a
  * search may name its method when the model it searches cites its sources link by link).
  */
-function isTrace(x: unknown): x is Trace {
-  return !!x && typeof x === "object" && "formula" in x && "result" in x && "source" in x;
-}
-
 /** Every trace anywhere in a JSON value (and the traces inside traces). */
 function collect(value: unknown, path: string, out: { path: string; trace: Trace }[]): void {
   if (Array.isArray(value)) value.forEach((v, i) => collect(v, `${path}[${i}]`, out));

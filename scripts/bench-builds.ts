@@ -1,10 +1,13 @@
 /**
  * Build solve benchmark: POST /api/v1/builds/[id]/solve on the seeded demo builds, served by
- * the production build against the bench database. "Cold" clears the solve cache before
- * each request (the whole evaluation runs: every mode's steady state, warm-up, inverse
- * problems, and charging); "cached" is the answer for an unchanged revision. The server
- * reports the evaluation's own time (Server-Timing: evaluate); the target is a cold median
- * of at most 2 × that evaluation time + 5 ms per demo build. Requests go over one kept-alive
+ * the production build against the bench database, asked as the Budget asks (the figures;
+ * their traces come apart). "Cold" solves a revision nothing has solved yet, as when a maker
+ * has just saved one (the whole evaluation runs: every mode's steady state, warm-up, inverse
+ * problems, and charging): each cold solve is of a fresh revision of a throwaway copy of the
+ * build, so the database is not busy deleting cached results meanwhile; "cached" is the answer
+ * for an unchanged revision. The server reports the evaluation's own time (Server-Timing:
+ * evaluate); the target is a cold median of at most 2 × that evaluation time + 5 ms per demo
+ * build. Requests go over one kept-alive
  * connection with Node's HTTP client (see `request`). Every demo build is solved cold once
  * before any is timed, so the first one timed does not pay for the server compiling the
  * route and the engine (which a server does once, not per request). Prints figures only.

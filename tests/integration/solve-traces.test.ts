@@ -3,8 +3,7 @@
 // answer the Budget waits for is a third of the size. These tests hold that nothing is lost on
 // the way: the figures and the traces joined again are the answer with every trace in place,
 // fresh or from the cache, and the traces are guarded like the figures.
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { pool } from "@/db/client";
+import { beforeAll, describe, expect, it } from "vitest";
 import { isTrace, isTraceRef } from "@/lib/thermal";
 import { withTestDb } from "../support/db";
 import { Client, signedIn } from "../support/http";
@@ -46,12 +45,6 @@ beforeAll(async () => {
   const b = await owner.post("/api/v1/builds", { title: "Traces-apart lantern", visibility: "private", design: retrofitDesign(ids, "strapped") });
   expect(b.status).toBe(201);
   buildId = (b.body.build as { id: string }).id;
-});
-
-afterAll(async () => {
-  await pool().end();
-  (globalThis as { sinkwisePool?: unknown; sinkwiseDb?: unknown }).sinkwisePool = undefined;
-  (globalThis as { sinkwisePool?: unknown; sinkwiseDb?: unknown }).sinkwiseDb = undefined;
 });
 
 describe("a solve's traces sent apart", () => {

@@ -14,8 +14,8 @@ export function joinTraces(value: unknown, traces: readonly unknown[]): unknown 
 }
 
 /** A revision's evaluation as the Budget reads it: the figures, then the traces they refer to, joined. */
-export async function solvedWithTraces(client: Client, buildId: string, body: Record<string, unknown> = {}): Promise<BuildEvaluation> {
-  const figures = await client.post(`/api/v1/builds/${buildId}/solve`, body);
+export async function solvedWithTraces(client: Client, buildId: string): Promise<BuildEvaluation> {
+  const figures = await client.post(`/api/v1/builds/${buildId}/solve`, {});
   if (figures.status !== 200) throw new Error(`solve → ${figures.status}`);
   const { revision, evaluation } = figures.body as unknown as { revision: number; evaluation: unknown };
   const listed = await client.post(`/api/v1/builds/${buildId}/solve`, { revision, traces: "only" });

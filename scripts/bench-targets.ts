@@ -16,8 +16,9 @@ export function target(what: string, value: number, limit: number, unit: string,
   const ok = compare === "<" ? value < limit : value <= limit;
   // A figure is never shown equal to a limit it fails (or to one it meets by a hair): more
   // digits until the two differ.
+  // (toFixed takes at most 100 digits; two different doubles differ well before that.)
   let shown = digits;
-  while (shown < digits + 3 && value !== limit && value.toFixed(shown) === limit.toFixed(shown)) shown++;
+  while (shown < 100 && value !== limit && value.toFixed(shown) === limit.toFixed(shown)) shown++;
   const r = { what, figure: `${value.toFixed(shown)} ${unit}`, limit: `${compare} ${limit.toFixed(shown)} ${unit}`, ok };
   results.push(r);
   return `${r.what}: ${r.figure} (target ${r.limit}): ${ok ? "ok" : "over"}`;

@@ -54,12 +54,11 @@ export function useSolve(buildId: string, revision?: number) {
   });
 }
 
-/** Every trace of a revision's result, in the order the answer's references number them; read once, when `enabled`. */
-export function useTraces(at: Omit<TraceAt, "index"> | undefined) {
+/** Every trace of a revision's result, in the order the answer's references number them; read once for the page. */
+export function useTraces({ buildId, revision }: Omit<TraceAt, "index">) {
   return useQuery({
-    queryKey: ["build", at?.buildId, "traces", at?.revision],
-    queryFn: async () => (await fetchJson<RevisionTraces>(`/api/v1/builds/${at!.buildId}/solve`, { method: "POST", body: { revision: at!.revision, traces: "only" } })).traces,
-    enabled: at !== undefined,
+    queryKey: ["build", buildId, "traces", revision],
+    queryFn: async () => (await fetchJson<RevisionTraces>(`/api/v1/builds/${buildId}/solve`, { method: "POST", body: { revision, traces: "only" } })).traces,
     staleTime: Infinity,
   });
 }

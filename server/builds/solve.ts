@@ -39,9 +39,12 @@ const WHOLE: SolveShape = { curves: "full", traces: "inline" };
  */
 const KEPT: readonly SolveShape[] = [{ curves: "chart", traces: "apart" }, { curves: "chart", traces: "only" }, WHOLE];
 
+/** How the cache key of a list of traces ends (a result that holds no evaluation). */
+const TRACES_KEY_END = ":traces";
+
 /** The cache key of a result of this shape ("<version>[:chart][:apart]", or "<version>:traces"). */
 function solveCacheKey({ curves, traces }: SolveShape): string {
-  if (traces === "only") return `${SOLVER_VERSION}:traces`;
+  if (traces === "only") return `${SOLVER_VERSION}${TRACES_KEY_END}`;
   return `${SOLVER_VERSION}${curves === "chart" ? ":chart" : ""}${traces === "apart" ? ":apart" : ""}`;
 }
 
@@ -189,7 +192,7 @@ function afterAnswer(work: () => Promise<void>): void {
 const versionOfKey = (key: string): string => key.split(":")[0] ?? key;
 
 /** A cached result that holds an evaluation (every key but a list of traces). */
-const holdsEvaluation = (key: string): boolean => !key.endsWith(":traces");
+const holdsEvaluation = (key: string): boolean => !key.endsWith(TRACES_KEY_END);
 
 /**
  * Evaluates a revision (the caller has checked that the viewer may see it), from the cache when
